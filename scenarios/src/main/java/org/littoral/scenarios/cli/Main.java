@@ -1,0 +1,60 @@
+package org.littoral.scenarios.cli;
+
+import java.util.concurrent.Callable;
+import org.littoral.scenarios.bench.BenchCommand;
+import org.littoral.scenarios.validate.ValidateCommand;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ScopeType;
+
+/** The {@code littoral} command line. */
+@Command(name = "littoral", mixinStandardHelpOptions = true, scope = ScopeType.INHERIT,
+        version = "littoral 0.1.0",
+        description = "Idealised coastal-circulation simulator for scenario comparison.%n"
+                + "Idealised model: not a forecast; never use its output for aviation, marine or public-safety decisions.",
+        subcommands = {
+            ValidateCommand.class,
+            BenchCommand.class,
+        })
+public final class Main implements Callable<Integer> {
+
+    @Option(names = "--debug", scope = ScopeType.INHERIT, description = "Print stack traces for errors.")
+    boolean debug;
+
+    @Override
+    public Integer call() {
+        new CommandLine(this).usage(System.out);
+        return 0;
+    }
+
+    /** Exit codes: 0 success, 1 a check or run failed, 2 bad input. */
+    public static int execute(String... args) {
+        Main main = new Main();
+        CommandLine cl = new CommandLine(main);
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            boolean dbg = parseResult.hasMatchedOption("--debug") || main.debug
+                    || java.util.Arrays.asList(args).contains("--debug");
+            if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
+                commandLine.getErr().println("littoral: error: " + ex.getMessage());
+                if (dbg) {
+                    ex.printStackTrace(commandLine.getErr());
+                }
+                return 2;
+            }
+            commandLine.getErr().println("littoral: failed: " + ex);
+            if (dbg) {
+                ex.printStackTrace(commandLine.getErr());
+            } else {
+                commandLine.getErr().println("(run again with --debug for the stack trace)");
+            }
+            return 1;
+        });
+        return cl.execute(args);
+    }
+
+    public static void main(String[] args) {
+        System.setProperty("java.awt.headless", "true");
+        System.exit(execute(args));
+    }
+}
