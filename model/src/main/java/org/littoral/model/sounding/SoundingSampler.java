@@ -1,0 +1,210 @@
+package org.littoral.model.sounding;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.field.Background;
+import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.Snapshot;
+import org.littoral.model.thermo.Thermo;
+
+/**
+ * Flies virtual drones through a {@link BreezeSolution}: at every launch of a {@link FlightSchedule}
+ * and every {@link VirtualSite}, one binned ascent as a {@link Profile}.
+ *
+ * <p>Sampling: fields are interpolated bilinearly in (x, z) and linearly in time between evaluation
+ * nodes spaced at most {@link SoundingSpec#maxNodeSpacingSec()} apart through each ascent (the bin at
+ * height z is taken at launch + z / ascent rate, see {@link SoundingSpec}). Pressure is the
+ * background hydrostatic pressure (log-linear in z) plus the interpolated perturbation; temperature
+ * follows from theta and p by Poisson's equation; winds go to earth components through {@link Coast}.
+ * All sites flown at the same launch share one evaluation of the solution per node.
+ */
+public final class SoundingSampler {
+    private final BreezeSolution solution;
+    private final Coast coast;
+    private final List<VirtualSite> sites;
+    private final FlightSchedule schedule;
+    private final SoundingSpec spec;
+
+    private final double[] xM;
+    private final double[] zM;
+    private final int nx;
+    private final int nz;
+    private final double[] binZ;
+    private final int[] binLevel;
+    private final double[] binLevelWeight;
+    private final double[] binBackgroundPressurePa;
+    private final int[] siteColumn;
+    private final double[] siteColumnWeight;
+
+    public SoundingSampler(BreezeSolution solution, Coast coast, List<VirtualSite> sites, FlightSchedule schedule,
+                           SoundingSpec spec) {
+        this.solution = solution;
+        this.coast = coast;
+        this.sites = List.copyOf(sites);
+        this.schedule = schedule;
+        this.spec = spec;
+        this.xM = solution.xM();
+        this.zM = solution.zM();
+        this.nx = xM.length;
+        this.nz = zM.length;
+        if (spec.ceilingM() > zM[nz - 1]) {
+            throw new IllegalArgumentException("altitude ceiling " + spec.ceilingM() + " m is above the model top "
+                    + zM[nz - 1] + " m; lower the ceiling or raise the grid top");
+        }
+        binZ = spec.binCentresM();
+        int nb = binZ.length;
+        binLevel = new int[nb];
+        binLevelWeight = new double[nb];
+        binBackgroundPressurePa = new double[nb];
+        Background bg = solution.background();
+        for (int b = 0; b < nb; b++) {
+            int k = bracket(zM, binZ[b]);
+            binLevel[b] = k;
+            binLevelWeight[b] = weight(zM, k, binZ[b]);
+            // hydrostatic pressure is close to exponential in z: interpolate its logarithm
+            double w = binLevelWeight[b];
+            binBackgroundPressurePa[b] = Math.exp((1 - w) * Math.log(bg.pressurePa()[k]) + w * Math.log(bg.pressurePa()[k + 1]));
+        }
+        siteColumn = new int[this.sites.size()];
+        siteColumnWeight = new double[this.sites.size()];
+        for (int s = 0; s < this.sites.size(); s++) {
+            VirtualSite site = this.sites.get(s);
+            double x = site.inlandDistanceM();
+            if (x < xM[0] || x > xM[nx - 1]) {
+                throw new IllegalArgumentException("site '" + site.name() + "' at " + x / 1000.0 + " km inland is outside the model domain "
+                        + xM[0] / 1000.0 + " to " + xM[nx - 1] / 1000.0 + " km; move the site or widen the domain");
+            }
+            siteColumn[s] = bracket(xM, x);
+            siteColumnWeight[s] = weight(xM, siteColumn[s], x);
+        }
+    }
+
+    /** Index k with a[k] &lt;= v &lt;= a[k+1], clamped to [0, n-2]. */
+    private static int bracket(double[] a, double v) {
+        int lo = 0;
+        int hi = a.length - 1;
+        if (v <= a[0]) {
+            return 0;
+        }
+        if (v >= a[hi]) {
+            return hi - 1;
+        }
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if (a[mid] <= v) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    /** Linear weight of a[k+1], clamped to [0, 1] (values below the first level take the first level). */
+    private static double weight(double[] a, int k, double v) {
+        double w = (v - a[k]) / (a[k + 1] - a[k]);
+        return Math.max(0.0, Math.min(1.0, w));
+    }
+
+    /** Model time (s of local solar time since solar midnight of day 0) of a local clock time on the spec's day. */
+    public double modelTimeSec(double clockHours) {
+        return coast.solarHoursFromClock(clockHours) * 3600.0 + spec.dayIndex() * 86400.0;
+    }
+
+    /** All profiles, ordered by launch time, then by site in the order given (allocates). */
+    public List<Profile> sampleAll() {
+        List<Double> launches = schedule.launchTimesClockHours();
+        List<Profile> out = new ArrayList<>(launches.size() * sites.size());
+        Random rng = spec.noise() == null ? null : new Random(spec.noise().seed());
+        double ascentSec = spec.ceilingM() / spec.ascentRateMPerS();
+        int nodes = Math.max(1, (int) Math.ceil(ascentSec / spec.maxNodeSpacingSec() - 1e-9));
+        double nodeStep = ascentSec / nodes;
+        int ns = sites.size();
+        // column values at each node and site, five variables: [node][site][var][level]
+        double[][][][] cols = new double[nodes + 1][ns][5][nz];
+        for (double clockH : launches) {
+            double t0 = modelTimeSec(clockH);
+            if (t0 < solution.startSec() - 1e-6 || t0 + ascentSec > solution.endSec() + 1e-6) {
+                throw new IllegalArgumentException("flight at " + clockH + " h local clock (model time " + t0
+                        + " s) is outside the solution's span " + solution.startSec() + " to " + solution.endSec()
+                        + " s; narrow the flight window or lengthen the run");
+            }
+            for (int j = 0; j <= nodes; j++) {
+                fillColumns(t0 + j * nodeStep, cols[j]);
+            }
+            for (int s = 0; s < ns; s++) {
+                out.add(buildProfile(sites.get(s).name(), clockH, cols, s, nodeStep, rng));
+            }
+        }
+        return out;
+    }
+
+    private void fillColumns(double t, double[][][] perSite) {
+        Snapshot snap = solution.snapshotAt(t);
+        for (int s = 0; s < siteColumn.length; s++) {
+            int i = siteColumn[s];
+            double w = siteColumnWeight[s];
+            double[][] c = perSite[s];
+            for (int k = 0; k < nz; k++) {
+                int a = k * nx + i;
+                c[0][k] = (1 - w) * snap.uMPerS()[a] + w * snap.uMPerS()[a + 1];
+                c[1][k] = (1 - w) * snap.vMPerS()[a] + w * snap.vMPerS()[a + 1];
+                c[2][k] = (1 - w) * snap.thetaK()[a] + w * snap.thetaK()[a + 1];
+                c[3][k] = (1 - w) * snap.mixingRatioKgPerKg()[a] + w * snap.mixingRatioKgPerKg()[a + 1];
+                c[4][k] = (1 - w) * snap.pressurePerturbationPa()[a] + w * snap.pressurePerturbationPa()[a + 1];
+            }
+        }
+    }
+
+    private Profile buildProfile(String site, double clockH, double[][][][] cols, int s, double nodeStep, Random rng) {
+        int nb = binZ.length;
+        int nodes = cols.length - 1;
+        double[] p = new double[nb];
+        double[] t = new double[nb];
+        double[] r = new double[nb];
+        double[] east = new double[nb];
+        double[] north = new double[nb];
+        double[] val = new double[5];
+        for (int b = 0; b < nb; b++) {
+            double sinceLaunch = binZ[b] / spec.ascentRateMPerS();
+            int j = Math.min(nodes - 1, (int) Math.floor(sinceLaunch / nodeStep));
+            double wt = Math.max(0.0, Math.min(1.0, sinceLaunch / nodeStep - j));
+            int k = binLevel[b];
+            double wz = binLevelWeight[b];
+            for (int v = 0; v < 5; v++) {
+                double[] a = cols[j][s][v];
+                double[] c = cols[j + 1][s][v];
+                double atJ = (1 - wz) * a[k] + wz * a[k + 1];
+                double atJ1 = (1 - wz) * c[k] + wz * c[k + 1];
+                val[v] = (1 - wt) * atJ + wt * atJ1;
+            }
+            p[b] = binBackgroundPressurePa[b] + val[4];
+            t[b] = Thermo.temperatureFromPotentialK(val[2], p[b]);
+            r[b] = val[3];
+            east[b] = coast.eastward(val[0], val[1]);
+            north[b] = coast.northward(val[0], val[1]);
+            if (rng != null) {
+                addNoise(b, p, t, r, east, north, rng);
+            }
+        }
+        return Profile.fromState(site, spec.dayLabel(), clockH, binZ.clone(), p, t, r, east, north);
+    }
+
+    /** Fixed draw order per bin (T, RH, p, east, north) keeps runs reproducible for a seed. */
+    private void addNoise(int b, double[] p, double[] t, double[] r, double[] east, double[] north, Random rng) {
+        InstrumentNoise n = spec.noise();
+        double rh = Thermo.relativeHumidity(r[b], t[b], p[b]);
+        t[b] += n.temperatureSigmaK() * rng.nextGaussian();
+        rh = Math.max(0.0, Math.min(1.0, rh + n.relativeHumiditySigma() * rng.nextGaussian()));
+        p[b] += n.pressureSigmaPa() * rng.nextGaussian();
+        east[b] += n.windComponentSigmaMPerS() * rng.nextGaussian();
+        north[b] += n.windComponentSigmaMPerS() * rng.nextGaussian();
+        r[b] = Thermo.mixingRatioFromRelativeHumidity(rh, t[b], p[b]);
+    }
+
+    public List<VirtualSite> sites() {
+        return sites;
+    }
+}
