@@ -29,6 +29,14 @@ public final class Thermo {
     private Thermo() {
     }
 
+    /**
+     * Latent heat of vaporisation at temperature T, J/kg: L_v = (2.501 - 0.00237 T_c) 1e6, T_c in deg C.
+     * Bolton (1980), eq. 2 (equation number from memory).
+     */
+    public static double latentHeatOfVaporisation(double temperatureK) {
+        return (2.501 - 0.00237 * (temperatureK - T0)) * 1e6;
+    }
+
     /** Saturation vapour pressure over water, Pa. Bolton (1980), eq. 10; 0.1% from -30 to 35 C. */
     public static double saturationVapourPressurePa(double temperatureK) {
         double tc = temperatureK - T0;
