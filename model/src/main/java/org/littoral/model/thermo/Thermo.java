@@ -5,8 +5,13 @@ package org.littoral.model.thermo;
  * at the edges of the application.
  *
  * <p>Sources: Bolton (1980), Mon. Wea. Rev. 108, 1046-1053 (saturation vapour pressure eq. 10,
- * dewpoint as its inverse, LCL temperature eq. 15/22, theta-e eq. 39); mixing ratio and virtual
+ * dewpoint as its inverse, LCL temperature eq. 15 from T and Td, eq. 21 from T and e, eq. 22 from T and
+ * RH, theta-e eqs. 39 and 43); mixing ratio and virtual
  * temperature as in Wallace &amp; Hobbs (2006), Atmospheric Science, ch. 3 (common practice).
+ *
+ * <p>Equation numbers of the LCL forms checked against a secondary source (NCAR Command Language
+ * documentation of its Bolton-based functions): the T, Td form is eq. 15; REFERENCES.md's "eq. 22"
+ * (marked from memory) is the T, RH form.
  */
 public final class Thermo {
     /** Gas constant of dry air, J/(kg K) (Bolton 1980 uses 287.04). */
@@ -107,6 +112,16 @@ public final class Thermo {
     /** Temperature at the lifting condensation level from T and Td. Bolton (1980), eq. 15. */
     public static double lclTemperatureK(double temperatureK, double dewpointK) {
         return 1.0 / (1.0 / (dewpointK - 56.0) + Math.log(temperatureK / dewpointK) / 800.0) + 56.0;
+    }
+
+    /** LCL temperature from T (K) and vapour pressure e: T_L = 2840 / (3.5 ln T - ln e - 4.805) + 55, e in hPa. Bolton (1980), eq. 21. */
+    public static double lclTemperatureFromVapourPressureK(double temperatureK, double vapourPressurePa) {
+        return 2840.0 / (3.5 * Math.log(temperatureK) - Math.log(vapourPressurePa / 100.0) - 4.805) + 55.0;
+    }
+
+    /** LCL temperature from T (K) and RH (fraction): T_L = 1 / (1/(T - 55) - ln(RH)/2840) + 55. Bolton (1980), eq. 22. */
+    public static double lclTemperatureFromRelativeHumidityK(double temperatureK, double rhFraction) {
+        return 1.0 / (1.0 / (temperatureK - 55.0) - Math.log(rhFraction) / 2840.0) + 55.0;
     }
 
     /**
