@@ -1,0 +1,353 @@
+package org.littoral.scenarios.scenario;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.coast.SurfaceMap;
+import org.littoral.model.coast.SurfaceSegment;
+import org.littoral.model.grid.HorizontalGrid;
+import org.littoral.model.grid.VerticalGrid;
+import org.littoral.model.linear.HeatingSpec;
+import org.littoral.model.sounding.FlightSchedule;
+import org.littoral.model.sounding.InstrumentNoise;
+import org.littoral.model.sounding.SoundingSpec;
+import org.littoral.model.sounding.VirtualSite;
+import org.littoral.model.surface.SolarGeometry;
+import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.cli.UserInputException;
+
+/**
+ * Reads a scenario file (YAML, or JSON when the name ends in .json), validates it against
+ * {@link ScenarioSchema} and the rules that tie keys together, and builds a {@link Scenario}.
+ * Every problem becomes a {@link UserInputException} with one line naming file:line:column, the key
+ * path, the value and the fix.
+ */
+public final class ScenarioFile {
+    private ScenarioFile() {
+    }
+
+    /** Reads and validates a file on disk. */
+    public static Scenario load(Path path) {
+        String text;
+        try {
+            text = Files.readString(path, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new UserInputException(path + ": no such scenario file; give a path to a .yaml/.json file or a built-in name ("
+                    + String.join(", ", BuiltinScenarios.names()) + ")");
+        } catch (IOException e) {
+            throw new UserInputException(path + ": cannot read the scenario file (" + e.getMessage() + "); check the path and permissions");
+        }
+        return parse(path.toString(), text, path.getFileName().toString().toLowerCase().endsWith(".json"));
+    }
+
+    /** Parses and validates scenario text; {@code displayName} is used in messages. */
+    public static Scenario parse(String displayName, String text, boolean json) {
+        JsonFactory factory = json ? new JsonFactory() : new YAMLFactory();
+        factory.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+        Map<String, JsonLocation> locations = new HashMap<>();
+        JsonNode tree;
+        try {
+            try (JsonParser p = factory.createParser(text)) {
+                if (p.nextToken() != null) {
+                    locate(p, "", locations);
+                }
+            }
+            tree = new ObjectMapper(factory).readTree(text);
+        } catch (JsonProcessingException e) {
+            JsonLocation loc = e.getLocation();
+            String where = loc == null ? displayName : displayName + ":" + loc.getLineNr() + ":" + loc.getColumnNr();
+            String msg = e.getOriginalMessage().lines().findFirst().orElse("syntax error").trim();
+            throw new UserInputException(where + ": " + (json ? "JSON" : "YAML") + " syntax error: " + msg
+                    + "; fix the file there (indent with spaces, 'key: value', lists with '- ')", e);
+        } catch (IOException e) {
+            throw new UserInputException(displayName + ": cannot read (" + e.getMessage() + ")", e);
+        }
+        if (tree == null || tree.isMissingNode() || tree.isNull()) {
+            throw new UserInputException(displayName + ": the scenario file is empty; start from a built-in one (littoral scenarios --show classic-45N)");
+        }
+        SchemaValidator v = new SchemaValidator(displayName, locations);
+        ObjectNode n = v.validate(ScenarioSchema.ROOT, tree);
+        fail(v.problems());
+        Builder b = new Builder(n, v);
+        Scenario s = b.build(displayName);
+        fail(b.problems);
+        return s;
+    }
+
+    private static void fail(List<String> problems) {
+        if (!problems.isEmpty()) {
+            String more = problems.size() > 1 ? " (and " + (problems.size() - 1) + " more problem" + (problems.size() > 2 ? "s" : "") + ")" : "";
+            throw new UserInputException(problems.get(0) + more);
+        }
+    }
+
+    /** Records where each value starts, keyed by the same paths the validator uses ("coast.latitude_deg", "sites[1].name"). */
+    private static void locate(JsonParser p, String path, Map<String, JsonLocation> out) throws IOException {
+        JsonToken t = p.currentToken();
+        out.put(path, p.currentTokenLocation());
+        if (t == JsonToken.START_OBJECT) {
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String key = p.currentName();
+                String child = path.isEmpty() ? key : path + "." + key;
+                out.put(child + SchemaValidator.KEY_SUFFIX, p.currentTokenLocation());
+                p.nextToken();
+                locate(p, child, out);
+            }
+        } else if (t == JsonToken.START_ARRAY) {
+            int k = 0;
+            while (p.nextToken() != JsonToken.END_ARRAY) {
+                locate(p, path + "[" + k + "]", out);
+                k++;
+            }
+        }
+    }
+
+    /** Turns the normalised tree into model types and applies the rules that tie keys together. */
+    private static final class Builder {
+        final ObjectNode n;
+        final SchemaValidator v;
+        final List<String> problems = new ArrayList<>();
+
+        Builder(ObjectNode n, SchemaValidator v) {
+            this.n = n;
+            this.v = v;
+        }
+
+        void problem(String path, String msg) {
+            problems.add(v.where(path) + msg);
+        }
+
+        double d(JsonNode o, String key) {
+            return o.get(key).doubleValue();
+        }
+
+        Double opt(JsonNode o, String key) {
+            JsonNode x = o.get(key);
+            return x == null ? null : x.doubleValue();
+        }
+
+        Scenario build(String source) {
+            JsonNode c = n.get("coast");
+            Coast coast = new Coast(d(c, "latitude_deg"), d(c, "longitude_deg"), d(c, "utc_offset_h"),
+                    d(c, "bearing_land_to_sea_deg"), c.get("day_of_year").intValue());
+
+            JsonNode g = n.get("grid");
+            int nx = g.get("points").intValue();
+            if (Integer.bitCount(nx) != 1) {
+                problem("grid.points", "grid.points = " + nx + " is not a power of two (the FFT needs one); use "
+                        + Integer.highestOneBit(nx) + " or " + Integer.highestOneBit(nx) * 2);
+            }
+            double dx = d(g, "spacing_km") * 1000.0;
+            HorizontalGrid xg = HorizontalGrid.centred(Math.max(nx, 4), dx);
+            int nz = g.get("levels").intValue();
+            double top = d(g, "top_m");
+            Double first = opt(g, "first_level_spacing_m");
+            VerticalGrid zg;
+            if (first != null && first * (nz - 1) > top) {
+                problem("grid.first_level_spacing_m", "grid.first_level_spacing_m = " + first + " is too large for " + nz
+                        + " levels up to " + top + " m; use at most top_m / (levels - 1) = " + top / (nz - 1) + " m");
+                zg = VerticalGrid.uniform(nz, top);
+            } else {
+                zg = first == null ? VerticalGrid.uniform(nz, top) : VerticalGrid.stretched(nz, top, first);
+            }
+
+            SurfaceMap surface = surface(n.get("surface"));
+
+            JsonNode a = n.get("atmosphere");
+            Scenario.Atmosphere atm = new Scenario.Atmosphere(d(a, "surface_theta_K"), d(a, "buoyancy_frequency_per_s"),
+                    d(a, "surface_mixing_ratio_g_per_kg") / 1000.0, d(a, "mixing_ratio_gradient_g_per_kg_per_km") / 1e6,
+                    d(a, "surface_pressure_hPa") * 100.0);
+
+            JsonNode w = n.get("ambient_wind");
+            double[] en = Coast.eastNorthFromDirection(d(w, "speed_m_per_s"), d(w, "from_deg"));
+            Scenario.AmbientWind wind = new Scenario.AmbientWind(d(w, "speed_m_per_s"), d(w, "from_deg"),
+                    clean(coast.crossShore(en[0], en[1])), clean(coast.alongshore(en[0], en[1])));
+
+            HeatingSpec heating = heating(n.get("heating"), coast, atm);
+
+            JsonNode ph = n.get("physics");
+            Double cooling = opt(ph, "cooling_per_s");
+            Scenario.Physics physics = new Scenario.Physics(d(ph, "friction_per_s"), cooling == null ? d(ph, "friction_per_s") : cooling,
+                    ph.get("hydrostatic").booleanValue(), ph.get("harmonics").intValue());
+
+            List<VirtualSite> sites = sites(n.get("sites"), xg);
+            Scenario.Flights flights = flights(n.get("flights"), top, n.get("name").asText());
+            Scenario.Output output = output(n.get("output"), top);
+            Scenario.Kind kind = n.get("kind").asText().equals("nonlinear") ? Scenario.Kind.NONLINEAR : Scenario.Kind.LINEAR;
+            return new Scenario(n.get("name").asText(), n.get("description").asText(), kind, source, coast, surface, xg, zg,
+                    atm, wind, heating, physics, sites, flights, output, n);
+        }
+
+        /** Components of exactly cross- or alongshore winds come out as 1e-16 from trigonometry: round them to 0. */
+        static double clean(double x) {
+            return Math.abs(x) < 1e-9 ? 0.0 : x;
+        }
+
+        SurfaceMap surface(JsonNode list) {
+            if (list == null) {
+                return SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1);
+            }
+            List<SurfaceSegment> segs = new ArrayList<>();
+            double from = Double.NEGATIVE_INFINITY;
+            boolean mainCoast = false;
+            for (int k = 0; k < list.size(); k++) {
+                JsonNode s = list.get(k);
+                String p = "surface[" + k + "]";
+                boolean last = k == list.size() - 1;
+                Double endKm = opt(s, "ends_at_km");
+                double to;
+                if (last) {
+                    if (endKm != null) {
+                        problem(p + ".ends_at_km", p + ".ends_at_km = " + endKm + ": the last segment extends inland without end; remove ends_at_km");
+                    }
+                    to = Double.POSITIVE_INFINITY;
+                } else if (endKm == null) {
+                    problem(p, "missing key '" + p + ".ends_at_km'; every segment but the last needs the cross-shore position (km) where it ends");
+                    return SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1);
+                } else {
+                    to = endKm * 1000.0;
+                }
+                if (!(to > from)) {
+                    problem(p + ".ends_at_km", p + ".ends_at_km = " + endKm + " does not lie beyond the previous segment's end ("
+                            + from / 1000.0 + " km); list segments from the sea inland with increasing ends_at_km");
+                    return SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1);
+                }
+                String name = s.get("name").asText();
+                SurfaceSegment seg = s.get("type").asText().equals("water")
+                        ? new SurfaceSegment.Water(name, from, to, d(s, "sst_K"), d(s, "roughness_m"))
+                        : new SurfaceSegment.Land(name, from, to, d(s, "albedo"), d(s, "bowen_ratio"), d(s, "roughness_m"),
+                                d(s, "soil_moisture_fraction"));
+                if (!segs.isEmpty() && from == 0.0 && seg.isLand() && !segs.get(segs.size() - 1).isLand()) {
+                    mainCoast = true;
+                }
+                segs.add(seg);
+                from = to;
+            }
+            if (!mainCoast) {
+                problem("surface", "surface: no water segment ends at 0 km followed by land; x = 0 is the main coastline, "
+                        + "so set ends_at_km: 0 on the water segment next to the mainland");
+            }
+            return new SurfaceMap(segs);
+        }
+
+        HeatingSpec heating(JsonNode h, Coast coast, Scenario.Atmosphere atm) {
+            if (h.get("shape").asText().equals("classic")) {
+                return new HeatingSpec.ClassicShape(d(h, "amplitude_K_per_h") / 3600.0, d(h, "half_width_km") * 1000.0,
+                        d(h, "depth_m"), d(h, "sunrise_solar_h"));
+            }
+            double decl = SolarGeometry.declinationRad(coast.dayOfYear());
+            double[] sun = {SolarGeometry.sunriseSolarHours(coast.latitudeDeg(), decl), SolarGeometry.sunsetSolarHours(coast.latitudeDeg(), decl)};
+            Double rise = opt(h, "sunrise_solar_h");
+            Double set = opt(h, "sunset_solar_h");
+            double sunrise = rise != null ? rise : sun[0];
+            double sunset = set != null ? set : sun[1];
+            if (!(sunset > sunrise)) {
+                problem(set != null ? "heating.sunset_solar_h" : "heating", "heating: sunset (" + sunset + " h solar) is not after sunrise ("
+                        + sunrise + " h solar)" + (rise == null && set == null ? " at this latitude and day (polar night)" : "")
+                        + "; give heating.sunrise_solar_h and heating.sunset_solar_h with sunset later");
+            }
+            Double lapse = opt(h, "lapse_above_K_per_km");
+            // N^2 = (g / theta) d(theta)/dz, so d(theta)/dz = N^2 theta / g
+            double gamma = lapse != null ? lapse / 1000.0
+                    : atm.buoyancyFrequencyPerS() * atm.buoyancyFrequencyPerS() * atm.surfaceThetaK() / Thermo.G;
+            return new HeatingSpec.SlabMixedLayer(d(h, "peak_flux_difference_W_per_m2"), sunrise, sunset, gamma,
+                    d(h, "entrainment_ratio"), d(h, "initial_depth_m"), d(h, "transition_half_width_km") * 1000.0);
+        }
+
+        List<VirtualSite> sites(JsonNode list, HorizontalGrid xg) {
+            List<VirtualSite> out = new ArrayList<>();
+            Set<String> names = new HashSet<>();
+            for (int k = 0; k < list.size(); k++) {
+                JsonNode s = list.get(k);
+                String p = "sites[" + k + "]";
+                String name = s.get("name").asText();
+                if (!names.add(name)) {
+                    problem(p + ".name", p + ".name = '" + name + "' is used twice; give each site its own name");
+                }
+                double km = d(s, "inland_km");
+                double lo = xg.xM(0) / 1000.0;
+                double hi = xg.lastM() / 1000.0;
+                if (km < lo || km > hi) {
+                    problem(p + ".inland_km", p + ".inland_km = " + Schema.fmt(km) + " (site '" + name + "') is outside the model domain "
+                            + Schema.fmt(lo) + " to " + Schema.fmt(hi) + " km; move the site or widen the domain (grid.points x grid.spacing_km)");
+                }
+                out.add(new VirtualSite(name, km * 1000.0));
+            }
+            return out;
+        }
+
+        Scenario.Flights flights(JsonNode f, double top, String day) {
+            double start = d(f, "start_h");
+            double end = d(f, "end_h");
+            if (end < start) {
+                problem("flights.end_h", "flights.end_h = " + Schema.fmt(end) + " is before flights.start_h = " + Schema.fmt(start) + "; swap them");
+                end = start;
+            }
+            Double dc = opt(f, "dense_cadence_min");
+            Double ds = opt(f, "dense_start_h");
+            Double de = opt(f, "dense_end_h");
+            FlightSchedule sch;
+            if (dc == null && ds == null && de == null) {
+                sch = FlightSchedule.regular(d(f, "cadence_min"), start, end);
+            } else if (dc == null || ds == null || de == null) {
+                problem("flights", "flights: a dense window needs all three of dense_cadence_min, dense_start_h and dense_end_h; add the missing ones or remove them all");
+                sch = FlightSchedule.regular(d(f, "cadence_min"), start, end);
+            } else if (de < ds) {
+                problem("flights.dense_end_h", "flights.dense_end_h = " + Schema.fmt(de) + " is before flights.dense_start_h = " + Schema.fmt(ds) + "; swap them");
+                sch = FlightSchedule.regular(d(f, "cadence_min"), start, end);
+            } else {
+                sch = new FlightSchedule(d(f, "cadence_min"), start, end, dc, ds, de);
+            }
+            double ceiling = d(f, "ceiling_m");
+            if (ceiling > top) {
+                problem("flights.ceiling_m", "flights.ceiling_m = " + Schema.fmt(ceiling) + " is above the model top grid.top_m = "
+                        + Schema.fmt(top) + " m; lower the ceiling or raise the top");
+                ceiling = top;
+            }
+            double bin = d(f, "bin_m");
+            if (bin > ceiling) {
+                problem("flights.bin_m", "flights.bin_m = " + Schema.fmt(bin) + " is thicker than the whole ascent (ceiling "
+                        + Schema.fmt(ceiling) + " m); use a bin of a few metres");
+                bin = ceiling;
+            }
+            JsonNode nz = f.get("noise");
+            InstrumentNoise noise = nz == null ? null : new InstrumentNoise(nz.get("seed").longValue(), d(nz, "temperature_sigma_K"),
+                    d(nz, "rh_sigma_percent") / 100.0, d(nz, "pressure_sigma_hPa") * 100.0, d(nz, "wind_sigma_m_per_s"));
+            SoundingSpec spec = new SoundingSpec(ceiling, bin, d(f, "ascent_rate_m_per_s"), SoundingSpec.DEFAULT_NODE_SPACING_SEC,
+                    noise, day, 0);
+            return new Scenario.Flights(sch, spec);
+        }
+
+        Scenario.Output output(JsonNode o, double top) {
+            double start = d(o, "start_h");
+            double end = d(o, "end_h");
+            if (!(end > start)) {
+                problem("output.end_h", "output.end_h = " + Schema.fmt(end) + " is not after output.start_h = " + Schema.fmt(start) + "; make the output span positive");
+                end = start + 1;
+            }
+            double zs = d(o, "near_surface_m");
+            if (zs > top) {
+                problem("output.near_surface_m", "output.near_surface_m = " + Schema.fmt(zs) + " is above the model top " + Schema.fmt(top) + " m");
+            }
+            return new Scenario.Output(start, end, d(o, "step_min"), zs, d(o, "onshore_threshold_m_per_s"));
+        }
+    }
+}
