@@ -1,0 +1,242 @@
+package org.littoral.scenarios.sweep;
+
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Function;
+import me.tongfei.progressbar.ProgressBar;
+import me.tongfei.progressbar.ProgressBarBuilder;
+import org.littoral.scenarios.cli.UserInputException;
+
+/**
+ * Runs the members of a sweep on a fixed pool of threads and writes each result the moment it finishes (see
+ * {@link MemberStore}). A member that fails (model blow-up, bad value) gets a "failed" record with the reason
+ * and the sweep goes on. With {@code resume}, members whose record exists and was computed from the same
+ * inputs (hash of the resolved scenario document) are skipped; a record from different inputs stops the run.
+ */
+public final class SweepExecutor {
+
+    /**
+     * @param threads worker threads (at least 1)
+     * @param resume skip members that already have a valid result
+     * @param log where progress lines and notes go (stderr for the command line)
+     * @param progressBar draw a progress bar (only sensible on a terminal); otherwise a line every
+     *                    {@code throttleMillis} at most
+     * @param throttleMillis minimum interval between plain progress lines
+     */
+    public record Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis) {
+        public Options {
+            if (threads < 1) {
+                throw new UserInputException("--threads must be at least 1; got " + threads);
+            }
+        }
+
+        /** Terminal-aware defaults: a bar when there is a console, else a line at most every 15 s. */
+        public static Options forCommandLine(int threads, boolean resume) {
+            return new Options(threads, resume, System.err, System.console() != null, 15_000);
+        }
+    }
+
+    /** What the run did. */
+    public record Outcome(int members, int ran, int skipped, int failed, double wallSeconds) {
+    }
+
+    private SweepExecutor() {
+    }
+
+    public static Outcome run(SweepSpec spec, List<Member> members, Path outDir,
+                              Function<Member, MemberResult> runner, Options opt) {
+        long t0 = System.nanoTime();
+        MemberStore store = new MemberStore(outDir);
+        store.create();
+        int temps = store.deleteLeftoverTemps();
+        if (temps > 0) {
+            opt.log().println("sweep: removed " + temps + " incomplete temporary file(s) left by an interrupted run");
+        }
+        List<Member> todo = plan(spec, members, outDir, store, opt);
+        int skipped = members.size() - todo.size();
+        if (skipped > 0) {
+            opt.log().println("sweep: resuming: " + skipped + " of " + members.size() + " members already done");
+        }
+        writeManifest(spec, members, outDir);
+
+        AtomicInteger failed = new AtomicInteger();
+        AtomicInteger done = new AtomicInteger();
+        int threads = Math.min(opt.threads(), Math.max(1, todo.size()));
+        ExecutorService pool = Executors.newFixedThreadPool(threads, daemonThreads());
+        ProgressBar bar = opt.progressBar() && !todo.isEmpty()
+                ? new ProgressBarBuilder().setTaskName("sweep " + spec.name()).setInitialMax(todo.size()).build() : null;
+        long[] lastLine = {System.nanoTime()};
+        try {
+            List<Future<?>> futures = new ArrayList<>(todo.size());
+            for (Member m : todo) {
+                futures.add(pool.submit(() -> {
+                    ObjectNode rec = runOne(spec, m, runner);
+                    if (MemberStore.STATUS_FAILED.equals(rec.path("status").asText())) {
+                        failed.incrementAndGet();
+                        if (bar == null) {
+                            opt.log().println("sweep: member " + m.id() + " (" + m.describe() + ") failed: " + rec.path("error").asText());
+                        }
+                    }
+                    try {
+                        store.write(m.id(), rec);
+                    } catch (IOException e) {
+                        throw new UncheckedIOException("cannot write the result of member " + m.id() + " to "
+                                + store.fileOf(m.id()), e);
+                    }
+                    int d = done.incrementAndGet();
+                    if (bar != null) {
+                        bar.step();
+                    } else {
+                        progressLine(opt, lastLine, d, todo.size(), failed.get());
+                    }
+                    return null;
+                }));
+            }
+            for (Future<?> f : futures) {
+                try {
+                    f.get();
+                } catch (ExecutionException e) {
+                    Throwable c = e.getCause();
+                    if (c instanceof RuntimeException re) {
+                        throw re;
+                    }
+                    throw new IllegalStateException(c);
+                }
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("sweep interrupted; finished members are kept, run again with --resume", e);
+        } finally {
+            pool.shutdownNow();
+            if (bar != null) {
+                bar.close();
+            }
+        }
+        double wall = (System.nanoTime() - t0) * 1e-9;
+        opt.log().printf(java.util.Locale.ROOT, "sweep: %d members: %d run, %d already done, %d failed; %.1f s on %d thread(s)%n",
+                members.size(), todo.size(), skipped, failed.get(), wall, threads);
+        return new Outcome(members.size(), todo.size(), skipped, failed.get(), wall);
+    }
+
+    /** Runs one member, turning any failure of the member itself into a "failed" record. */
+    static ObjectNode runOne(SweepSpec spec, Member m, Function<Member, MemberResult> runner) {
+        String error;
+        try {
+            MemberResult r = runner.apply(m);
+            return MemberStore.record(spec.name(), m, r == null ? null : r.summary(), null);
+        } catch (UserInputException | IllegalArgumentException e) {
+            error = firstLine(e.getMessage());
+        } catch (RuntimeException e) {
+            error = e.getClass().getSimpleName() + ": " + firstLine(e.getMessage());
+        } catch (StackOverflowError | OutOfMemoryError e) {
+            error = e.getClass().getSimpleName() + " while running this member";
+        }
+        return MemberStore.record(spec.name(), m, null, error);
+    }
+
+    private static String firstLine(String s) {
+        return s == null ? "(no message)" : s.lines().findFirst().orElse("");
+    }
+
+    /** Which members still need running; refuses to mix results from other inputs. */
+    private static List<Member> plan(SweepSpec spec, List<Member> members, Path outDir, MemberStore store, Options opt) {
+        Set<String> ids = new HashSet<>();
+        for (Member m : members) {
+            ids.add(m.id());
+        }
+        List<String> present = store.presentIds();
+        if (!present.isEmpty() && !opt.resume()) {
+            throw new UserInputException(outDir + " already holds " + present.size() + " member result(s); add --resume"
+                    + " to continue that sweep, or choose another --out folder");
+        }
+        for (String id : present) {
+            if (!ids.contains(id)) {
+                throw new UserInputException("--resume: " + store.fileOf(id) + " is not a member of sweep " + spec.source()
+                        + " (it has " + members.size() + " members); the sweep file changed since that run: use another --out"
+                        + " folder or delete " + store.folder());
+            }
+        }
+        List<Member> todo = new ArrayList<>();
+        for (Member m : members) {
+            switch (store.check(m)) {
+                case VALID -> { }
+                case ABSENT -> todo.add(m);
+                case UNREADABLE -> {
+                    opt.log().println("sweep: " + store.fileOf(m.id()) + " is unreadable; running member " + m.id() + " again");
+                    todo.add(m);
+                }
+                case OTHER_INPUTS -> throw new UserInputException("--resume: " + store.fileOf(m.id())
+                        + " was computed from other inputs than sweep " + spec.source() + " now gives member " + m.id()
+                        + " (" + m.describe() + "); the sweep or base scenario changed since that run: use another --out"
+                        + " folder or delete " + store.folder());
+                default -> throw new IllegalStateException();
+            }
+        }
+        return todo;
+    }
+
+    /** {@code sweep.json}: what the sweep is, so the folder explains itself. Same content on every run. */
+    private static void writeManifest(SweepSpec spec, List<Member> members, Path outDir) {
+        ObjectNode m = JsonNodeFactory.instance.objectNode();
+        m.put("sweep", spec.name());
+        m.put("description", spec.description());
+        m.put("base", spec.baseLabel());
+        m.put("mode", spec.zip() ? "zip" : "cartesian");
+        m.put("members", members.size());
+        var axes = m.putArray("axes");
+        for (Axis a : spec.axes()) {
+            var o = axes.addObject();
+            o.put("key", a.path().toString());
+            var labels = o.putArray("values");
+            a.values().forEach(v -> labels.add(v.label()));
+        }
+        if (spec.ensemble() != null) {
+            var e = m.putObject("ensemble");
+            e.put("members", spec.ensemble().members());
+            e.put("seed", spec.ensemble().seed());
+            var d = e.putArray("draws");
+            spec.ensemble().draws().forEach(x -> d.add(x.path().toString()));
+        }
+        try {
+            MemberStore.writeAtomically(outDir.resolve("sweep.json"), CanonicalJson.prettyBytes(m));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + outDir.resolve("sweep.json"), e);
+        }
+    }
+
+    private static void progressLine(Options opt, long[] last, int done, int total, int failed) {
+        long now = System.nanoTime();
+        synchronized (last) {
+            if (done < total && (now - last[0]) < opt.throttleMillis() * 1_000_000L) {
+                return;
+            }
+            last[0] = now;
+        }
+        if (done < total) {
+            opt.log().printf("sweep: %d/%d members done%s%n", done, total, failed > 0 ? " (" + failed + " failed)" : "");
+        }
+    }
+
+    private static ThreadFactory daemonThreads() {
+        AtomicInteger n = new AtomicInteger();
+        return r -> {
+            Thread t = new Thread(r, "sweep-" + n.incrementAndGet());
+            t.setDaemon(true);
+            return t;
+        };
+    }
+}

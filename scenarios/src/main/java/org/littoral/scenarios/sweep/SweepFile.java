@@ -1,0 +1,519 @@
+package org.littoral.scenarios.sweep;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.DoubleNode;
+import com.fasterxml.jackson.databind.node.LongNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.InputStream;
+import java.math.BigDecimal;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.apache.commons.math3.special.Erf;
+import org.littoral.scenarios.cli.UserInputException;
+
+/**
+ * Reads sweep files (YAML or JSON; the schema is in {@code docs/sweeps.md}). Every problem is a
+ * {@link UserInputException} with one line naming the file, the key path, the value and the allowed values.
+ */
+public final class SweepFile {
+
+    /** Built-in sweep files live here as {@code <name>.yaml}. */
+    public static final String BUILTIN_FOLDER = "/org/littoral/scenarios/builtin/sweeps/";
+    /** Built-in sweeps shipped with littoral. */
+    public static final List<String> BUILTINS = List.of("ambient-flow", "ambient-ensemble");
+
+    private static final Set<String> TOP_KEYS = Set.of("name", "description", "base", "set", "mode", "axes",
+            "ensemble", "breeze_typing");
+    private static final int MAX_AXIS_VALUES = 10_000;
+    private static final int MAX_MEMBERS = 100_000;
+
+    private final String source;
+    private final ObjectNode root;
+    private final Path folder;
+    private final ScenarioSource scenarios;
+    private final String defaultName;
+
+    private SweepFile(String source, ObjectNode root, Path folder, ScenarioSource scenarios, String defaultName) {
+        this.source = source;
+        this.root = root;
+        this.folder = folder;
+        this.scenarios = scenarios;
+        this.defaultName = defaultName;
+    }
+
+    /** A sweep file path, or the name of a built-in sweep. */
+    public static SweepSpec load(String ref, ScenarioSource scenarios) {
+        Path p = Path.of(ref);
+        if (Files.isRegularFile(p)) {
+            return read(p, scenarios);
+        }
+        if (BUILTINS.contains(ref)) {
+            return readBuiltin(ref, scenarios);
+        }
+        throw new UserInputException("sweep '" + ref + "' is neither a file nor a built-in sweep; give a path to a"
+                + " sweep file or one of " + BUILTINS);
+    }
+
+    public static SweepSpec read(Path file, ScenarioSource scenarios) {
+        ObjectNode root;
+        try {
+            root = ScenarioSource.readDocument(file);
+        } catch (UserInputException e) {
+            throw new UserInputException("sweep file " + e.getMessage(), e);
+        }
+        String fn = file.getFileName().toString();
+        int dot = fn.lastIndexOf('.');
+        Path parent = file.toAbsolutePath().getParent();
+        return new SweepFile(file.toString(), root, parent, scenarios, dot > 0 ? fn.substring(0, dot) : fn).parse();
+    }
+
+    public static SweepSpec readBuiltin(String name, ScenarioSource scenarios) {
+        String res = BUILTIN_FOLDER + name + ".yaml";
+        try (InputStream in = SweepFile.class.getResourceAsStream(res)) {
+            if (in == null) {
+                throw new UserInputException("no built-in sweep '" + name + "'; choose one of " + BUILTINS);
+            }
+            JsonNode n = ScenarioSource.yaml().readTree(in);
+            return parse("built-in sweep " + name, (ObjectNode) n, null, scenarios, name);
+        } catch (IOException e) {
+            throw new UserInputException("built-in sweep '" + name + "' cannot be read: " + e.getMessage(), e);
+        }
+    }
+
+    /** Parses an already-read tree (tests, inline use). */
+    public static SweepSpec parse(String source, ObjectNode root, Path folder, ScenarioSource scenarios, String defaultName) {
+        return new SweepFile(source, root, folder, scenarios, defaultName).parse();
+    }
+
+    private UserInputException err(String keyPath, String problem) {
+        return new UserInputException("sweep file " + source + ": " + keyPath + ": " + problem);
+    }
+
+    private SweepSpec parse() {
+        for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
+            String k = it.next();
+            if (!TOP_KEYS.contains(k)) {
+                throw err(k, "unknown key; allowed keys are " + sorted(TOP_KEYS));
+            }
+        }
+        String name = root.has("name") ? text("name", root.get("name")) : defaultName;
+        if (!name.matches("[A-Za-z0-9._-]+")) {
+            throw err("name", "'" + name + "' must use only letters, digits, '.', '_' and '-'");
+        }
+        String description = root.has("description") ? text("description", root.get("description")) : "";
+
+        JsonNode baseNode = root.get("base");
+        if (baseNode == null) {
+            throw err("base", "missing; give the base scenario as a built-in name, a path, or an inline scenario");
+        }
+        String baseLabel;
+        ObjectNode base;
+        if (baseNode.isTextual()) {
+            baseLabel = baseNode.asText();
+            try {
+                base = scenarios.load(baseLabel, folder);
+            } catch (UserInputException e) {
+                throw err("base", e.getMessage());
+            }
+        } else if (baseNode.isObject()) {
+            baseLabel = "(inline)";
+            base = (ObjectNode) baseNode;
+        } else {
+            throw err("base", "value " + baseNode + " is neither a scenario name or path nor an inline scenario");
+        }
+
+        List<SweepSpec.Setting> fixed = new ArrayList<>();
+        Set<String> used = new HashSet<>();
+        JsonNode set = root.get("set");
+        if (set != null) {
+            requireObject("set", set);
+            for (Iterator<Map.Entry<String, JsonNode>> it = set.fields(); it.hasNext(); ) {
+                Map.Entry<String, JsonNode> e = it.next();
+                String where = "set." + e.getKey();
+                KeyPath p = path(where, e.getKey(), base);
+                checkValue(where, p, base, e.getValue());
+                fixed.add(new SweepSpec.Setting(p, AxisValue.of(e.getValue())));
+                used.add(p.toString());
+            }
+        }
+
+        boolean zip = false;
+        if (root.has("mode")) {
+            String m = text("mode", root.get("mode"));
+            if (m.equals("zip")) {
+                zip = true;
+            } else if (!m.equals("cartesian")) {
+                throw err("mode", "value '" + m + "' is not allowed; use 'cartesian' (every combination) or 'zip'"
+                        + " (axes advance together)");
+            }
+        }
+
+        List<Axis> axes = new ArrayList<>();
+        JsonNode axesNode = root.get("axes");
+        if (axesNode != null) {
+            requireObject("axes", axesNode);
+            for (Iterator<Map.Entry<String, JsonNode>> it = axesNode.fields(); it.hasNext(); ) {
+                Map.Entry<String, JsonNode> e = it.next();
+                String where = "axes." + e.getKey();
+                KeyPath p = path(where, e.getKey(), base);
+                if (!used.add(p.toString())) {
+                    throw err(where, "key path is already set elsewhere in this sweep file; set each key once");
+                }
+                axes.add(new Axis(p, axisValues(where, p, base, e.getValue())));
+            }
+        }
+        if (zip) {
+            for (Axis a : axes) {
+                if (a.values().size() != axes.get(0).values().size()) {
+                    throw err("axes." + a.path(), "has " + a.values().size() + " values but axes." + axes.get(0).path()
+                            + " has " + axes.get(0).values().size() + "; in zip mode every axis needs the same number of values");
+                }
+            }
+        }
+
+        SweepSpec.Ensemble ensemble = null;
+        JsonNode ens = root.get("ensemble");
+        if (ens != null) {
+            ensemble = ensemble(ens, base, used);
+        }
+        if (axes.isEmpty() && ensemble == null) {
+            throw err("axes", "missing; a sweep needs at least one axis or an ensemble");
+        }
+        SweepSpec.Typing typing = typing(root.get("breeze_typing"));
+        SweepSpec spec = new SweepSpec(source, name, description, baseLabel, base, fixed, zip, axes, ensemble, typing);
+        long total = (long) spec.axisPoints() * (ensemble == null ? 1 : ensemble.members());
+        if (total > MAX_MEMBERS) {
+            throw err(ensemble == null ? "axes" : "ensemble.members", "the sweep would have " + total
+                    + " members; the limit is " + MAX_MEMBERS + ", split it into several sweeps");
+        }
+        return spec;
+    }
+
+    private KeyPath path(String where, String text, JsonNode base) {
+        KeyPath p;
+        try {
+            p = KeyPath.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw err(where, e.getMessage());
+        }
+        try {
+            p.get(base);
+        } catch (IllegalArgumentException e) {
+            throw err(where, "not in the base scenario: " + e.getMessage()
+                    + " (check the spelling, or set the key in the base scenario first)");
+        }
+        return p;
+    }
+
+    private List<AxisValue> axisValues(String where, KeyPath p, JsonNode base, JsonNode spec) {
+        List<AxisValue> out = new ArrayList<>();
+        if (spec.isArray()) {
+            if (spec.isEmpty()) {
+                throw err(where, "empty list; give at least one value");
+            }
+            int i = 0;
+            for (JsonNode v : spec) {
+                checkValue(where + "[" + i++ + "]", p, base, v);
+                if (v.isContainerNode()) {
+                    throw err(where, "a list of values must hold numbers, names or true/false; for whole sub-documents"
+                            + " (e.g. coast layouts) use {choices: {label: value, ...}}");
+                }
+                out.add(AxisValue.of(v));
+            }
+        } else if (spec.isObject() && spec.has("choices")) {
+            onlyKeys(where, spec, Set.of("choices"));
+            JsonNode ch = spec.get("choices");
+            requireObject(where + ".choices", ch);
+            if (ch.isEmpty()) {
+                throw err(where + ".choices", "empty; give at least one labelled value");
+            }
+            for (Iterator<Map.Entry<String, JsonNode>> it = ch.fields(); it.hasNext(); ) {
+                Map.Entry<String, JsonNode> e = it.next();
+                checkValue(where + ".choices." + e.getKey(), p, base, e.getValue());
+                out.add(new AxisValue(e.getKey(), e.getValue()));
+            }
+        } else if (spec.isObject() && spec.has("from")) {
+            onlyKeys(where, spec, Set.of("from", "to", "step"));
+            double from = number(where + ".from", spec.get("from"));
+            double to = number(where + ".to", spec.get("to"));
+            double step = number(where + ".step", spec.get("step"));
+            if (!(step > 0)) {
+                throw err(where + ".step", "value " + spec.get("step") + " must be > 0");
+            }
+            if (to < from) {
+                throw err(where + ".to", "value " + spec.get("to") + " is below from = " + spec.get("from")
+                        + "; a range runs upward from 'from' to 'to'");
+            }
+            BigDecimal f = new BigDecimal(spec.get("from").asText());
+            BigDecimal s = new BigDecimal(spec.get("step").asText());
+            long n = (long) Math.floor((to - from) / step + 1e-9) + 1;
+            if (n > MAX_AXIS_VALUES) {
+                throw err(where, "range gives " + n + " values; the limit is " + MAX_AXIS_VALUES + ", use a larger step");
+            }
+            boolean integral = spec.get("from").isIntegralNumber() && spec.get("step").isIntegralNumber();
+            for (long i = 0; i < n; i++) {
+                BigDecimal v = f.add(s.multiply(BigDecimal.valueOf(i))); // exact decimal steps: 0.1 + 2*0.1 is 0.3
+                JsonNode node = integral ? LongNode.valueOf(v.longValueExact()) : DoubleNode.valueOf(v.doubleValue());
+                checkValue(where + " (value " + node + " of the range)", p, base, node);
+                out.add(AxisValue.of(node));
+            }
+        } else {
+            throw err(where, "value " + spec + " is not a list of values, a range {from, to, step}, or"
+                    + " {choices: {label: value, ...}}");
+        }
+        return out;
+    }
+
+    private SweepSpec.Ensemble ensemble(JsonNode ens, JsonNode base, Set<String> used) {
+        requireObject("ensemble", ens);
+        onlyKeys("ensemble", ens, Set.of("members", "seed", "draws"));
+        JsonNode m = ens.get("members");
+        if (m == null || !m.canConvertToInt() || !m.isIntegralNumber() || m.asInt() < 1 || m.asInt() > MAX_MEMBERS) {
+            throw err("ensemble.members", "value " + m + " must be a whole number in 1.." + MAX_MEMBERS);
+        }
+        JsonNode s = ens.get("seed");
+        if (s == null || !s.isIntegralNumber() || !s.canConvertToLong()) {
+            throw err("ensemble.seed", "value " + s + " must be a whole number (the same seed draws the same members)");
+        }
+        JsonNode draws = ens.get("draws");
+        if (draws == null || !draws.isObject() || draws.isEmpty()) {
+            throw err("ensemble.draws", "missing or empty; give key paths with a distribution each, e.g."
+                    + " ambient_wind.speed_m_per_s: {uniform: {from: 0, to: 8}}");
+        }
+        List<SweepSpec.Draw> out = new ArrayList<>();
+        for (Iterator<Map.Entry<String, JsonNode>> it = draws.fields(); it.hasNext(); ) {
+            Map.Entry<String, JsonNode> e = it.next();
+            String where = "ensemble.draws." + e.getKey();
+            KeyPath p = path(where, e.getKey(), base);
+            if (!used.add(p.toString())) {
+                throw err(where, "key path is already set elsewhere in this sweep file; set each key once");
+            }
+            out.add(new SweepSpec.Draw(p, distribution(where, p, base, e.getValue())));
+        }
+        return new SweepSpec.Ensemble(m.asInt(), s.asLong(), out);
+    }
+
+    private Distribution distribution(String where, KeyPath p, JsonNode base, JsonNode d) {
+        if (!d.isObject() || d.size() < 1) {
+            throw err(where, "value " + d + " is not a distribution; use {uniform: {from, to}}, {normal: {mean, sd, min,"
+                    + " max}} or {choice: [...]}");
+        }
+        KeyRanges.Range range = KeyRanges.forPath(p);
+        boolean circular = range != null && range.circular();
+        if (d.has("uniform")) {
+            onlyKeys(where, d, Set.of("uniform"));
+            JsonNode u = d.get("uniform");
+            String w = where + ".uniform";
+            requireObject(w, u);
+            onlyKeys(w, u, Set.of("from", "to"));
+            requireNumericLeaf(where, p, base);
+            double from = number(w + ".from", u.get("from"));
+            double to = number(w + ".to", u.get("to"));
+            if (!(to > from)) {
+                throw err(w + ".to", "value " + u.get("to") + " must be above from = " + u.get("from"));
+            }
+            if (range != null && !circular) {
+                inRange(w + ".from", p, from, range);
+                inRange(w + ".to", p, to, range);
+            }
+            return new Distribution.Uniform(from, to, circular);
+        }
+        if (d.has("normal")) {
+            onlyKeys(where, d, Set.of("normal"));
+            JsonNode n = d.get("normal");
+            String w = where + ".normal";
+            requireObject(w, n);
+            onlyKeys(w, n, Set.of("mean", "sd", "min", "max"));
+            requireNumericLeaf(where, p, base);
+            double mean = number(w + ".mean", n.get("mean"));
+            double sd = number(w + ".sd", n.get("sd"));
+            if (!(sd > 0)) {
+                throw err(w + ".sd", "value " + n.get("sd") + " must be > 0");
+            }
+            double lo = n.has("min") ? number(w + ".min", n.get("min")) : (range != null && !circular ? range.min() : Double.NEGATIVE_INFINITY);
+            double hi = n.has("max") ? number(w + ".max", n.get("max")) : (range != null && !circular ? range.max() : Double.POSITIVE_INFINITY);
+            if (circular && (n.has("min") || n.has("max"))) {
+                throw err(w, "a direction is drawn on the circle (wrapped into 0..360); leave out min and max");
+            }
+            if (!(hi > lo)) {
+                throw err(w + ".max", "value " + hi + " must be above min = " + lo);
+            }
+            if (range != null && !circular) {
+                inRange(w + ".min", p, lo, range);
+                inRange(w + ".max", p, hi, range);
+            }
+            double inside = 0.5 * (Erf.erf((hi - mean) / (sd * Math.sqrt(2))) - Erf.erf((lo - mean) / (sd * Math.sqrt(2))));
+            if (!(inside >= 1e-3)) {
+                throw err(w, "only a fraction " + String.format("%.1e", inside) + " of normal(mean " + mean + ", sd " + sd
+                        + ") lies in [" + lo + ", " + hi + "]; move the mean or widen min/max");
+            }
+            return new Distribution.Normal(mean, sd, lo, hi, circular);
+        }
+        if (d.has("choice")) {
+            onlyKeys(where, d, Set.of("choice", "weights"));
+            JsonNode c = d.get("choice");
+            List<AxisValue> opts = new ArrayList<>();
+            if (c.isArray() && !c.isEmpty()) {
+                int i = 0;
+                for (JsonNode v : c) {
+                    checkValue(where + ".choice[" + i++ + "]", p, base, v);
+                    opts.add(AxisValue.of(v));
+                }
+            } else if (c.isObject() && !c.isEmpty()) {
+                for (Iterator<Map.Entry<String, JsonNode>> it = c.fields(); it.hasNext(); ) {
+                    Map.Entry<String, JsonNode> e = it.next();
+                    checkValue(where + ".choice." + e.getKey(), p, base, e.getValue());
+                    opts.add(new AxisValue(e.getKey(), e.getValue()));
+                }
+            } else {
+                throw err(where + ".choice", "value " + c + " must be a non-empty list of values or {label: value, ...}");
+            }
+            double[] w = new double[opts.size()];
+            JsonNode wn = d.get("weights");
+            if (wn == null) {
+                java.util.Arrays.fill(w, 1.0);
+            } else {
+                if (!wn.isArray() || wn.size() != opts.size()) {
+                    throw err(where + ".weights", "value " + wn + " must be a list of " + opts.size()
+                            + " numbers, one per choice");
+                }
+                for (int i = 0; i < w.length; i++) {
+                    w[i] = number(where + ".weights[" + i + "]", wn.get(i));
+                    if (!(w[i] >= 0)) {
+                        throw err(where + ".weights[" + i + "]", "value " + wn.get(i) + " must be >= 0");
+                    }
+                }
+                if (java.util.Arrays.stream(w).sum() <= 0) {
+                    throw err(where + ".weights", "all weights are zero; give at least one positive weight");
+                }
+            }
+            return new Distribution.Choice(List.copyOf(opts), w);
+        }
+        throw err(where, "unknown distribution " + sorted(fieldNames(d)) + "; use uniform, normal or choice");
+    }
+
+    private SweepSpec.Typing typing(JsonNode t) {
+        SweepSpec.Typing def = SweepSpec.Typing.defaults();
+        if (t == null) {
+            return def;
+        }
+        String w = "breeze_typing";
+        requireObject(w, t);
+        onlyKeys(w, t, Set.of("shore_parallel_half_width_deg", "calm_below_m_per_s", "from_deg_key", "speed_key",
+                "coast_bearing_key", "latitude_key"));
+        double half = t.has("shore_parallel_half_width_deg")
+                ? number(w + ".shore_parallel_half_width_deg", t.get("shore_parallel_half_width_deg"))
+                : def.sectors().shoreParallelHalfWidthDeg();
+        if (!(half > 0 && half < 90)) {
+            throw err(w + ".shore_parallel_half_width_deg", "value " + half + " must be in (0, 90) deg (45 gives quadrants)");
+        }
+        double calm = t.has("calm_below_m_per_s") ? number(w + ".calm_below_m_per_s", t.get("calm_below_m_per_s"))
+                : def.sectors().calmBelowMPerS();
+        if (!(calm >= 0 && calm <= 40)) {
+            throw err(w + ".calm_below_m_per_s", "value " + calm + " must be in 0..40 m/s");
+        }
+        return new SweepSpec.Typing(
+                keyOr(t, w, "from_deg_key", def.fromDeg()), keyOr(t, w, "speed_key", def.speedMPerS()),
+                keyOr(t, w, "coast_bearing_key", def.coastBearingDeg()), keyOr(t, w, "latitude_key", def.latitudeDeg()),
+                new BreezeSectors(half, calm));
+    }
+
+    private KeyPath keyOr(JsonNode t, String w, String key, KeyPath def) {
+        if (!t.has(key)) {
+            return def;
+        }
+        try {
+            return KeyPath.parse(text(w + "." + key, t.get(key)));
+        } catch (IllegalArgumentException e) {
+            throw err(w + "." + key, e.getMessage());
+        }
+    }
+
+    /** The value must have the type of the base scenario's value and lie in the key's physical range. */
+    private void checkValue(String where, KeyPath p, JsonNode base, JsonNode v) {
+        JsonNode b = p.get(base);
+        String want = null;
+        if (b.isNumber() && !v.isNumber()) {
+            want = "a number";
+        } else if (b.isTextual() && !v.isTextual()) {
+            want = "a name (text)";
+        } else if (b.isBoolean() && !v.isBoolean()) {
+            want = "true or false";
+        } else if (b.isObject() && !v.isObject()) {
+            want = "a set of keys like the base scenario's";
+        } else if (b.isArray() && !v.isArray()) {
+            want = "a list";
+        }
+        if (want != null) {
+            throw err(where, "value " + v + " is not " + want + " (the base scenario has " + b + " at " + p + ")");
+        }
+        KeyRanges.Range r = KeyRanges.forPath(p);
+        if (r != null && v.isNumber()) {
+            inRange(where, p, v.asDouble(), r);
+        }
+    }
+
+    private void inRange(String where, KeyPath p, double v, KeyRanges.Range r) {
+        if (!Double.isFinite(v) || !r.contains(v)) {
+            throw err(where, "value " + KeyRanges.fmt(v) + " is outside the allowed range " + r.describe() + " for " + p);
+        }
+    }
+
+    private void requireNumericLeaf(String where, KeyPath p, JsonNode base) {
+        JsonNode b = p.get(base);
+        if (!b.isNumber()) {
+            throw err(where, "uniform and normal draws need a number, but the base scenario has " + b + " at " + p
+                    + "; use {choice: [...]} instead");
+        }
+    }
+
+    private double number(String where, JsonNode n) {
+        if (n == null) {
+            throw err(where, "missing; give a number");
+        }
+        if (!n.isNumber() || !Double.isFinite(n.asDouble())) {
+            throw err(where, "value " + n + " is not a number");
+        }
+        return n.asDouble();
+    }
+
+    private String text(String where, JsonNode n) {
+        if (!n.isTextual()) {
+            throw err(where, "value " + n + " must be text");
+        }
+        return n.asText();
+    }
+
+    private void requireObject(String where, JsonNode n) {
+        if (!n.isObject()) {
+            throw err(where, "value " + n + " must be a set of keys");
+        }
+    }
+
+    private void onlyKeys(String where, JsonNode n, Set<String> allowed) {
+        for (String k : fieldNames(n)) {
+            if (!allowed.contains(k)) {
+                throw err(where + "." + k, "unknown key; allowed here: " + sorted(allowed));
+            }
+        }
+    }
+
+    private static List<String> fieldNames(JsonNode n) {
+        List<String> l = new ArrayList<>();
+        n.fieldNames().forEachRemaining(l::add);
+        return l;
+    }
+
+    private static List<String> sorted(java.util.Collection<String> c) {
+        List<String> l = new ArrayList<>(c);
+        java.util.Collections.sort(l);
+        return l;
+    }
+}
