@@ -16,6 +16,8 @@ import picocli.CommandLine.ScopeType;
         subcommands = {
             ValidateCommand.class,
             BenchCommand.class,
+            org.littoral.scenarios.run.RunCommand.class,
+            org.littoral.scenarios.run.ScenariosCommand.class,
         })
 public final class Main implements Callable<Integer> {
 

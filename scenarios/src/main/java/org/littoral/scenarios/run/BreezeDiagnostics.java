@@ -1,0 +1,175 @@
+package org.littoral.scenarios.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.littoral.model.field.Background;
+import org.littoral.model.field.Snapshot;
+
+/**
+ * The headline numbers of a run, all from the near-surface cross-shore breeze wind u' (model wind
+ * minus ambient wind) unless stated: peak onshore breeze, onset at the coast, arrival at each site,
+ * maximum inland penetration, and the depth of the circulation at its peak.
+ *
+ * <p>Definitions (ours): <b>onset</b> is the first time u' at x = 0 rises through the onshore
+ * threshold within the output window (linear interpolation between output times); <b>arrival</b> at a
+ * site is the first such rise at the site; <b>penetration</b> is the farthest x inland to which u'
+ * exceeds the threshold continuously from the coast; the <b>onshore-layer depth</b> is the height at
+ * which u' first changes sign above the near-surface level, in the column of peak onshore breeze at the
+ * peak time, and the <b>circulation depth</b> the top of the return flow above it (where u' comes
+ * back above -10 % of the return-flow peak).
+ */
+public final class BreezeDiagnostics {
+    private BreezeDiagnostics() {
+    }
+
+    /** Timing and strength at one site. */
+    public record SiteTiming(String name, double xM, Double arrivalClockH, double peakBreezeMPerS, double peakClockH) {
+    }
+
+    /** Speed implied by arrivals at two sites. */
+    public record ImpliedSpeed(String from, String to, double speedMPerS) {
+    }
+
+    /** Column structure at the peak. */
+    public record Circulation(double clockH, double xM, double onshoreLayerDepthM, double circulationDepthM,
+                              double returnFlowMPerS, double returnFlowHeightM) {
+    }
+
+    public record Result(double thresholdMPerS, double peakBreezeMPerS, double peakTotalMPerS, double peakClockH, double peakXM,
+                         int peakTimeIndex, Double onsetClockH, boolean onshoreAtOutputStart, double maxPenetrationM,
+                         Double penetrationClockH, List<SiteTiming> sites, List<ImpliedSpeed> speeds) {
+    }
+
+    public static Result compute(FieldSections fs, List<String> siteNames, double[] siteXM, double threshold) {
+        int nt = fs.clockH.length;
+        if (nt == 0) {
+            throw new IllegalArgumentException("no output times inside the solution's span; widen output.start_h..end_h");
+        }
+        int nx = fs.xM.length;
+        double best = Double.NEGATIVE_INFINITY;
+        int bn = 0;
+        int bi = 0;
+        for (int n = 0; n < nt; n++) {
+            for (int i = 0; i < nx; i++) {
+                if (fs.nearSurfaceU[n][i] > best) {
+                    best = fs.nearSurfaceU[n][i];
+                    bn = n;
+                    bi = i;
+                }
+            }
+        }
+        double[] atCoast = seriesAt(fs, 0.0);
+        Double onset = firstRise(fs.clockH, atCoast, threshold);
+        boolean onshoreAtStart = atCoast[0] >= threshold;
+
+        int i0 = FieldSections.bracket(fs.xM, 0.0);
+        double pen = 0;
+        Double penTime = null;
+        for (int n = 0; n < nt; n++) {
+            double reach = Double.NaN;
+            for (int i = i0; i < nx; i++) {
+                if (fs.nearSurfaceU[n][i] >= threshold) {
+                    reach = fs.xM[i];
+                } else if (fs.xM[i] >= 0) {
+                    break;
+                }
+            }
+            if (!Double.isNaN(reach) && reach > pen) {
+                pen = reach;
+                penTime = fs.clockH[n];
+            }
+        }
+
+        List<SiteTiming> sites = new ArrayList<>();
+        for (int s = 0; s < siteXM.length; s++) {
+            double[] series = seriesAt(fs, siteXM[s]);
+            int pk = 0;
+            for (int n = 1; n < nt; n++) {
+                if (series[n] > series[pk]) {
+                    pk = n;
+                }
+            }
+            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], firstRise(fs.clockH, series, threshold), series[pk], fs.clockH[pk]));
+        }
+        List<SiteTiming> byX = new ArrayList<>(sites);
+        byX.sort((a, b) -> Double.compare(a.xM(), b.xM()));
+        List<ImpliedSpeed> speeds = new ArrayList<>();
+        for (int s = 1; s < byX.size(); s++) {
+            SiteTiming a = byX.get(s - 1);
+            SiteTiming b = byX.get(s);
+            if (a.arrivalClockH() != null && b.arrivalClockH() != null && b.arrivalClockH() > a.arrivalClockH()) {
+                speeds.add(new ImpliedSpeed(a.name(), b.name(), (b.xM() - a.xM()) / ((b.arrivalClockH() - a.arrivalClockH()) * 3600.0)));
+            }
+        }
+        return new Result(threshold, best, fs.nearSurfaceTotalU[bn][bi], fs.clockH[bn], fs.xM[bi], bn, onset, onshoreAtStart, pen,
+                penTime, sites, speeds);
+    }
+
+    /** u' along the output times at position x (linear in x). */
+    static double[] seriesAt(FieldSections fs, double x) {
+        int i = FieldSections.bracket(fs.xM, x);
+        double w = Math.max(0, Math.min(1, (x - fs.xM[i]) / (fs.xM[i + 1] - fs.xM[i])));
+        double[] out = new double[fs.clockH.length];
+        for (int n = 0; n < out.length; n++) {
+            out[n] = (1 - w) * fs.nearSurfaceU[n][i] + w * fs.nearSurfaceU[n][i + 1];
+        }
+        return out;
+    }
+
+    /** First time the series rises through the threshold (interpolated), or null. */
+    static Double firstRise(double[] t, double[] v, double threshold) {
+        for (int n = 1; n < v.length; n++) {
+            if (v[n - 1] < threshold && v[n] >= threshold) {
+                double f = (threshold - v[n - 1]) / (v[n] - v[n - 1]);
+                return t[n - 1] + f * (t[n] - t[n - 1]);
+            }
+        }
+        return null;
+    }
+
+    /** The vertical structure of the breeze in the column of the peak, from a snapshot at the peak time. */
+    public static Circulation circulation(Snapshot s, double[] xM, double[] zM, Background bg, double clockH, double peakXM,
+                                          double nearSurfaceM) {
+        int nx = xM.length;
+        int i = FieldSections.bracket(xM, peakXM);
+        if (Math.abs(xM[i + 1] - peakXM) < Math.abs(xM[i] - peakXM)) {
+            i++;
+        }
+        int nz = zM.length;
+        double[] u = new double[nz];
+        for (int k = 0; k < nz; k++) {
+            u[k] = s.uMPerS()[k * nx + i] - Background.interpolate(bg.zM(), bg.ambientUMPerS(), zM[k]);
+        }
+        int kStart = FieldSections.bracket(zM, nearSurfaceM);
+        double depth = Double.NaN;
+        int kCross = -1;
+        for (int k = kStart + 1; k < nz; k++) {
+            if (u[k - 1] > 0 && u[k] <= 0) {
+                depth = zM[k - 1] + (zM[k] - zM[k - 1]) * u[k - 1] / (u[k - 1] - u[k]);
+                kCross = k;
+                break;
+            }
+        }
+        double ret = Double.NaN;
+        double retZ = Double.NaN;
+        double top = Double.NaN;
+        if (kCross > 0) {
+            int km = kCross;
+            for (int k = kCross; k < nz && u[k] <= 0; k++) {
+                if (u[k] < u[km]) {
+                    km = k;
+                }
+            }
+            ret = u[km];
+            retZ = zM[km];
+            double lim = 0.1 * ret;
+            for (int k = km + 1; k < nz; k++) {
+                if (u[k] >= lim) {
+                    top = zM[k - 1] + (zM[k] - zM[k - 1]) * (lim - u[k - 1]) / (u[k] - u[k - 1]);
+                    break;
+                }
+            }
+        }
+        return new Circulation(clockH, xM[i], depth, top, ret, retZ);
+    }
+}

@@ -1,0 +1,147 @@
+package org.littoral.scenarios.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.field.Background;
+import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.Snapshot;
+
+/**
+ * The solution evaluated at the output times and reduced to what the diagnostics and plots need:
+ * the near-surface cross-shore breeze wind u' = u - U_ambient along x (a time-distance section) and,
+ * at each site, time-height sections of u', the alongshore breeze v' and theta'. The "breeze" is the
+ * model wind minus the ambient wind, so an onshore perturbation shows even against offshore flow.
+ * Each output time costs one snapshot, which is not kept.
+ */
+public final class FieldSections {
+    /** Output times, local clock hours, and the matching model times, s. */
+    public final double[] clockH;
+    public final double[] modelSec;
+    public final double[] xM;
+    public final double[] zM;
+    public final double nearSurfaceM;
+    /** [time][x] near-surface cross-shore breeze wind, m/s (onshore positive). */
+    public final double[][] nearSurfaceU;
+    /** [time][x] near-surface total cross-shore wind, m/s. */
+    public final double[][] nearSurfaceTotalU;
+    /** [site][time][level]. */
+    public final double[][][] siteU;
+    public final double[][][] siteV;
+    public final double[][][] siteTheta;
+    /** Times (clock hours) dropped because they lie outside the solution's span. */
+    public final List<Double> dropped;
+
+    private FieldSections(double[] clockH, double[] modelSec, double[] xM, double[] zM, double nearSurfaceM, int sites,
+                          List<Double> dropped) {
+        this.clockH = clockH;
+        this.modelSec = modelSec;
+        this.xM = xM;
+        this.zM = zM;
+        this.nearSurfaceM = nearSurfaceM;
+        int nt = clockH.length;
+        nearSurfaceU = new double[nt][xM.length];
+        nearSurfaceTotalU = new double[nt][xM.length];
+        siteU = new double[sites][nt][zM.length];
+        siteV = new double[sites][nt][zM.length];
+        siteTheta = new double[sites][nt][zM.length];
+        this.dropped = dropped;
+    }
+
+    /**
+     * Evaluates the solution at the given local clock times.
+     *
+     * @param siteXM cross-shore positions of the sites, m (inside the domain)
+     * @param progress called after each time with (done, total); may be null
+     */
+    public static FieldSections evaluate(BreezeSolution sol, Coast coast, double[] clockHours, double nearSurfaceM,
+                                         double[] siteXM, java.util.function.BiConsumer<Integer, Integer> progress) {
+        List<Double> keepClock = new ArrayList<>();
+        List<Double> keepModel = new ArrayList<>();
+        List<Double> dropped = new ArrayList<>();
+        for (double h : clockHours) {
+            double t = coast.solarHoursFromClock(h) * 3600.0;
+            if (t >= sol.startSec() - 1e-6 && t <= sol.endSec() + 1e-6) {
+                keepClock.add(h);
+                keepModel.add(t);
+            } else {
+                dropped.add(h);
+            }
+        }
+        double[] xM = sol.xM();
+        double[] zM = sol.zM();
+        int nx = xM.length;
+        int nz = zM.length;
+        FieldSections fs = new FieldSections(toArray(keepClock), toArray(keepModel), xM, zM, nearSurfaceM, siteXM.length, dropped);
+        Background bg = sol.background();
+        int k0 = bracket(zM, nearSurfaceM);
+        double wz = Math.max(0, Math.min(1, (nearSurfaceM - zM[k0]) / (zM[k0 + 1] - zM[k0])));
+        double ambientNear = Background.interpolate(bg.zM(), bg.ambientUMPerS(), nearSurfaceM);
+        int[] col = new int[siteXM.length];
+        double[] wx = new double[siteXM.length];
+        for (int s = 0; s < siteXM.length; s++) {
+            col[s] = bracket(xM, siteXM[s]);
+            wx[s] = Math.max(0, Math.min(1, (siteXM[s] - xM[col[s]]) / (xM[col[s] + 1] - xM[col[s]])));
+        }
+        double[] uBg = new double[nz];
+        double[] vBg = new double[nz];
+        double[] thBg = new double[nz];
+        for (int k = 0; k < nz; k++) {
+            uBg[k] = Background.interpolate(bg.zM(), bg.ambientUMPerS(), zM[k]);
+            vBg[k] = Background.interpolate(bg.zM(), bg.ambientVMPerS(), zM[k]);
+            thBg[k] = Background.interpolate(bg.zM(), bg.thetaK(), zM[k]);
+        }
+        int nt = fs.clockH.length;
+        for (int n = 0; n < nt; n++) {
+            Snapshot s = sol.snapshotAt(fs.modelSec[n]);
+            double[] u = s.uMPerS();
+            for (int i = 0; i < nx; i++) {
+                double total = (1 - wz) * u[k0 * nx + i] + wz * u[(k0 + 1) * nx + i];
+                fs.nearSurfaceTotalU[n][i] = total;
+                fs.nearSurfaceU[n][i] = total - ambientNear;
+            }
+            for (int site = 0; site < col.length; site++) {
+                int i = col[site];
+                double w = wx[site];
+                for (int k = 0; k < nz; k++) {
+                    int a = k * nx + i;
+                    fs.siteU[site][n][k] = (1 - w) * u[a] + w * u[a + 1] - uBg[k];
+                    fs.siteV[site][n][k] = (1 - w) * s.vMPerS()[a] + w * s.vMPerS()[a + 1] - vBg[k];
+                    fs.siteTheta[site][n][k] = (1 - w) * s.thetaK()[a] + w * s.thetaK()[a + 1] - thBg[k];
+                }
+            }
+            if (progress != null) {
+                progress.accept(n + 1, nt);
+            }
+        }
+        return fs;
+    }
+
+    static int bracket(double[] a, double v) {
+        if (v <= a[0]) {
+            return 0;
+        }
+        if (v >= a[a.length - 1]) {
+            return a.length - 2;
+        }
+        int lo = 0;
+        int hi = a.length - 1;
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if (a[mid] <= v) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    private static double[] toArray(List<Double> l) {
+        double[] a = new double[l.size()];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = l.get(i);
+        }
+        return a;
+    }
+}

@@ -1,0 +1,42 @@
+package org.littoral.scenarios.run;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.scenario.BuiltinScenarios;
+import org.littoral.scenarios.scenario.Scenario;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code littoral run SCENARIO --out DIR}. */
+@Command(name = "run", description = {"Run a scenario (a built-in name or a YAML/JSON file): model, synthetic soundings, "
+        + "diagnostics, figures.", "Writes summary.json, soundings.csv, near_surface_breeze.csv and PNG figures to --out."})
+public final class RunCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "SCENARIO", description = "Built-in scenario name or path to a scenario file.")
+    String scenario;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output directory (default: out/<scenario name>).")
+    Path out;
+
+    @Option(names = "--list", description = "List the built-in scenarios and exit.")
+    boolean list;
+
+    @Override
+    public Integer call() throws Exception {
+        if (list) {
+            ScenariosCommand.printList(System.out);
+            return 0;
+        }
+        if (scenario == null) {
+            throw new UserInputException("littoral run: give a scenario, e.g. 'littoral run classic-45N --out out/classic-45N'; "
+                    + "built-ins: " + String.join(", ", BuiltinScenarios.names()));
+        }
+        Scenario s = BuiltinScenarios.resolve(scenario);
+        Path dir = out != null ? out : Path.of("out", s.name());
+        new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null).run(dir);
+        System.out.println("littoral: wrote " + dir.resolve("summary.json") + " and the other outputs of " + s.name());
+        return 0;
+    }
+}

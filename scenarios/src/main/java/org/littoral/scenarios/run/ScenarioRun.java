@@ -1,0 +1,237 @@
+package org.littoral.scenarios.run;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.Snapshot;
+import org.littoral.model.sounding.Profile;
+import org.littoral.model.sounding.SoundingSampler;
+import org.littoral.model.sounding.VirtualSite;
+import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.scenario.Scenario;
+
+/**
+ * One {@code littoral run}: solve, sample soundings, compute the diagnostics, write the files. The
+ * physics never writes files; this class does, each atomically.
+ */
+public final class ScenarioRun {
+    public static final String CAUTION = "Idealised model output: not a forecast; never use it for aviation, marine or public-safety "
+            + "decisions. Drone operations follow local aviation rules (altitude ceilings, airspace, storms); those rules win.";
+
+    private final Scenario scenario;
+    private final Solver solver;
+    private final PrintStream progress;
+
+    /** Everything a run produced, for callers and tests. */
+    public record Outcome(BreezeSolution solution, List<Profile> profiles, FieldSections sections,
+                          BreezeDiagnostics.Result diagnostics, BreezeDiagnostics.Circulation circulation, Snapshot peak,
+                          ObjectNode summary, List<Path> files) {
+    }
+
+    /** @param progress where progress lines go, or null for silence */
+    public ScenarioRun(Scenario scenario, Solver solver, PrintStream progress) {
+        this.scenario = scenario;
+        this.solver = solver;
+        this.progress = progress;
+    }
+
+    private void say(String msg) {
+        if (progress != null) {
+            progress.println("littoral: " + msg);
+        }
+    }
+
+    public Outcome run(Path outDir) throws IOException {
+        long t0 = System.nanoTime();
+        say("solving " + scenario.name() + " (" + scenario.kind().name().toLowerCase(Locale.ROOT) + ", "
+                + scenario.xGrid().nx() + " x " + scenario.zGrid().size() + " points)");
+        BreezeSolution sol = solver.solve(scenario);
+        say(String.format(Locale.ROOT, "solved in %.2f s; sampling soundings", (System.nanoTime() - t0) / 1e9));
+        Coast coast = scenario.coast();
+        List<VirtualSite> sites = scenario.sites();
+        List<Profile> profiles = new SoundingSampler(sol, coast, sites, scenario.flights().schedule(),
+                scenario.flights().sounding()).sampleAll();
+        double[] siteX = new double[sites.size()];
+        List<String> names = new ArrayList<>();
+        for (int s = 0; s < siteX.length; s++) {
+            siteX[s] = sites.get(s).inlandDistanceM();
+            names.add(sites.get(s).name());
+        }
+        Scenario.Output out = scenario.output();
+        FieldSections fs = FieldSections.evaluate(sol, coast, out.clockHours(), out.nearSurfaceM(), siteX, null);
+        BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, siteX, out.onshoreThresholdMPerS());
+        Snapshot peak = sol.snapshotAt(fs.modelSec[d.peakTimeIndex()]);
+        BreezeDiagnostics.Circulation circ = BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, sol.background(), d.peakClockH(),
+                d.peakXM(), out.nearSurfaceM());
+
+        List<Path> files = new ArrayList<>();
+        Path soundings = outDir.resolve("soundings.csv");
+        AtomicWrite.write(soundings, soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
+        files.add(soundings);
+        Path section = outDir.resolve("near_surface_breeze.csv");
+        AtomicWrite.write(section, timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
+        files.add(section);
+        say("wrote " + profiles.size() + " soundings");
+        Path summaryPath = outDir.resolve("summary.json");
+        files.add(summaryPath);
+        ObjectNode summary = summary(sol, profiles, fs, d, circ, outDir, files);
+        ObjectMapper json = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+        AtomicWrite.write(summaryPath, json.writeValueAsBytes(summary));
+        say(String.format(Locale.ROOT, "done in %.2f s: %s", (System.nanoTime() - t0) / 1e9, outDir));
+        return new Outcome(sol, profiles, fs, d, circ, peak, summary, files);
+    }
+
+    /** Local clock time as HH:MM, with "+1d" for times on the next day. */
+    public static String clock(double hours) {
+        if (Double.isNaN(hours)) {
+            return null;
+        }
+        long minutes = Math.round(hours * 60.0);
+        long day = Math.floorDiv(minutes, 1440);
+        long m = Math.floorMod(minutes, 1440);
+        return String.format(Locale.ROOT, "%02d:%02d", m / 60, m % 60) + (day == 0 ? "" : (day > 0 ? " +" : " ") + day + "d");
+    }
+
+    /** Tidy binned profiles, one row per bin; the column set of the analysis chain's binned profile CSV. */
+    static String soundingsCsv(List<Profile> profiles) {
+        StringBuilder sb = new StringBuilder(profiles.size() * 120 * 110);
+        sb.append(ProfileCsvColumns.HEADER).append('\n');
+        for (Profile p : profiles) {
+            for (int k = 0; k < p.size(); k++) {
+                sb.append(csvText(p.day())).append(',').append(csvText(p.site())).append(',');
+                sb.append(String.format(Locale.ROOT, "%.4f,%.1f,%.2f,%.3f,%.2f,%.3f,%.3f,%.2f,%.1f,%.3f,%.3f,%.3f%n",
+                        p.timeHours(), p.heightM()[k], p.pressurePa()[k] / 100.0, p.temperatureK()[k] - Thermo.T0,
+                        p.relativeHumidity()[k] * 100.0, p.mixingRatioKgPerKg()[k] * 1000.0, p.dewpointK()[k] - Thermo.T0,
+                        p.windSpeed(k), p.windDirectionDeg(k), p.thetaK()[k], p.thetaVK()[k], p.thetaEK()[k]));
+            }
+        }
+        return sb.toString().replace("NaN", "");
+    }
+
+    private static String csvText(String s) {
+        return s.contains(",") || s.contains("\"") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
+    }
+
+    /** The time-distance section behind the figure, long format. */
+    static String timeDistanceCsv(FieldSections fs) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("time_local_h,x_km,breeze_u_m_per_s,total_u_m_per_s\n");
+        double[] range = RunFigures.plotRangeM(fs);
+        for (int n = 0; n < fs.clockH.length; n++) {
+            for (int i = 0; i < fs.xM.length; i++) {
+                if (fs.xM[i] < range[0] || fs.xM[i] > range[1]) {
+                    continue;
+                }
+                sb.append(String.format(Locale.ROOT, "%.4f,%.3f,%.4f,%.4f%n", fs.clockH[n], fs.xM[i] / 1000.0, fs.nearSurfaceU[n][i],
+                        fs.nearSurfaceTotalU[n][i]));
+            }
+        }
+        return sb.toString();
+    }
+
+    private ObjectNode summary(BreezeSolution sol, List<Profile> profiles, FieldSections fs, BreezeDiagnostics.Result d,
+                               BreezeDiagnostics.Circulation c, Path outDir, List<Path> files) {
+        ObjectMapper m = new ObjectMapper();
+        ObjectNode root = m.createObjectNode();
+        root.put("scenario", scenario.name());
+        root.put("description", scenario.description());
+        root.put("source", scenario.source());
+        root.put("model", sol.modelName());
+        root.put("caution", CAUTION);
+        root.put("clock", "local clock time, UTC" + String.format(Locale.ROOT, "%+.1f", scenario.coast().utcOffsetHours())
+                + " h; clock minus solar time " + String.format(Locale.ROOT, "%.2f", scenario.coast().clockHoursFromSolar(12) - 12) + " h");
+        root.set("inputs", scenario.inputs());
+        ObjectNode derived = root.putObject("derived");
+        derived.put("coriolis_per_s", scenario.coast().coriolisPerS());
+        derived.put("diurnal_frequency_per_s", 2 * Math.PI / 86400.0);
+        derived.put("domain_from_km", scenario.xGrid().xM(0) / 1000.0);
+        derived.put("domain_to_km", scenario.xGrid().lastM() / 1000.0);
+        derived.put("ambient_cross_shore_m_per_s", scenario.ambientWind().crossShoreMPerS());
+        derived.put("ambient_alongshore_m_per_s", scenario.ambientWind().alongshoreMPerS());
+        derived.put("profiles", profiles.size());
+
+        ObjectNode dg = root.putObject("diagnostics");
+        dg.put("definitions", "breeze wind = model wind minus ambient wind, cross-shore, onshore positive, at "
+                + fs.nearSurfaceM + " m; onshore means breeze wind >= " + d.thresholdMPerS() + " m/s; times are local clock");
+        ObjectNode pk = dg.putObject("peak_onshore_wind");
+        pk.put("breeze_m_per_s", round(d.peakBreezeMPerS(), 3));
+        pk.put("total_cross_shore_m_per_s", round(d.peakTotalMPerS(), 3));
+        pk.put("time_local", clock(d.peakClockH()));
+        pk.put("time_local_h", round(d.peakClockH(), 4));
+        pk.put("x_km", round(d.peakXM() / 1000.0, 3));
+        ObjectNode on = dg.putObject("onshore_flow_onset_at_coast");
+        putTime(on, d.onsetClockH());
+        if (d.onsetClockH() == null) {
+            on.put("note", d.onshoreAtOutputStart() ? "the breeze wind at the coast is already onshore at the first output time and does not rise through the threshold later"
+                    : "the breeze wind at the coast never reaches the threshold in the output window");
+        }
+        ObjectNode ci = dg.putObject("circulation_at_peak");
+        ci.put("time_local", clock(c.clockH()));
+        ci.put("x_km", round(c.xM() / 1000.0, 3));
+        putNumber(ci, "onshore_layer_depth_m", c.onshoreLayerDepthM(), 1);
+        putNumber(ci, "circulation_depth_m", c.circulationDepthM(), 1);
+        putNumber(ci, "return_flow_m_per_s", c.returnFlowMPerS(), 3);
+        putNumber(ci, "return_flow_height_m", c.returnFlowHeightM(), 1);
+        ObjectNode pen = dg.putObject("max_inland_penetration");
+        pen.put("km", round(d.maxPenetrationM() / 1000.0, 3));
+        putTime(pen, d.penetrationClockH());
+        ArrayNode sites = dg.putArray("sites");
+        for (BreezeDiagnostics.SiteTiming s : d.sites()) {
+            ObjectNode o = sites.addObject();
+            o.put("name", s.name());
+            o.put("inland_km", s.xM() / 1000.0);
+            ObjectNode a = o.putObject("onshore_arrival");
+            putTime(a, s.arrivalClockH());
+            o.put("peak_breeze_m_per_s", round(s.peakBreezeMPerS(), 3));
+            o.put("peak_time_local", clock(s.peakClockH()));
+        }
+        ArrayNode speeds = dg.putArray("implied_speeds_between_sites");
+        for (BreezeDiagnostics.ImpliedSpeed s : d.speeds()) {
+            ObjectNode o = speeds.addObject();
+            o.put("from", s.from());
+            o.put("to", s.to());
+            o.put("speed_m_per_s", round(s.speedMPerS(), 3));
+        }
+        if (!fs.dropped.isEmpty()) {
+            root.put("note", fs.dropped.size() + " output times lie outside the solution's span and were skipped");
+        }
+        ArrayNode f = root.putArray("files");
+        for (Path p : files) {
+            f.add(outDir.relativize(p).toString());
+        }
+        return root;
+    }
+
+    private static void putTime(ObjectNode o, Double h) {
+        if (h == null) {
+            o.putNull("time_local");
+            o.putNull("time_local_h");
+        } else {
+            o.put("time_local", clock(h));
+            o.put("time_local_h", round(h, 4));
+        }
+    }
+
+    private static void putNumber(ObjectNode o, String key, double v, int digits) {
+        if (Double.isNaN(v)) {
+            o.putNull(key);
+        } else {
+            o.put(key, round(v, digits));
+        }
+    }
+
+    static double round(double v, int digits) {
+        double f = Math.pow(10, digits);
+        return Math.round(v * f) / f;
+    }
+}
