@@ -1,0 +1,75 @@
+package org.littoral.scenarios.analysis.detect;
+
+import java.util.List;
+import org.littoral.scenarios.analysis.Layer;
+import org.littoral.scenarios.analysis.Variable;
+import org.littoral.scenarios.cli.UserInputException;
+
+/** Settings of passage detection. Public fields; defaults and reasons in docs/analysis.md. */
+public final class DetectionSettings {
+    /**
+     * Layer of the wind-shift detector, m above ground. Default 100-300 m: above the surface layer
+     * (obstacles, take-off) yet inside the onshore inflow of a breeze, typically 0.5-1 km deep
+     * (Simpson 1994), and below its return flow.
+     */
+    public Layer windLayer = new Layer(100, 300);
+    /** Wind as components (default: stable in calm air) or unit vectors (pure direction). */
+    public WindShiftDetector.Representation windRepresentation = WindShiftDetector.Representation.COMPONENTS;
+    /** Penalty: BIC (default), MBIC or manual. */
+    public Penalty penalty = Penalty.bic();
+    /** Minimum segment length in profiles. Default 2: one odd flight is not a new regime. */
+    public int minSegmentProfiles = 2;
+    /** Floor of the wind noise scale, m/s. Default 0.75: typical flight-to-flight scatter of a layer-mean drone wind. */
+    public double windSdFloorMPerS = 0.75;
+    /** Floor of the unit-vector noise scale (dimensionless). */
+    public double unitVectorSdFloor = 0.15;
+    /** Below this layer-mean speed (m/s) direction is undefined (unit-vector cost and sector labels). */
+    public double calmSpeedMPerS = 0.5;
+    /** A layer mean needs at least this fraction of the layer's levels valid. */
+    public double minValidFraction = 0.5;
+
+    /** Run the multivariate detector (b). */
+    public boolean useMultivariate = true;
+    /** Layers of the multivariate detector. Default 50-150, 150-300, 300-500 m: low, middle and top of a breeze layer. */
+    public List<Layer> multiLayers = List.of(new Layer(50, 150), new Layer(150, 300), new Layer(300, 500));
+    /** Variables of the multivariate detector: wind components, theta and mixing ratio (issue 4). */
+    public List<Variable> multiVariables = List.of(Variable.WIND_EAST, Variable.WIND_NORTH, Variable.THETA,
+            Variable.MIXING_RATIO);
+    /** Floors of the standardising scales. */
+    public double thetaSdFloorK = 0.2;
+    public double mixingRatioSdFloorGPerKg = 0.2;
+    /** Multiplier of the multivariate detector's penalty. */
+    public double multiPenaltyFactor = 1.0;
+
+    /**
+     * Report only passages the wind-shift detector finds (default true: the wind shift is the most
+     * reliable passage signal, REFERENCES.md section 9); other detectors then add confidence and
+     * timing spread, and their unmatched changes are listed as unconfirmed.
+     */
+    public boolean requirePrimary = true;
+    /** A wind-detector change whose before/after mean wind vectors differ by less than this (m/s) is rejected (listed). */
+    public double minVectorChangeMPerS = 1.0;
+    /** Changes of different detectors match when their times differ by at most max(sum of their uncertainties, this), hours. */
+    public double matchMinHours = 0.25;
+    /**
+     * Half-width of the onshore sector, degrees either side of the direction pointing inland
+     * (the wind blowing from sea to land). Default 60: excludes flow within 30 degrees of shore-parallel.
+     */
+    public double onshoreHalfWidthDeg = 60.0;
+
+    public DetectionSettings validate() {
+        if (minSegmentProfiles < 1) {
+            throw new UserInputException("detection.minSegmentProfiles = " + minSegmentProfiles + " must be >= 1 (default 2)");
+        }
+        if (!(onshoreHalfWidthDeg > 0 && onshoreHalfWidthDeg < 180)) {
+            throw new UserInputException("detection.onshoreHalfWidthDeg = " + onshoreHalfWidthDeg + " must be in (0, 180) (default 60)");
+        }
+        if (!(minValidFraction > 0 && minValidFraction <= 1)) {
+            throw new UserInputException("detection.minValidFraction = " + minValidFraction + " must be in (0, 1] (default 0.5)");
+        }
+        if (multiLayers.isEmpty() || multiVariables.isEmpty()) {
+            throw new UserInputException("detection.multiLayers and detection.multiVariables must not be empty");
+        }
+        return this;
+    }
+}

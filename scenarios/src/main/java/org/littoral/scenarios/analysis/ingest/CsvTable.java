@@ -1,0 +1,183 @@
+package org.littoral.scenarios.analysis.ingest;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.littoral.scenarios.cli.UserInputException;
+
+/**
+ * A minimal comma-separated reader that keeps file line numbers for error messages. Handles
+ * double-quoted fields without embedded line breaks; '#' at the start of a line is a comment.
+ */
+public final class CsvTable {
+    private final String fileName;
+    private final List<String> header;
+    private final Map<String, Integer> index = new HashMap<>();
+    private final List<String[]> rows;
+    private final int[] lineNumbers;
+
+    private CsvTable(String fileName, List<String> header, List<String[]> rows, int[] lineNumbers) {
+        this.fileName = fileName;
+        this.header = header;
+        this.rows = rows;
+        this.lineNumbers = lineNumbers;
+        for (int i = 0; i < header.size(); i++) {
+            index.put(header.get(i), i);
+        }
+    }
+
+    public static CsvTable read(Path file) {
+        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            return read(file.getFileName().toString(), r);
+        } catch (IOException e) {
+            throw new UserInputException(file + ": cannot read (" + e.getMessage() + "); check the path");
+        }
+    }
+
+    public static CsvTable read(String fileName, BufferedReader r) throws IOException {
+        String line;
+        int lineNo = 0;
+        List<String> header = null;
+        int headerLine = 0;
+        List<String[]> rows = new ArrayList<>();
+        List<Integer> lines = new ArrayList<>();
+        while ((line = r.readLine()) != null) {
+            lineNo++;
+            if (lineNo == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') {
+                line = line.substring(1);
+            }
+            if (line.isBlank() || line.startsWith("#")) {
+                continue;
+            }
+            String[] cells = split(line);
+            if (header == null) {
+                header = new ArrayList<>();
+                for (String c : cells) {
+                    header.add(c.trim());
+                }
+                headerLine = lineNo;
+                java.util.Set<String> seen = new java.util.HashSet<>();
+                for (String h : header) {
+                    if (!seen.add(h)) {
+                        throw new UserInputException(fileName + " line " + headerLine + ": column '" + h
+                                + "' appears twice in the header; give each column a distinct name");
+                    }
+                }
+                continue;
+            }
+            if (cells.length != header.size()) {
+                throw new UserInputException(fileName + " line " + lineNo + ": " + cells.length + " fields but the header on line "
+                        + headerLine + " has " + header.size() + "; give every row one value (or an empty cell) per column");
+            }
+            rows.add(cells);
+            lines.add(lineNo);
+        }
+        if (header == null) {
+            throw new UserInputException(fileName + " line 1: the file is empty; expected a header line with column names");
+        }
+        int[] ln = new int[lines.size()];
+        for (int i = 0; i < ln.length; i++) {
+            ln[i] = lines.get(i);
+        }
+        return new CsvTable(fileName, header, rows, ln);
+    }
+
+    static String[] split(String line) {
+        if (line.indexOf('"') < 0) {
+            String[] parts = line.split(",", -1);
+            for (int i = 0; i < parts.length; i++) {
+                parts[i] = parts[i].trim();
+            }
+            return parts;
+        }
+        List<String> out = new ArrayList<>();
+        StringBuilder sb = new StringBuilder();
+        boolean quoted = false;
+        for (int i = 0; i < line.length(); i++) {
+            char c = line.charAt(i);
+            if (quoted) {
+                if (c == '"') {
+                    if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
+                        sb.append('"');
+                        i++;
+                    } else {
+                        quoted = false;
+                    }
+                } else {
+                    sb.append(c);
+                }
+            } else if (c == '"') {
+                quoted = true;
+            } else if (c == ',') {
+                out.add(sb.toString().trim());
+                sb.setLength(0);
+            } else {
+                sb.append(c);
+            }
+        }
+        out.add(sb.toString().trim());
+        return out.toArray(new String[0]);
+    }
+
+    public String fileName() {
+        return fileName;
+    }
+
+    public List<String> header() {
+        return header;
+    }
+
+    public boolean has(String column) {
+        return index.containsKey(column);
+    }
+
+    /** Column index or -1. */
+    public int column(String name) {
+        Integer i = index.get(name);
+        return i == null ? -1 : i;
+    }
+
+    public int rowCount() {
+        return rows.size();
+    }
+
+    public String cell(int row, int column) {
+        return rows.get(row)[column];
+    }
+
+    /** File line number of a data row (1-based, counting the header and comments). */
+    public int line(int row) {
+        return lineNumbers[row];
+    }
+
+    /** "file line N". */
+    public String where(int row) {
+        return fileName + " line " + lineNumbers[row];
+    }
+
+    /** True for an empty cell or a conventional missing-value token (NA, NaN, null, -). */
+    public static boolean isMissing(String cell) {
+        return cell.isEmpty() || cell.equalsIgnoreCase("na") || cell.equalsIgnoreCase("nan")
+                || cell.equalsIgnoreCase("null") || cell.equals("-");
+    }
+
+    /** Parses a number; missing cells give NaN; anything else unparsable is a user error naming file and line. */
+    public double number(int row, int column) {
+        String c = rows.get(row)[column];
+        if (isMissing(c)) {
+            return Double.NaN;
+        }
+        try {
+            return Double.parseDouble(c);
+        } catch (NumberFormatException e) {
+            throw new UserInputException(where(row) + ": column '" + header.get(column) + "' value '" + c
+                    + "' is not a number; write a decimal number (point as separator) or leave the cell empty for missing");
+        }
+    }
+}

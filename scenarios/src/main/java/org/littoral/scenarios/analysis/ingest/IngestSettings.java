@@ -1,0 +1,37 @@
+package org.littoral.scenarios.analysis.ingest;
+
+import org.littoral.scenarios.cli.UserInputException;
+
+/**
+ * Settings of ingest and quality control. Public fields with documented defaults (see docs/analysis.md).
+ */
+public final class IngestSettings {
+    /** Height step of the bins, m. Default 5 m: the usual drone-profile bin (REFERENCES.md section 9). */
+    public double binStepM = 5.0;
+    /** RH above 100 % up to this value is capped at 100 % and logged (sensor overshoot); above it the value is removed. */
+    public double rhRemoveAbovePercent = 110.0;
+    /** A value in a Celsius temperature column above this looks like kelvin: removed and warned. */
+    public double kelvinLookingAboveC = 100.0;
+    /** Temperatures (C) outside [min, max] (and not kelvin-like) are removed. */
+    public double temperatureMinC = -90.0;
+    public double temperatureMaxC = 60.0;
+    /** Pressure (hPa) outside [min, max] is removed. */
+    public double pressureMinHPa = 100.0;
+    public double pressureMaxHPa = 1100.0;
+    /** Wind speed above this (m/s) is removed with its direction. */
+    public double windSpeedMaxMPerS = 80.0;
+    /** Mixing ratio above this (g/kg) is removed. */
+    public double mixingRatioMaxGPerKg = 50.0;
+    /** A raw flight with fewer ascending samples than this is removed (logged). */
+    public int minAscentSamples = 5;
+
+    public IngestSettings validate() {
+        if (!(binStepM > 0)) {
+            throw new UserInputException("ingest.binStepM = " + binStepM + " must be > 0 m (default 5)");
+        }
+        if (!(rhRemoveAbovePercent >= 100)) {
+            throw new UserInputException("ingest.rhRemoveAbovePercent = " + rhRemoveAbovePercent + " must be >= 100 (default 110)");
+        }
+        return this;
+    }
+}
