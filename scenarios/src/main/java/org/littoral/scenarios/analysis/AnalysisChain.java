@@ -11,7 +11,15 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.sounding.Profile;
+import org.littoral.scenarios.analysis.composite.CompositeRow;
+import org.littoral.scenarios.analysis.composite.CompositeSpec;
+import org.littoral.scenarios.analysis.composite.Composites;
 import org.littoral.scenarios.analysis.detect.Passage;
+import org.littoral.scenarios.analysis.metrics.DistributionRow;
+import org.littoral.scenarios.analysis.metrics.PassageResponse;
+import org.littoral.scenarios.analysis.metrics.ResponseMetrics;
+import org.littoral.scenarios.analysis.stats.ComparisonRow;
+import org.littoral.scenarios.analysis.stats.GroupComparisons;
 import org.littoral.scenarios.analysis.detect.PassageDetector;
 import org.littoral.scenarios.analysis.detect.PassageFinder;
 import org.littoral.scenarios.analysis.stats.BreezeType;
@@ -74,7 +82,65 @@ public final class AnalysisChain {
             attrs.put("breeze_type", type.name());
             results.add(new SiteDayResult(sd, o.passages(), o.unconfirmed(), o.notes(), ambient, source, type, attrs));
         }
-        return new AnalysisResult(results, notes);
+        List<PassageResponse> responses = new ArrayList<>();
+        for (SiteDayResult r : results) {
+            responses.addAll(ResponseMetrics.responses(r.siteDay(), r.passages(), coast, settings.metrics));
+        }
+        responses = ResponseMetrics.standardise(responses);
+        List<DistributionRow> distributions = ResponseMetrics.distributions(responses, settings.metrics);
+        List<CompositeRow> composites = new ArrayList<>();
+        for (CompositeSpec spec : settings.composites) {
+            composites.addAll(Composites.compute(results, coast, spec, settings.metrics.preWindowHours,
+                    settings.metrics.minValidFraction, notes));
+        }
+        List<ComparisonRow> comparisons = GroupComparisons.withHolm(compareGroups(results, responses, settings));
+        String note = GroupComparisons.note(comparisons.size(), settings.stats.alpha);
+        return new AnalysisResult(results, responses, distributions, composites, comparisons, note, notes);
+    }
+
+    /**
+     * Pairwise comparisons of every attribute in stats.groupBy, for the change of every metric layer and
+     * variable at the first onshore passage of each site-day (one value per site-day keeps the samples independent).
+     */
+    static List<ComparisonRow> compareGroups(List<SiteDayResult> days, List<PassageResponse> responses, AnalysisSettings s) {
+        List<ComparisonRow> rows = new ArrayList<>();
+        Map<Passage, SiteDayResult> first = new java.util.IdentityHashMap<>();
+        for (SiteDayResult r : days) {
+            Passage p = r.firstOnshorePassage();
+            if (p != null) {
+                first.put(p, r);
+            }
+        }
+        for (String attr : s.stats.groupBy) {
+            for (Layer layer : s.metrics.layers) {
+                for (Variable v : s.metrics.variables) {
+                    TreeMap<String, List<Double>> groups = new TreeMap<>();
+                    for (PassageResponse pr : responses) {
+                        SiteDayResult r = first.get(pr.passage());
+                        if (r == null || !pr.layer().equals(layer) || pr.variable() != v || Double.isNaN(pr.change())) {
+                            continue;
+                        }
+                        groups.computeIfAbsent(r.attributes().getOrDefault(attr, "(none)"), k -> new ArrayList<>())
+                                .add(pr.change());
+                    }
+                    List<String> names = new ArrayList<>();
+                    for (Map.Entry<String, List<Double>> e : groups.entrySet()) {
+                        if (e.getValue().size() >= s.stats.minGroupSize) {
+                            names.add(e.getKey());
+                        }
+                    }
+                    for (int i = 0; i < names.size(); i++) {
+                        for (int j = i + 1; j < names.size(); j++) {
+                            double[] a = groups.get(names.get(i)).stream().mapToDouble(Double::doubleValue).toArray();
+                            double[] b = groups.get(names.get(j)).stream().mapToDouble(Double::doubleValue).toArray();
+                            rows.add(GroupComparisons.compare("change " + v.column() + " " + layer.label(), attr, names.get(i), a,
+                                    names.get(j), b, s.stats));
+                        }
+                    }
+                }
+            }
+        }
+        return rows;
     }
 
     /** Site-days sorted by day then site, profiles in time order; two profiles at the same time are an error. */

@@ -1,9 +1,14 @@
 package org.littoral.scenarios.analysis;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
+import org.littoral.scenarios.analysis.composite.CompositeSpec;
 import org.littoral.scenarios.analysis.detect.DetectionSettings;
 import org.littoral.scenarios.analysis.ingest.IngestSettings;
+import org.littoral.scenarios.analysis.metrics.MetricSettings;
+import org.littoral.scenarios.analysis.stats.StatsSettings;
 import org.littoral.scenarios.analysis.stats.BreezeTyping;
 import org.littoral.scenarios.cli.UserInputException;
 
@@ -14,6 +19,15 @@ import org.littoral.scenarios.cli.UserInputException;
 public final class AnalysisSettings {
     public IngestSettings ingest = new IngestSettings();
     public DetectionSettings detection = new DetectionSettings();
+    public MetricSettings metrics = new MetricSettings();
+    public StatsSettings stats = new StatsSettings();
+
+    /**
+     * Composites. Default: theta, mixing ratio, theta-e and cross-shore wind in the 10-100 m layer, by
+     * time relative to the first onshore passage (anomalies, 30-min bins, -3..+4 h) and by hour of day
+     * (values, 1-h bins, 06-20 h), grouped by breeze type.
+     */
+    public List<CompositeSpec> composites = defaultComposites();
 
     /** Breeze typing sectors and weak-wind threshold (quadrants, 2 m/s). */
     public BreezeTyping breezeTyping = BreezeTyping.defaults();
@@ -36,10 +50,24 @@ public final class AnalysisSettings {
     public AnalysisSettings validate() {
         ingest.validate();
         detection.validate();
+        metrics.validate();
+        stats.validate();
         if (!(ambientToHours > ambientFromHours)) {
             throw new UserInputException("ambientToHours = " + ambientToHours + " must be after ambientFromHours = "
                     + ambientFromHours + " (defaults 6 and 10 h local)");
         }
         return this;
+    }
+
+    static List<CompositeSpec> defaultComposites() {
+        List<CompositeSpec> l = new ArrayList<>();
+        Layer near = new Layer(10, 100);
+        for (Variable v : List.of(Variable.THETA, Variable.MIXING_RATIO, Variable.THETA_E, Variable.CROSS_SHORE_WIND)) {
+            l.add(CompositeSpec.relative(v, near, "breeze_type"));
+        }
+        for (Variable v : List.of(Variable.THETA, Variable.MIXING_RATIO, Variable.THETA_E, Variable.CROSS_SHORE_WIND)) {
+            l.add(CompositeSpec.hourOfDay(v, near, "breeze_type"));
+        }
+        return l;
     }
 }

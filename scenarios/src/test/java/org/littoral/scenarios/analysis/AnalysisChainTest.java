@@ -113,4 +113,26 @@ class AnalysisChainTest {
         p.add(p.get(0));
         assertThrows(UserInputException.class, () -> AnalysisChain.group(p));
     }
+
+    @Test
+    void aSmallCampaignGivesResponsesCompositesAndGroupComparisons() {
+        List<Profile> all = new ArrayList<>();
+        for (int d = 0; d < 8; d++) {
+            double[] amb = Coast.eastNorthFromDirection(4, d < 4 ? 270 : 180);
+            all.addAll(profiles(SyntheticAscents.DaySpec.typical("A", "2024-07-0" + (d + 1), COAST, amb, 12.0 + 0.3 * d,
+                    Double.NaN, 100 + d)));
+        }
+        AnalysisResult r = AnalysisChain.run(all, COAST, new AnalysisSettings());
+        assertEquals(8, r.passages().size());
+        // The invented front moistens by 1.5 g/kg x (1 - z / 500 m), 1.335 g/kg on average over 10-100 m
+        // (the generator has no diurnal trend in mixing ratio).
+        double meanChange = r.responses().stream().filter(x -> x.variable() == Variable.MIXING_RATIO
+                && x.layer().bottomM() == 10).mapToDouble(x -> x.change()).average().orElse(Double.NaN);
+        assertEquals(1.5 * (1 - 55.0 / 500), meanChange, 0.1);
+        assertTrue(!r.composites().isEmpty());
+        assertTrue(r.comparisons().stream().allMatch(c -> c.groupA().equals("CORKSCREW") && c.groupB().equals("PURE")),
+                r.comparisons().toString());
+        assertEquals(3 * 7, r.comparisons().size()); // 3 layers x 7 variables, one pair
+        assertTrue(r.comparisonNote().startsWith("21 comparisons"));
+    }
 }

@@ -442,6 +442,9 @@ public final class ProfileCsvReader {
         double[] wind(int cSpeed, int cDir) {
             double s = t.number(row, cSpeed);
             double d = t.number(row, cDir);
+            if (s == 0.0 && Double.isNaN(d)) {
+                return new double[] {0.0, 0.0}; // calm: direction undefined, vector known
+            }
             if (Double.isNaN(s) || Double.isNaN(d)) {
                 return new double[] {Double.NaN, Double.NaN};
             }
