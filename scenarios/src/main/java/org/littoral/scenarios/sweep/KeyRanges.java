@@ -20,15 +20,15 @@ final class KeyRanges {
         }
     }
 
-    private static final Map<String, Range> BY_LEAF = Map.of(
-            "from_deg", new Range(0, 360, "deg (direction the wind blows from)", true),
-            "speed_m_per_s", new Range(0, 40, "m/s", false),
-            "latitude_deg", new Range(-90, 90, "deg", false),
-            "buoyancy_frequency_per_s", new Range(0, 0.05, "1/s", false),
-            "peak_flux_difference_W_m2", new Range(0, 1000, "W/m2", false),
-            "sst_K", new Range(250, 320, "K", false),
-            "bearing_land_to_sea_deg", new Range(0, 360, "deg", true),
-            "cloud_fraction", new Range(0, 1, "", false));
+    private static final Map<String, Range> BY_LEAF = Map.ofEntries(
+            Map.entry("from_deg", new Range(0, 360, "deg (direction the wind blows from)", true)),
+            Map.entry("speed_m_per_s", new Range(0, 40, "m/s", false)),
+            Map.entry("latitude_deg", new Range(-90, 90, "deg", false)),
+            Map.entry("buoyancy_frequency_per_s", new Range(0, 0.05, "1/s", false)),
+            Map.entry("peak_flux_difference_W_per_m2", new Range(0, 1500, "W/m2", false)),
+            Map.entry("sst_K", new Range(250, 320, "K", false)),
+            Map.entry("bearing_land_to_sea_deg", new Range(0, 360, "deg", true)),
+            Map.entry("cloud_fraction", new Range(0, 1, "", false)));
 
     private KeyRanges() {
     }

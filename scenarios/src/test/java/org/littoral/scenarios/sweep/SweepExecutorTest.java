@@ -60,7 +60,7 @@ class SweepExecutorTest {
         SweepSpec spec = KillableSweepMain.testSweep();
         SweepExecutor.run(spec, MemberExpander.expand(spec), tmp, new FakeMemberRunner(0), KillAndResumeTest.quiet(2, false));
         ObjectNode changedBase = spec.base().deepCopy();
-        ((ObjectNode) changedBase.get("heating")).put("peak_flux_difference_W_m2", 300.0);
+        ((ObjectNode) changedBase.get("heating")).put("peak_flux_difference_W_per_m2", 300.0);
         SweepSpec changed = new SweepSpec(spec.source(), spec.name(), spec.description(), spec.baseLabel(), changedBase,
                 spec.fixed(), spec.zip(), spec.axes(), spec.ensemble(), spec.typing());
         UserInputException e = assertThrows(UserInputException.class, () -> SweepExecutor.run(changed,

@@ -20,7 +20,7 @@ class SweepFileTest {
               kind: linear
               coast: {latitude_deg: 40.0, bearing_land_to_sea_deg: 270.0}
               ambient_wind: {from_deg: 270.0, speed_m_per_s: 0.0}
-              heating: {peak_flux_difference_W_m2: 250.0}
+              heating: {peak_flux_difference_W_per_m2: 250.0}
               atmosphere: {buoyancy_frequency_per_s: 0.01}
               surface:
                 segments:
@@ -165,7 +165,7 @@ class SweepFileTest {
                   draws:
                     ambient_wind.speed_m_per_s: {normal: {mean: 4, sd: 2, min: 0, max: 10}}
                     ambient_wind.from_deg: {uniform: {from: 180, to: 360}}
-                    heating.peak_flux_difference_W_m2: {choice: [200, 300, 400], weights: [1, 2, 1]}
+                    heating.peak_flux_difference_W_per_m2: {choice: [200, 300, 400], weights: [1, 2, 1]}
                 """;
         List<Member> a = MemberExpander.expand(read(ens.formatted(10, 42)));
         List<Member> b = MemberExpander.expand(read(ens.formatted(10, 42)));
@@ -191,7 +191,7 @@ class SweepFileTest {
                   members: 3
                   seed: 7
                   draws:
-                    heating.peak_flux_difference_W_m2: {uniform: {from: 150, to: 350}}
+                    heating.peak_flux_difference_W_per_m2: {uniform: {from: 150, to: 350}}
                 """);
         List<Member> m = MemberExpander.expand(s);
         assertEquals(6, m.size());
