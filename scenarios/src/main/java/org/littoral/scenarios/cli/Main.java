@@ -16,6 +16,7 @@ import picocli.CommandLine.ScopeType;
         subcommands = {
             ValidateCommand.class,
             BenchCommand.class,
+            org.littoral.scenarios.sweep.SweepCommand.class,
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
         })

@@ -3,8 +3,6 @@ package org.littoral.scenarios.sweep;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import com.fasterxml.jackson.dataformat.csv.CsvMapper;
-import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -13,6 +11,8 @@ import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
+import org.littoral.model.coast.Coast;
 import java.util.Map;
 
 /**
@@ -109,14 +109,16 @@ public final class ComparisonTable {
             bearing = t.coastBearingDeg().get(inputs).asDouble();
             lat = t.latitudeDeg().get(inputs).asDouble();
         } catch (IllegalArgumentException e) {
-            row.put("breeze_type", "n/a");
+            row.put("breeze_type", "undetermined");
             return;
         }
-        row.put("breeze_type", t.sectors().classify(from, speed, bearing, lat).label);
+        Coast coast = new Coast(lat, 0, 0, bearing, 1);
+        double[] en = Coast.eastNorthFromDirection(speed, from);
+        row.put("breeze_type", t.sectors().classify(en[0], en[1], coast).name().toLowerCase(Locale.ROOT));
         row.put("ambient_from_deg", from);
         row.put("ambient_speed_m_per_s", speed);
-        row.put("ambient_onshore_m_per_s", round(BreezeSectors.onshoreComponentMPerS(from, speed, bearing)));
-        row.put("ambient_alongshore_m_per_s", round(BreezeSectors.alongshoreComponentMPerS(from, speed, bearing)));
+        row.put("ambient_onshore_m_per_s", round(coast.crossShore(en[0], en[1])));
+        row.put("ambient_alongshore_m_per_s", round(coast.alongshore(en[0], en[1])));
     }
 
     /** Rounds away the 1e-16 residues of sin/cos so that a due-onshore wind shows alongshore 0. */
@@ -160,21 +162,33 @@ public final class ComparisonTable {
         }
     }
 
+    /** RFC 4180 quoting: only fields with a comma, quote or line break are quoted. */
+    private static void appendCsvLine(StringBuilder sb, List<Object> cells) {
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            Object v = cells.get(i);
+            String t = v == null ? "" : v.toString();
+            if (t.indexOf(',') >= 0 || t.indexOf('"') >= 0 || t.indexOf('\n') >= 0 || t.indexOf('\r') >= 0) {
+                t = '"' + t.replace("\"", "\"\"") + '"';
+            }
+            sb.append(t);
+        }
+        sb.append('\n');
+    }
+
     /** Writes {@code comparison.csv} and {@code comparison.json} atomically. */
     public void write(Path outDir, String sweepName) throws IOException {
-        CsvMapper csv = new CsvMapper();
         StringBuilder sb = new StringBuilder();
-        List<List<Object>> cells = new ArrayList<>();
-        cells.add(new ArrayList<>(columns));
+        appendCsvLine(sb, new ArrayList<>(columns));
         for (Map<String, Object> r : rows) {
             List<Object> line = new ArrayList<>();
             for (String c : columns) {
-                Object v = r.get(c);
-                line.add(v == null ? "" : v);
+                line.add(r.get(c));
             }
-            cells.add(line);
+            appendCsvLine(sb, line);
         }
-        sb.append(csv.writer(CsvSchema.emptySchema().withLineSeparator("\n")).writeValueAsString(cells));
         MemberStore.writeAtomically(outDir.resolve("comparison.csv"), sb.toString().getBytes(StandardCharsets.UTF_8));
 
         ObjectNode j = JsonNodeFactory.instance.objectNode();

@@ -85,6 +85,7 @@ public final class MemberStore {
     static void writeAtomically(Path target, byte[] bytes) throws IOException {
         Path tmp = Files.createTempFile(target.getParent(), "." + target.getFileName() + ".", TMP_SUFFIX);
         try {
+            readableByAll(tmp);
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
                 ByteBuffer b = ByteBuffer.wrap(bytes);
                 while (b.hasRemaining()) {
@@ -99,6 +100,13 @@ public final class MemberStore {
             }
         } finally {
             Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** Temp files are created owner-only; results are ordinary files that colleagues may read (rw-r--r--). */
+    private static void readableByAll(Path p) throws IOException {
+        if (p.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(p, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
         }
     }
 

@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.apache.commons.math3.special.Erf;
+import org.littoral.scenarios.analysis.stats.BreezeTyping;
 import org.littoral.scenarios.cli.UserInputException;
 
 /**
@@ -406,23 +407,26 @@ public final class SweepFile {
         }
         String w = "breeze_typing";
         requireObject(w, t);
-        onlyKeys(w, t, Set.of("shore_parallel_half_width_deg", "calm_below_m_per_s", "from_deg_key", "speed_key",
-                "coast_bearing_key", "latitude_key"));
-        double half = t.has("shore_parallel_half_width_deg")
-                ? number(w + ".shore_parallel_half_width_deg", t.get("shore_parallel_half_width_deg"))
-                : def.sectors().shoreParallelHalfWidthDeg();
-        if (!(half > 0 && half < 90)) {
-            throw err(w + ".shore_parallel_half_width_deg", "value " + half + " must be in (0, 90) deg (45 gives quadrants)");
+        onlyKeys(w, t, Set.of("onshore_half_width_deg", "offshore_half_width_deg", "weak_below_m_per_s", "from_deg_key",
+                "speed_key", "coast_bearing_key", "latitude_key"));
+        BreezeTyping d = def.sectors();
+        double on = t.has("onshore_half_width_deg") ? number(w + ".onshore_half_width_deg", t.get("onshore_half_width_deg"))
+                : d.onshoreHalfWidthDeg;
+        double off = t.has("offshore_half_width_deg") ? number(w + ".offshore_half_width_deg", t.get("offshore_half_width_deg"))
+                : d.offshoreHalfWidthDeg;
+        if (!(on >= 0 && off >= 0 && on + off <= 180)) {
+            throw err(w, "onshore_half_width_deg " + KeyRanges.fmt(on) + " and offshore_half_width_deg " + KeyRanges.fmt(off)
+                    + " must be >= 0 and add up to at most 180 deg (45 and 45 give quadrants)");
         }
-        double calm = t.has("calm_below_m_per_s") ? number(w + ".calm_below_m_per_s", t.get("calm_below_m_per_s"))
-                : def.sectors().calmBelowMPerS();
-        if (!(calm >= 0 && calm <= 40)) {
-            throw err(w + ".calm_below_m_per_s", "value " + calm + " must be in 0..40 m/s");
+        double weak = t.has("weak_below_m_per_s") ? number(w + ".weak_below_m_per_s", t.get("weak_below_m_per_s"))
+                : d.weakWindMPerS;
+        if (!(weak >= 0 && weak <= 40)) {
+            throw err(w + ".weak_below_m_per_s", "value " + KeyRanges.fmt(weak) + " must be in 0..40 m/s");
         }
         return new SweepSpec.Typing(
                 keyOr(t, w, "from_deg_key", def.fromDeg()), keyOr(t, w, "speed_key", def.speedMPerS()),
                 keyOr(t, w, "coast_bearing_key", def.coastBearingDeg()), keyOr(t, w, "latitude_key", def.latitudeDeg()),
-                new BreezeSectors(half, calm));
+                new BreezeTyping(on, off, weak));
     }
 
     private KeyPath keyOr(JsonNode t, String w, String key, KeyPath def) {

@@ -2,6 +2,7 @@ package org.littoral.scenarios.sweep;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
+import org.littoral.scenarios.analysis.stats.BreezeTyping;
 
 /**
  * A parsed sweep file: a base scenario document, fixed settings, swept axes (cartesian product or zipped) and
@@ -48,14 +49,15 @@ public record SweepSpec(String source, String name, String description, String b
     }
 
     /**
-     * Where the ambient wind and coast live in the scenario document, and the sector settings.
+     * Where the ambient wind and coast live in the scenario document, and the sectors of the analysis chain's
+     * {@link BreezeTyping} (the same classifier the observed days go through).
      */
     public record Typing(KeyPath fromDeg, KeyPath speedMPerS, KeyPath coastBearingDeg, KeyPath latitudeDeg,
-                         BreezeSectors sectors) {
+                         BreezeTyping sectors) {
         public static Typing defaults() {
             return new Typing(KeyPath.parse("ambient_wind.from_deg"), KeyPath.parse("ambient_wind.speed_m_per_s"),
                     KeyPath.parse("coast.bearing_land_to_sea_deg"), KeyPath.parse("coast.latitude_deg"),
-                    BreezeSectors.QUADRANTS);
+                    BreezeTyping.defaults());
         }
     }
 

@@ -36,7 +36,9 @@ final class FakeMemberRunner implements Function<Member, MemberResult> {
         if (speed == 9.0) {
             throw new IllegalStateException("model blew up at t = 11.5 h, x = 12 km; try a smaller time step");
         }
-        double onshore = BreezeSectors.onshoreComponentMPerS(from, speed, d.path("coast").path("bearing_land_to_sea_deg").asDouble());
+        double[] en = org.littoral.model.coast.Coast.eastNorthFromDirection(speed, from);
+        double onshore = new org.littoral.model.coast.Coast(40, 0, 0, d.path("coast").path("bearing_land_to_sea_deg").asDouble(), 1)
+                .crossShore(en[0], en[1]);
         ObjectNode s = JsonNodeFactory.instance.objectNode();
         s.put("onset_solar_h", 9.0 + 0.2 * onshore);
         s.put("max_penetration_km", Math.max(0, 40.0 - 3.0 * onshore));

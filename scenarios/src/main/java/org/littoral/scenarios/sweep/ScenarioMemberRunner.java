@@ -1,0 +1,121 @@
+package org.littoral.scenarios.sweep;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.function.Function;
+import java.util.stream.Stream;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.run.ScenarioRun;
+import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.scenario.BuiltinScenarios;
+import org.littoral.scenarios.scenario.Scenario;
+import org.littoral.scenarios.scenario.ScenarioFile;
+
+/**
+ * The real member runner: validates the member's scenario document with the scenario reader and runs it
+ * through {@code littoral run}'s pipeline ({@link ScenarioRun}), keeping the run's files under
+ * {@code runs/<id>/} (soundings for the analysis chain, the time-distance section) unless told not to.
+ * The member result is the run summary without the parts the member file already holds (inputs) or that say
+ * nothing about the member (file list, caution text).
+ */
+public final class ScenarioMemberRunner implements Function<Member, MemberResult> {
+    private final String sweepSource;
+    private final Path runsDir;
+    private final Solver solver;
+
+    /**
+     * @param sweepSource the sweep file, for messages
+     * @param runsDir folder for each member's run files, or null to run in a scratch folder that is deleted
+     * @param solver the model ({@link Solver#standard()} picks it from the scenario's {@code kind})
+     */
+    public ScenarioMemberRunner(String sweepSource, Path runsDir, Solver solver) {
+        this.sweepSource = sweepSource;
+        this.runsDir = runsDir;
+        this.solver = solver;
+    }
+
+    /** Base scenarios as the scenario reader sees them: every default filled in, so every key can be swept. */
+    public static ScenarioSource scenarioSource() {
+        return (ref, relativeTo) -> {
+            Path p = Path.of(ref);
+            if (!p.isAbsolute() && relativeTo != null && Files.isRegularFile(relativeTo.resolve(p))) {
+                p = relativeTo.resolve(p);
+            }
+            Scenario s = Files.isRegularFile(p) ? ScenarioFile.load(p) : BuiltinScenarios.resolve(ref);
+            return s.inputs().deepCopy();
+        };
+    }
+
+    /** Reads a member's document with the scenario reader; its errors name the member and its settings. */
+    public Scenario scenarioOf(Member m) {
+        String json;
+        try {
+            json = CanonicalJson.MAPPER.writeValueAsString(m.document());
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+        String label = "sweep " + sweepSource + " member " + m.id() + (m.settings().isEmpty() ? "" : " (" + m.describe() + ")");
+        return ScenarioFile.parse(label, json, true);
+    }
+
+    /** Checks every member before anything runs, so a bad combination stops the sweep at once. */
+    public void checkAll(List<Member> members) {
+        for (Member m : members) {
+            scenarioOf(m);
+        }
+    }
+
+    @Override
+    public MemberResult apply(Member m) {
+        Scenario s = scenarioOf(m);
+        Path dir = null;
+        boolean scratch = runsDir == null;
+        try {
+            dir = scratch ? Files.createTempDirectory("littoral-member-") : runsDir.resolve(m.id());
+            Files.createDirectories(dir);
+            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).run(dir);
+            return new MemberResult(trim(o.summary()));
+        } catch (IOException e) {
+            throw new UncheckedIOException("member " + m.id() + ": cannot write its run files to " + dir, e);
+        } finally {
+            if (scratch && dir != null) {
+                deleteTree(dir);
+            }
+        }
+    }
+
+    static ObjectNode trim(ObjectNode summary) {
+        ObjectNode out = JsonNodeFactory.instance.objectNode();
+        for (String k : new String[] {"model", "derived", "diagnostics", "note"}) {
+            JsonNode v = summary.get(k);
+            if (v != null) {
+                out.set(k, v);
+            }
+        }
+        if (out.path("diagnostics").isObject()) {
+            ((ObjectNode) out.get("diagnostics")).remove("definitions");
+        }
+        return out;
+    }
+
+    private static void deleteTree(Path dir) {
+        try (Stream<Path> s = Files.walk(dir)) {
+            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        } catch (IOException e) {
+            // a scratch folder that cannot be removed is harmless
+        }
+    }
+
+    /** Wraps scenario errors raised while checking members into one line naming the sweep. */
+    static UserInputException asSweepError(String source, UserInputException e) {
+        return new UserInputException(e.getMessage().startsWith("sweep ") ? e.getMessage() : "sweep " + source + ": " + e.getMessage(), e);
+    }
+}

@@ -1,0 +1,66 @@
+package org.littoral.scenarios.sweep;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.littoral.scenarios.run.Solver;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code littoral sweep SWEEP --out DIR [--resume] [--threads N]}. */
+@Command(name = "sweep", description = {"Run every member of a sweep or ensemble file on all cores and compare them side by side.",
+        "Writes members/<id>.json as each member finishes (atomically; --resume continues a killed sweep), then comparison.csv/json"
+                + " and comparison figures. Built-in sweeps: ambient-flow, ambient-ensemble. The sweep file format is in docs/sweeps.md."})
+public final class SweepCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "SWEEP", description = "Sweep file (YAML/JSON) or built-in sweep name.")
+    String sweep;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/sweeps/<sweep name>).")
+    Path out;
+
+    @Option(names = "--resume", description = "Skip members whose result is already in DIR (computed from the same inputs).")
+    boolean resume;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--no-run-files", description = "Do not keep each member's run files (soundings, sections) under DIR/runs.")
+    boolean noRunFiles;
+
+    @Option(names = "--list", description = "List the built-in sweeps and exit.")
+    boolean list;
+
+    @Override
+    public Integer call() throws Exception {
+        if (list || sweep == null) {
+            for (String b : SweepFile.BUILTINS) {
+                SweepSpec s = SweepFile.readBuiltin(b, ScenarioMemberRunner.scenarioSource());
+                System.out.printf("%-18s %4d members  %s%n", b, s.memberCount(), s.description());
+            }
+            if (sweep == null && !list) {
+                System.out.println("give a sweep: littoral sweep ambient-flow --out out/sweeps/ambient-flow");
+            }
+            return 0;
+        }
+        SweepSpec spec = SweepFile.load(sweep, ScenarioMemberRunner.scenarioSource());
+        Path dir = out != null ? out : Path.of("out", "sweeps", spec.name());
+        List<Member> members = MemberExpander.expand(spec);
+        ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), noRunFiles ? null : dir.resolve("runs"),
+                Solver.standard());
+        runner.checkAll(members);
+        int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner, SweepExecutor.Options.forCommandLine(n, resume));
+        ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
+        table.write(dir, spec.name());
+        List<Path> figures = ComparisonFigures.write(table, dir);
+        System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed); wrote "
+                + dir.resolve("comparison.csv") + ", comparison.json" + (figures.isEmpty() ? "" : " and " + figures.size() + " figure(s)"));
+        if (o.failed() > 0) {
+            System.out.println("littoral: " + o.failed() + " member(s) failed; their reasons are in the 'error' column and in members/<id>.json");
+            return 1;
+        }
+        return 0;
+    }
+}
