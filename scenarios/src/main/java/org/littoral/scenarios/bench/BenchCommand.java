@@ -15,6 +15,7 @@ public final class BenchCommand implements Callable<Integer> {
     /** Registered benchmarks, by name. Add new ones here. */
     static Map<String, Benchmark> registry() {
         Map<String, Benchmark> m = new LinkedHashMap<>();
+        m.put("analysis", new AnalysisBenchmark());
         return m;
     }
 
