@@ -26,6 +26,7 @@ public final class SoundingSampler {
     private final List<VirtualSite> sites;
     private final FlightSchedule schedule;
     private final SoundingSpec spec;
+    private final boolean periodic;
 
     private final double[] xM;
     private final double[] zM;
@@ -40,6 +41,16 @@ public final class SoundingSampler {
 
     public SoundingSampler(BreezeSolution solution, Coast coast, List<VirtualSite> sites, FlightSchedule schedule,
                            SoundingSpec spec) {
+        this(solution, coast, sites, schedule, spec, false);
+    }
+
+    /**
+     * @param periodic true when the solution repeats with the period endSec - startSec (the linear
+     *                 model's diurnal solution): times outside the span are wrapped into it instead of rejected
+     */
+    public SoundingSampler(BreezeSolution solution, Coast coast, List<VirtualSite> sites, FlightSchedule schedule,
+                           SoundingSpec spec, boolean periodic) {
+        this.periodic = periodic;
         this.solution = solution;
         this.coast = coast;
         this.sites = List.copyOf(sites);
@@ -126,7 +137,7 @@ public final class SoundingSampler {
         double[][][][] cols = new double[nodes + 1][ns][5][nz];
         for (double clockH : launches) {
             double t0 = modelTimeSec(clockH);
-            if (t0 < solution.startSec() - 1e-6 || t0 + ascentSec > solution.endSec() + 1e-6) {
+            if (!periodic && (t0 < solution.startSec() - 1e-6 || t0 + ascentSec > solution.endSec() + 1e-6)) {
                 throw new IllegalArgumentException("flight at " + clockH + " h local clock (model time " + t0
                         + " s) is outside the solution's span " + solution.startSec() + " to " + solution.endSec()
                         + " s; narrow the flight window or lengthen the run");
@@ -141,8 +152,17 @@ public final class SoundingSampler {
         return out;
     }
 
+    /** t wrapped into [startSec, endSec) for a periodic solution; unchanged otherwise. */
+    private double inSpan(double t) {
+        if (!periodic) {
+            return t;
+        }
+        double period = solution.endSec() - solution.startSec();
+        return solution.startSec() + ((t - solution.startSec()) % period + period) % period;
+    }
+
     private void fillColumns(double t, double[][][] perSite) {
-        Snapshot snap = solution.snapshotAt(t);
+        Snapshot snap = solution.snapshotAt(inSpan(t));
         for (int s = 0; s < siteColumn.length; s++) {
             int i = siteColumn[s];
             double w = siteColumnWeight[s];

@@ -115,4 +115,18 @@ class SoundingSamplerTest {
         assertThrows(IllegalArgumentException.class, () -> new SoundingSampler(sol, westCoast,
                 List.of(new VirtualSite("A", 1e3)), FlightSchedule.regular(30, 6, 20), SoundingSpec.of(3000, "t")));
     }
+
+    @Test
+    void aPeriodicSolutionWrapsFlightsPastItsSpan() {
+        // clock 23:58 at 45 E, UTC+0 is solar 02:58 next day: outside [0, 86400] unless wrapped
+        Coast east = new Coast(45, 45, 0, 270, 172);
+        AnalyticSolution sol = new AnalyticSolution(5, 0);
+        FlightSchedule late = FlightSchedule.regular(30, 23.9, 23.9);
+        assertThrows(IllegalArgumentException.class, () -> new SoundingSampler(sol, east, List.of(new VirtualSite("A", 0)), late,
+                SoundingSpec.of(100, "t")).sampleAll());
+        SoundingSampler wrapped = new SoundingSampler(sol, east, List.of(new VirtualSite("A", 0)), late, SoundingSpec.of(100, "t"), true);
+        Profile p = wrapped.sampleAll().get(0);
+        double t = wrapped.modelTimeSec(23.9) - 86400.0 + 2.5 / 2.0;
+        assertEquals(sol.theta(2.5, t), p.thetaK()[0], 1e-9);
+    }
 }

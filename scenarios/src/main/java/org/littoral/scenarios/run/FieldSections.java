@@ -52,15 +52,21 @@ public final class FieldSections {
      * Evaluates the solution at the given local clock times.
      *
      * @param siteXM cross-shore positions of the sites, m (inside the domain)
+     * @param periodic true when the solution repeats with period endSec - startSec (times are wrapped)
      * @param progress called after each time with (done, total); may be null
      */
     public static FieldSections evaluate(BreezeSolution sol, Coast coast, double[] clockHours, double nearSurfaceM,
-                                         double[] siteXM, java.util.function.BiConsumer<Integer, Integer> progress) {
+                                         double[] siteXM, boolean periodic,
+                                         java.util.function.BiConsumer<Integer, Integer> progress) {
         List<Double> keepClock = new ArrayList<>();
         List<Double> keepModel = new ArrayList<>();
         List<Double> dropped = new ArrayList<>();
         for (double h : clockHours) {
             double t = coast.solarHoursFromClock(h) * 3600.0;
+            if (periodic) {
+                double period = sol.endSec() - sol.startSec();
+                t = sol.startSec() + ((t - sol.startSec()) % period + period) % period;
+            }
             if (t >= sol.startSec() - 1e-6 && t <= sol.endSec() + 1e-6) {
                 keepClock.add(h);
                 keepModel.add(t);

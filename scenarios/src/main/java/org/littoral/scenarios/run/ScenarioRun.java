@@ -18,6 +18,7 @@ import org.littoral.model.sounding.Profile;
 import org.littoral.model.sounding.SoundingSampler;
 import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.analysis.ingest.ProfileColumns;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**
@@ -59,8 +60,10 @@ public final class ScenarioRun {
         say(String.format(Locale.ROOT, "solved in %.2f s; sampling soundings", (System.nanoTime() - t0) / 1e9));
         Coast coast = scenario.coast();
         List<VirtualSite> sites = scenario.sites();
+        // the linear model's solution is one periodic day
+        boolean periodic = scenario.kind() == Scenario.Kind.LINEAR;
         List<Profile> profiles = new SoundingSampler(sol, coast, sites, scenario.flights().schedule(),
-                scenario.flights().sounding()).sampleAll();
+                scenario.flights().sounding(), periodic).sampleAll();
         double[] siteX = new double[sites.size()];
         List<String> names = new ArrayList<>();
         for (int s = 0; s < siteX.length; s++) {
@@ -68,7 +71,7 @@ public final class ScenarioRun {
             names.add(sites.get(s).name());
         }
         Scenario.Output out = scenario.output();
-        FieldSections fs = FieldSections.evaluate(sol, coast, out.clockHours(), out.nearSurfaceM(), siteX, null);
+        FieldSections fs = FieldSections.evaluate(sol, coast, out.clockHours(), out.nearSurfaceM(), siteX, periodic, null);
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, siteX, out.onshoreThresholdMPerS());
         Snapshot peak = sol.snapshotAt(fs.modelSec[d.peakTimeIndex()]);
         BreezeDiagnostics.Circulation circ = BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, sol.background(), d.peakClockH(),
@@ -105,7 +108,7 @@ public final class ScenarioRun {
     /** Tidy binned profiles, one row per bin; the column set of the analysis chain's binned profile CSV. */
     static String soundingsCsv(List<Profile> profiles) {
         StringBuilder sb = new StringBuilder(profiles.size() * 120 * 110);
-        sb.append(ProfileCsvColumns.HEADER).append('\n');
+        sb.append(ProfileColumns.binnedHeader()).append('\n');
         for (Profile p : profiles) {
             for (int k = 0; k < p.size(); k++) {
                 sb.append(csvText(p.day())).append(',').append(csvText(p.site())).append(',');

@@ -96,6 +96,21 @@ class ScenarioRunTest {
     }
 
     @Test
+    void theAnalysisChainReadsTheSoundingsBackUnchanged(@TempDir Path dir) throws Exception {
+        ScenarioRun.Outcome o = run(dir);
+        var back = new org.littoral.scenarios.analysis.ingest.ProfileCsvReader(
+                new org.littoral.scenarios.analysis.ingest.IngestSettings()).read(dir.resolve("soundings.csv"));
+        assertEquals(o.profiles().size(), back.profiles().size());
+        var a = o.profiles().get(3);
+        var b = back.profiles().stream().filter(p -> p.site().equals(a.site()) && Math.abs(p.timeHours() - a.timeHours()) < 1e-3)
+                .findFirst().orElseThrow();
+        // written with 3 decimals in deg C and 2 in hPa
+        assertEquals(a.temperatureK()[40], b.temperatureK()[40], 1e-3);
+        assertEquals(a.pressurePa()[40], b.pressurePa()[40], 1.0);
+        assertEquals(a.windDirectionDeg(40), b.windDirectionDeg(40), 0.1);
+    }
+
+    @Test
     void clockTimesAreFormattedWithTheNextDayMarked() {
         assertEquals("13:15", ScenarioRun.clock(13.25));
         assertEquals("00:30 +1d", ScenarioRun.clock(24.5));
