@@ -109,7 +109,7 @@ public final class ProfileCsvReader {
             out.add(ProfileDerivation.profile(site, day, hours, z, p, tk, r, ue, vn));
             start = end;
         }
-        return new IngestResult(out, log, false);
+        return new IngestResult(out, log, false, extraAttributes(t, c, log));
     }
 
     // ------------------------------------------------------------------ raw
@@ -213,7 +213,51 @@ public final class ProfileCsvReader {
             }
             start = end;
         }
-        return new IngestResult(out, log, true);
+        return new IngestResult(out, log, true, extraAttributes(t, c, log));
+    }
+
+    /**
+     * Columns that are not profile columns carry per-day attributes (convection, tag, ...). A value
+     * must be constant within a site-day: the first is kept and any other is logged.
+     */
+    private static Map<String, Map<String, String>> extraAttributes(CsvTable t, Cols c, QcLog log) {
+        List<Integer> extra = new ArrayList<>();
+        for (int i = 0; i < t.header().size(); i++) {
+            String h = t.header().get(i);
+            if (!KNOWN.contains(h) && !h.startsWith(ProfileColumns.TEMPERATURE_C_SENSOR_PREFIX)
+                    && !h.startsWith(ProfileColumns.RH_PERCENT_SENSOR_PREFIX)) {
+                extra.add(i);
+            }
+        }
+        Map<String, Map<String, String>> out = new java.util.LinkedHashMap<>();
+        if (extra.isEmpty()) {
+            return out;
+        }
+        for (int row = 0; row < t.rowCount(); row++) {
+            String day = t.cell(row, c.day);
+            String site = t.cell(row, c.site);
+            Map<String, String> m = out.computeIfAbsent(day + "/" + site, k -> new java.util.LinkedHashMap<>());
+            for (int col : extra) {
+                String v = t.cell(row, col);
+                if (CsvTable.isMissing(v)) {
+                    continue;
+                }
+                String name = t.header().get(col);
+                String old = m.putIfAbsent(name, v);
+                if (old != null && !old.equals(v)) {
+                    log.add(t.fileName(), t.line(row), day, site, "", name, v, QcLog.Action.FLAGGED,
+                            "attribute-varies-within-day", "per-day attribute '" + name + "' changes within the day; kept '" + old + "'");
+                }
+            }
+        }
+        return out;
+    }
+
+    private static final Set<String> KNOWN = new java.util.HashSet<>(ProfileColumns.BINNED);
+
+    static {
+        KNOWN.add(ProfileColumns.FLIGHT_ID);
+        KNOWN.add(ProfileColumns.TIME_S);
     }
 
     private static double mean(double[][] a, int i) {
