@@ -16,6 +16,7 @@ public final class BenchCommand implements Callable<Integer> {
     static Map<String, Benchmark> registry() {
         Map<String, Benchmark> m = new LinkedHashMap<>();
         m.put("analysis", new AnalysisBenchmark());
+        m.put("sweep", new org.littoral.scenarios.sweep.SweepBenchmark());
         return m;
     }
 

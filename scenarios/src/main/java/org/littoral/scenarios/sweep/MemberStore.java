@@ -25,7 +25,7 @@ import java.util.TreeSet;
 public final class MemberStore {
 
     /** What a resumed run finds for a member. */
-    public enum State { ABSENT, VALID, UNREADABLE, OTHER_INPUTS }
+    public enum State { ABSENT, VALID, VALID_FAILED, UNREADABLE, OTHER_INPUTS }
 
     public static final String STATUS_OK = "ok";
     public static final String STATUS_FAILED = "failed";
@@ -126,7 +126,10 @@ public final class MemberStore {
                 || !(STATUS_OK.equals(n.path("status").asText()) || STATUS_FAILED.equals(n.path("status").asText()))) {
             return State.UNREADABLE;
         }
-        return m.inputsSha256().equals(n.path("inputs_sha256").asText()) ? State.VALID : State.OTHER_INPUTS;
+        if (!m.inputsSha256().equals(n.path("inputs_sha256").asText())) {
+            return State.OTHER_INPUTS;
+        }
+        return STATUS_OK.equals(n.path("status").asText()) ? State.VALID : State.VALID_FAILED;
     }
 
     /** Member ids that have a result file, sorted. */

@@ -23,6 +23,9 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--resume", description = "Skip members whose result is already in DIR (computed from the same inputs).")
     boolean resume;
 
+    @Option(names = "--retry-failed", description = "With --resume, run members that failed last time again.")
+    boolean retryFailed;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
@@ -51,7 +54,7 @@ public final class SweepCommand implements Callable<Integer> {
                 Solver.standard());
         runner.checkAll(members);
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner, SweepExecutor.Options.forCommandLine(n, resume));
+        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner, SweepExecutor.Options.forCommandLine(n, resume, retryFailed));
         ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
         table.write(dir, spec.name());
         List<Path> figures = ComparisonFigures.write(table, dir);

@@ -36,8 +36,10 @@ public final class SweepExecutor {
      * @param progressBar draw a progress bar (only sensible on a terminal); otherwise a line every
      *                    {@code throttleMillis} at most
      * @param throttleMillis minimum interval between plain progress lines
+     * @param retryFailed on resume, run members whose record says "failed" again (e.g. after fixing the cause)
      */
-    public record Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis) {
+    public record Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis,
+                          boolean retryFailed) {
         public Options {
             if (threads < 1) {
                 throw new UserInputException("--threads must be at least 1; got " + threads);
@@ -45,8 +47,13 @@ public final class SweepExecutor {
         }
 
         /** Terminal-aware defaults: a bar when there is a console, else a line at most every 15 s. */
-        public static Options forCommandLine(int threads, boolean resume) {
-            return new Options(threads, resume, System.err, System.console() != null, 15_000);
+        public static Options forCommandLine(int threads, boolean resume, boolean retryFailed) {
+            return new Options(threads, resume, System.err, System.console() != null, 15_000, retryFailed);
+        }
+
+        /** Options without retrying failed members. */
+        public Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis) {
+            this(threads, resume, log, progressBar, throttleMillis, false);
         }
     }
 
@@ -174,6 +181,11 @@ public final class SweepExecutor {
         for (Member m : members) {
             switch (store.check(m)) {
                 case VALID -> { }
+                case VALID_FAILED -> {
+                    if (opt.retryFailed()) {
+                        todo.add(m);
+                    }
+                }
                 case ABSENT -> todo.add(m);
                 case UNREADABLE -> {
                     opt.log().println("sweep: " + store.fileOf(m.id()) + " is unreadable; running member " + m.id() + " again");

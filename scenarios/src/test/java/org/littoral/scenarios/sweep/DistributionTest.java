@@ -9,7 +9,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 /** Moments of the draws against their textbook values, within 5 Monte-Carlo standard errors. */
 class DistributionTest {
-    static final int N = 40_000;
+    static final int N = 20_000;
 
     @ParameterizedTest
     @ValueSource(longs = {1, 2, 3})

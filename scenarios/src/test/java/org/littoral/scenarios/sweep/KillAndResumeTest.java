@@ -54,7 +54,8 @@ class KillAndResumeTest {
         MemberStore store = new MemberStore(killed);
         for (String id : store.presentIds()) {
             Member m = members.get(Integer.parseInt(id.substring(1)));
-            assertEquals(MemberStore.State.VALID, store.check(m), id);
+            MemberStore.State st = store.check(m);
+            assertTrue(st == MemberStore.State.VALID || st == MemberStore.State.VALID_FAILED, id + ": " + st);
         }
 
         FakeMemberRunner resumedRunner = new FakeMemberRunner(0);

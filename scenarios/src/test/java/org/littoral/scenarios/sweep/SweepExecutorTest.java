@@ -82,4 +82,18 @@ class SweepExecutorTest {
         assertArrayEquals(good, Files.readAllBytes(tmp.resolve("members/m0005.json")));
         assertTrue(Files.notExists(tmp.resolve("members/.m0007.json.123.tmp")));
     }
+
+    @Test
+    void failedMembersAreKeptOnResumeUnlessAskedToRetryThem() throws Exception {
+        SweepSpec spec = KillableSweepMain.testSweep();
+        List<Member> members = MemberExpander.expand(spec);
+        SweepExecutor.run(spec, members, tmp, new FakeMemberRunner(0), KillAndResumeTest.quiet(2, false));
+        FakeMemberRunner keep = new FakeMemberRunner(0);
+        SweepExecutor.run(spec, members, tmp, keep, KillAndResumeTest.quiet(2, true));
+        assertEquals(0, keep.calls.get());
+        FakeMemberRunner retry = new FakeMemberRunner(0);
+        SweepExecutor.run(spec, members, tmp, retry, new SweepExecutor.Options(2, true,
+                new java.io.PrintStream(java.io.OutputStream.nullOutputStream()), false, 0, true));
+        assertEquals(4, retry.calls.get(), "the four 9 m/s members that blew up");
+    }
 }
