@@ -17,6 +17,7 @@ import picocli.CommandLine.ScopeType;
             ValidateCommand.class,
             BenchCommand.class,
             org.littoral.scenarios.sweep.SweepCommand.class,
+            org.littoral.scenarios.plan.PlanCommand.class,
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
         })

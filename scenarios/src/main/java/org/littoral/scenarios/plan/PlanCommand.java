@@ -1,0 +1,211 @@
+package org.littoral.scenarios.plan;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import org.littoral.model.coast.SurfaceMap;
+import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.scenario.Scenario;
+import org.littoral.scenarios.sweep.Member;
+import org.littoral.scenarios.sweep.MemberExpander;
+import org.littoral.scenarios.sweep.MemberStore;
+import org.littoral.scenarios.sweep.SweepExecutor;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code littoral plan PLAN --out DIR}: where to put profiling sites and how often to fly. */
+@Command(name = "plan", description = {"Rank candidate site sets and flight cadences over an ensemble of plausible days.",
+        "Each member's synthetic soundings at every candidate distance go through the analysis chain's passage detectors; "
+                + "scores are the chance of catching the passage with enough profiles either side, of resolving the propagation "
+                + "speed, and of separating a bay breeze from the sea breeze. Plan file format: docs/planning.md. "
+                + "Built-in plans: bay-coast-plan.",
+        "Idealised model, not a forecast. Drone operations follow local aviation rules (ceilings, airspace, storms); those rules win."})
+public final class PlanCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "PLAN", description = "Plan file (YAML/JSON) or built-in plan name.")
+    String planRef;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/plans/<plan name>).")
+    Path out;
+
+    @Option(names = "--resume", description = "Skip members already computed in DIR from the same inputs.")
+    boolean resume;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--model", paramLabel = "MODEL", description = "Override the plan's model: linear (quick look) or nonlinear.")
+    String model;
+
+    @Override
+    public Integer call() throws Exception {
+        PlanSpec plan = PlanFile.load(planRef);
+        Path dir = out != null ? out : Path.of("out", "plans", plan.ensemble().name());
+        int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        if (n < 1) {
+            throw new UserInputException("--threads must be at least 1; got " + n);
+        }
+        String m = model != null ? model : plan.model();
+        if (!List.of("scenario", "linear", "nonlinear").contains(m)) {
+            throw new UserInputException("--model " + m + " is not one of [linear, nonlinear]");
+        }
+        PlanOutcome o = run(plan, m, dir, n, resume, System.err);
+        PlanOutputs.printSummary(plan, o.result(), System.out);
+        System.out.println("littoral: plan written to " + dir.resolve("plan.json") + ", " + dir.resolve("report.html"));
+        return 0;
+    }
+
+    /** What a plan run produced. */
+    public record PlanOutcome(PlanResult result, DenseWindow[][] windows, Path dir, double wallSeconds) {
+    }
+
+    /** Runs a plan end to end and writes its outputs; used by the command, the demo and the benchmark. */
+    public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log)
+            throws IOException, InterruptedException {
+        return run(plan, model, dir, threads, resume, log, Solver.standard());
+    }
+
+    /** As {@link #run(PlanSpec, String, Path, int, boolean, java.io.PrintStream)} with a given solver (tests, validation). */
+    public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
+                                  Solver solver) throws IOException, InterruptedException {
+        long t0 = System.nanoTime();
+        if (!model.equals("scenario")) {
+            plan.ensemble().base().put("kind", model);
+        }
+        List<Member> members = MemberExpander.expand(plan.ensemble());
+        AnalysisSettings settings = new AnalysisSettings();
+        PlanMemberRunner probe = new PlanMemberRunner(plan, solver, null, settings);
+        for (Member mm : members) {
+            probe.scenarioOf(mm);
+        }
+        Scenario first = probe.scenarioOf(members.get(0));
+        checkCandidates(plan, first);
+        DenseWindow[][] windows = windows(plan, members, probe, threads, log);
+        Files.createDirectories(dir);
+        checkResumeInputs(plan, model, windows, dir, resume);
+        PlanMemberRunner runner = new PlanMemberRunner(plan, solver, windows, settings);
+        SweepExecutor.Outcome so = SweepExecutor.run(plan.ensemble(), members, dir, runner,
+                new SweepExecutor.Options(threads, resume, log, System.console() != null, 15_000));
+        MemberStore store = new MemberStore(dir);
+        List<JsonNode> records = new ArrayList<>();
+        for (Member mm : members) {
+            ObjectNode rec = store.read(mm.id());
+            if (MemberStore.STATUS_OK.equals(rec.path("status").asText())) {
+                records.add(rec.get("result"));
+            }
+        }
+        SurfaceMap surface = first.surface();
+        List<Double> shores = surface.shorelinesM();
+        boolean hasBay = shores.size() >= 3;
+        double bayInland = hasBay ? shores.get(shores.size() - 1) / 1000.0 : Double.NaN;
+        PlanResult result = PlanResult.build(plan, records, so.failed(), windows, hasBay, bayInland);
+        if (so.failed() > 0) {
+            result.notes.add(so.failed() + " member(s) failed (see members/*.json); they are left out of every score");
+        }
+        double wall = (System.nanoTime() - t0) / 1e9;
+        PlanOutputs.write(dir, plan, model, first, result, windows, wall);
+        return new PlanOutcome(result, windows, dir, wall);
+    }
+
+    static void checkCandidates(PlanSpec plan, Scenario s) {
+        double lastM = s.xGrid().lastM();
+        for (int i = 0; i < plan.candidatesKm().length; i++) {
+            if (plan.candidatesKm()[i] * 1000.0 >= lastM) {
+                throw new UserInputException("plan file " + plan.ensemble().source() + ": plan.candidates_km[" + i + "]: value "
+                        + plan.candidatesKm()[i] + " km lies outside the model domain, which ends " + String.format(Locale.ROOT,
+                        "%.1f", lastM / 1000.0) + " km inland; use nearer candidates or a wider grid");
+            }
+        }
+    }
+
+    /** Automatic dense windows from the pilot members' arrival times (fixed windows need no pilot). */
+    static DenseWindow[][] windows(PlanSpec plan, List<Member> members, PlanMemberRunner probe, int threads,
+                                   java.io.PrintStream log) throws InterruptedException {
+        int nd = plan.candidatesKm().length;
+        DenseWindow[][] w = new DenseWindow[plan.cadences().size()][nd];
+        boolean anyAuto = plan.cadences().stream().anyMatch(CadenceOption::autoWindow);
+        if (!anyAuto) {
+            return w;
+        }
+        int pilot = Math.min(plan.pilotMembers(), members.size());
+        log.println("plan: " + pilot + " pilot member(s) set the dense windows from their arrival times");
+        double[][] truths = new double[pilot][];
+        ExecutorService pool = Executors.newFixedThreadPool(threads);
+        try {
+            List<Future<double[]>> fs = new ArrayList<>();
+            for (int k = 0; k < pilot; k++) {
+                Member mm = members.get(k);
+                fs.add(pool.submit(() -> probe.truthsOf(mm)));
+            }
+            for (int k = 0; k < pilot; k++) {
+                try {
+                    truths[k] = fs.get(k).get();
+                } catch (java.util.concurrent.ExecutionException e) {
+                    Throwable c = e.getCause();
+                    log.println("plan: pilot member " + members.get(k).id() + " failed (" + c.getMessage() + "); left out of the windows");
+                    truths[k] = null;
+                }
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        for (int c = 0; c < plan.cadences().size(); c++) {
+            CadenceOption opt = plan.cadences().get(c);
+            if (!opt.autoWindow()) {
+                continue;
+            }
+            for (int i = 0; i < nd; i++) {
+                List<Double> a = new ArrayList<>();
+                for (double[] t : truths) {
+                    if (t != null) {
+                        a.add(t[i]);
+                    }
+                }
+                w[c][i] = DenseWindow.fromArrivals(a.stream().mapToDouble(Double::doubleValue).toArray(), opt.intervalMin() / 60.0,
+                        plan.operatingStartH(), plan.operatingEndH());
+            }
+        }
+        return w;
+    }
+
+    /** A resumed plan must have the same options and windows; otherwise results would be mixed. */
+    static void checkResumeInputs(PlanSpec plan, String model, DenseWindow[][] windows, Path dir, boolean resume) throws IOException {
+        ObjectMapper json = new ObjectMapper();
+        ObjectNode inputs = json.createObjectNode();
+        inputs.put("model", model);
+        inputs.set("candidates_km", json.valueToTree(plan.candidatesKm()));
+        inputs.set("cadences", json.valueToTree(plan.cadences().stream().map(c -> c.name() + "|" + c.intervalMin() + "|"
+                + c.denseIntervalMin() + "|" + c.autoWindow() + "|" + c.denseStartH() + "|" + c.denseEndH()).toList()));
+        inputs.put("operating", plan.operatingStartH() + "-" + plan.operatingEndH());
+        inputs.put("ceiling_m", plan.ceilingM());
+        List<String> w = new ArrayList<>();
+        for (DenseWindow[] row : windows) {
+            for (DenseWindow d : row) {
+                w.add(d == null ? "-" : String.format(Locale.ROOT, "%.6f-%.6f", d.startClockH(), d.endClockH()));
+            }
+        }
+        inputs.set("windows", json.valueToTree(w));
+        Path f = dir.resolve("plan-inputs.json");
+        if (resume && Files.exists(f)) {
+            JsonNode old = json.readTree(f.toFile());
+            if (!old.equals(inputs)) {
+                throw new UserInputException("plan --resume: " + dir + " holds results computed with other plan options "
+                        + "(candidates, cadences, hours, ceiling, model or windows differ); use a new --out folder");
+            }
+        }
+        PlanOutputs.atomic(f, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(inputs));
+    }
+}
