@@ -7,11 +7,11 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
 /** Writes a file so that readers see either the old or the complete new content: temp file, then rename. */
-final class AtomicWrite {
+public final class AtomicWrite {
     private AtomicWrite() {
     }
 
-    static void write(Path target, byte[] content) throws IOException {
+    public static void write(Path target, byte[] content) throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
         Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");

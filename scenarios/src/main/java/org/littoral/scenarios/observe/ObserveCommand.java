@@ -1,0 +1,106 @@
+package org.littoral.scenarios.observe;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.stream.Stream;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.sounding.Profile;
+import org.littoral.scenarios.analysis.AnalysisChain;
+import org.littoral.scenarios.analysis.AnalysisResult;
+import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.analysis.ingest.DayTableReader;
+import org.littoral.scenarios.analysis.ingest.IngestResult;
+import org.littoral.scenarios.analysis.ingest.ProfileCsvReader;
+import org.littoral.scenarios.analysis.ingest.QcLog;
+import org.littoral.scenarios.cli.UserInputException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code littoral observe OBS --coast COAST --out DIR}: the analysis chain on observed profiles. */
+@Command(name = "observe", description = {"Analyse observed profiles: ingest and QC, passage detection, response metrics, "
+        + "composites and group statistics; tables (CSV/JSON), figures and a self-contained report.html.",
+        "OBS is a tidy profile CSV or a folder of them (columns: docs/analysis.md). The same chain analyses the model's synthetic soundings."})
+public final class ObserveCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "OBS", description = "Profile CSV file, or a folder of *.csv files.")
+    Path obs;
+
+    @Option(names = "--coast", required = true, paramLabel = "COAST",
+            description = "Coast file (latitude_deg, bearing_land_to_sea_deg, ...), a scenario file, or a built-in scenario name.")
+    String coastRef;
+
+    @Option(names = "--days", paramLabel = "DAYS.csv", description = "Per-day attribute table (day[, site], breeze_type, convection, tags, ...).")
+    Path days;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ${DEFAULT-VALUE}).", defaultValue = "out/observe")
+    Path out;
+
+    @Override
+    public Integer call() throws Exception {
+        Coast coast = CoastFile.load(coastRef);
+        AnalysisSettings settings = new AnalysisSettings();
+        Observed o = ingest(obs, settings);
+        if (days != null) {
+            settings.dayAttributes.putAll(DayTableReader.read(days));
+        }
+        Files.createDirectories(out);
+        o.qc().writeCsv(out.resolve("qc-log.csv"));
+        for (String w : o.qc().warnings()) {
+            System.err.println("littoral: QC warning: " + w);
+        }
+        AnalysisResult r = AnalysisChain.run(o.profiles(), coast, settings);
+        List<Path> files = AnalysisOutputs.write(out, r, o.qc(), "observed profiles " + obs, coast, o.profiles());
+        System.out.println("littoral: analysed " + o.profiles().size() + " profiles in " + r.siteDays().size() + " site-days; "
+                + r.passages().size() + " passages; wrote " + files.size() + " files to " + out + " (open report.html)");
+        return 0;
+    }
+
+    /** Profiles and QC log from a file or every CSV in a folder, with per-day attribute columns merged into the settings. */
+    public record Observed(List<Profile> profiles, QcLog qc) {
+    }
+
+    public static Observed ingest(Path obs, AnalysisSettings settings) throws IOException {
+        List<Path> files = new ArrayList<>();
+        if (Files.isDirectory(obs)) {
+            try (Stream<Path> s = Files.list(obs)) {
+                s.filter(p -> p.getFileName().toString().endsWith(".csv")).sorted().forEach(files::add);
+            }
+            if (files.isEmpty()) {
+                throw new UserInputException("observations folder " + obs + " holds no *.csv files; give a profile CSV or a folder of them");
+            }
+        } else if (Files.isRegularFile(obs)) {
+            files.add(obs);
+        } else {
+            throw new UserInputException("observations " + obs + " do not exist; give a profile CSV or a folder of them");
+        }
+        ProfileCsvReader reader = new ProfileCsvReader(settings.ingest);
+        List<Profile> profiles = new ArrayList<>();
+        QcLog qc = new QcLog();
+        for (Path f : files) {
+            IngestResult ir = reader.read(f);
+            profiles.addAll(ir.profiles());
+            qc.addAll(ir.qc());
+            for (Map.Entry<String, Map<String, String>> e : ir.dayAttributes().entrySet()) {
+                settings.dayAttributes.merge(e.getKey(), e.getValue(), (a, b) -> {
+                    a.putAll(b);
+                    return a;
+                });
+            }
+        }
+        if (profiles.isEmpty()) {
+            throw new UserInputException("no profiles left in " + obs + " after QC; see the QC log");
+        }
+        return new Observed(profiles, qc);
+    }
+
+    static void write(Path p, String text) throws IOException {
+        org.littoral.scenarios.run.AtomicWrite.write(p, text.getBytes(StandardCharsets.UTF_8));
+    }
+}
