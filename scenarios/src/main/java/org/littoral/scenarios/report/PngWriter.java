@@ -1,0 +1,14 @@
+package org.littoral.scenarios.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+
+/** Writes figures as PNG files atomically (temporary file in the same folder, then rename). */
+public final class PngWriter {
+    private PngWriter() {
+    }
+
+    public static void write(Figure figure, Path target) throws IOException {
+        AtomicFiles.write(target, figure.toPngBytes());
+    }
+}
