@@ -12,21 +12,17 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
-import org.knowm.xchart.BitmapEncoder;
-import org.knowm.xchart.BoxChart;
-import org.knowm.xchart.BoxChartBuilder;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYChartBuilder;
-import org.knowm.xchart.internal.chartpart.Chart;
-import org.knowm.xchart.style.markers.SeriesMarkers;
-import org.knowm.xchart.XYSeries.XYSeriesRenderStyle;
+import org.littoral.scenarios.report.AtomicFiles;
+import org.littoral.scenarios.report.BoxPlotFigure;
+import org.littoral.scenarios.report.Figure;
+import org.littoral.scenarios.report.ScatterFigure;
 
 /**
  * The side-by-side figures of a sweep, drawn from the comparison table: front arrival at each site against the
  * ambient wind speed, maximum inland penetration against the ambient wind speed (one series per breeze type in
  * both), and the post-passage changes at each site by breeze type (box plots). Columns are found by name in the
  * flattened member summaries, so the figures follow whatever the run pipeline reports; a figure whose columns
- * are absent is skipped and said so.
+ * are absent is skipped. Panels are drawn with the report library and laid side by side, up to three a row.
  */
 public final class ComparisonFigures {
     private static final int PANEL_W = 520;
@@ -37,18 +33,14 @@ public final class ComparisonFigures {
     private static final Pattern POST_PASSAGE = Pattern.compile("(?i).*(post_passage|change|delta).*");
     private static final List<String> TYPE_ORDER = List.of("pure", "corkscrew", "backdoor", "synoptic", "undetermined");
 
-    private static final Map<String, org.knowm.xchart.style.markers.Marker> MARKERS = Map.of(
-            "pure", SeriesMarkers.CIRCLE, "corkscrew", SeriesMarkers.SQUARE, "backdoor", SeriesMarkers.CROSS,
-            "synoptic", SeriesMarkers.TRIANGLE_UP, "undetermined", SeriesMarkers.DIAMOND);
-
     private ComparisonFigures() {
     }
 
     /** Writes the figures that the table has columns for; returns their paths. */
     public static List<Path> write(ComparisonTable t, Path outDir) throws IOException {
         List<Path> out = new ArrayList<>();
-        figure(out, outDir.resolve("arrival-vs-ambient.png"), scatterPanels(t, columns(t, ARRIVAL), "front arrival, local h"));
-        figure(out, outDir.resolve("penetration-vs-ambient.png"), scatterPanels(t, columns(t, PENETRATION), "km"));
+        figure(out, outDir.resolve("arrival-vs-ambient.png"), scatterPanels(t, columns(t, ARRIVAL), "onshore-flow arrival, local time", "h"));
+        figure(out, outDir.resolve("penetration-vs-ambient.png"), scatterPanels(t, columns(t, PENETRATION), "maximum inland penetration", "km"));
         figure(out, outDir.resolve("post-passage-by-type.png"), boxPanels(t, columns(t, POST_PASSAGE)));
         return out;
     }
@@ -72,26 +64,24 @@ public final class ComparisonFigures {
         return false;
     }
 
-    private static List<Chart<?, ?>> scatterPanels(ComparisonTable t, List<String> cols, String yTitle) {
-        List<Chart<?, ?>> panels = new ArrayList<>();
+    private static List<Figure> scatterPanels(ComparisonTable t, List<String> cols, String yTitle, String yUnit) {
+        List<Figure> panels = new ArrayList<>();
         double[] speed = t.numbers("ambient_speed_m_per_s");
         List<String> type = t.texts("breeze_type");
         for (String c : cols) {
             double[] y = t.numbers(c);
-            XYChart ch = new XYChartBuilder().width(PANEL_W).height(PANEL_H).title(shortName(c))
-                    .xAxisTitle("ambient wind speed, m/s").yAxisTitle(yTitle).build();
-            ch.getStyler().setDefaultSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
-            ch.getStyler().setMarkerSize(9);
-            ch.getStyler().setChartBackgroundColor(Color.WHITE);
-            boolean any = false;
-            for (Map.Entry<String, double[][]> e : byType(speed, y, type).entrySet()) {
-                // one shape per type, so that coinciding types (corkscrew and backdoor in the linear model) stay visible
-                ch.addSeries(e.getKey(), e.getValue()[0], e.getValue()[1]).setMarker(MARKERS.getOrDefault(e.getKey(), SeriesMarkers.CIRCLE));
-                any = true;
+            Map<String, double[][]> groups = byType(speed, y, type);
+            if (groups.isEmpty()) {
+                continue;
             }
-            if (any) {
-                panels.add(ch);
+            ScatterFigure.Builder b = ScatterFigure.builder().size(PANEL_W, PANEL_H).title(shortName(c))
+                    .x("ambient wind speed", "m/s").y(yTitle, yUnit);
+            // every breeze type gets its own marker and colour, so coinciding types (corkscrew and backdoor in
+            // the linear model) stay visible as overlapping shapes
+            for (Map.Entry<String, double[][]> e : groups.entrySet()) {
+                b.points(e.getKey(), e.getValue()[0], e.getValue()[1]);
             }
+            panels.add(b.build());
         }
         return panels;
     }
@@ -122,21 +112,21 @@ public final class ComparisonFigures {
         return m;
     }
 
-    private static List<Chart<?, ?>> boxPanels(ComparisonTable t, List<String> cols) {
-        List<Chart<?, ?>> panels = new ArrayList<>();
+    private static List<Figure> boxPanels(ComparisonTable t, List<String> cols) {
+        List<Figure> panels = new ArrayList<>();
         List<String> type = t.texts("breeze_type");
         for (String c : cols) {
             double[] y = t.numbers(c);
-            BoxChart ch = new BoxChartBuilder().width(PANEL_W).height(PANEL_H).title(shortName(c)).yAxisTitle(c.replaceAll(".*\\.", "")).build();
-            ch.getStyler().setChartBackgroundColor(Color.WHITE);
-            boolean any = false;
-            for (Map.Entry<String, double[][]> e : byType(y, y, type).entrySet()) {
-                ch.addSeries(e.getKey() + " (" + e.getValue()[1].length + ")", e.getValue()[1]);
-                any = true;
+            Map<String, double[][]> groups = byType(y, y, type);
+            if (groups.isEmpty()) {
+                continue;
             }
-            if (any) {
-                panels.add(ch);
+            BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(PANEL_W, PANEL_H).title(shortName(c))
+                    .y(c.replaceAll(".*\\.", ""), "").x("breeze type");
+            for (Map.Entry<String, double[][]> e : groups.entrySet()) {
+                b.group(e.getKey(), e.getValue()[1]);
             }
+            panels.add(b.build());
         }
         return panels;
     }
@@ -146,7 +136,7 @@ public final class ComparisonFigures {
         return column.replaceFirst("^diagnostics\\.", "").replace(".time_local_h", "");
     }
 
-    private static void figure(List<Path> written, Path file, List<Chart<?, ?>> panels) throws IOException {
+    private static void figure(List<Path> written, Path file, List<Figure> panels) throws IOException {
         if (panels.isEmpty()) {
             return;
         }
@@ -157,12 +147,12 @@ public final class ComparisonFigures {
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, img.getWidth(), img.getHeight());
         for (int k = 0; k < panels.size(); k++) {
-            g.drawImage(BitmapEncoder.getBufferedImage(panels.get(k)), (k % cols) * PANEL_W, (k / cols) * PANEL_H, null);
+            g.drawImage(panels.get(k).toImage(), (k % cols) * PANEL_W, (k / cols) * PANEL_H, null);
         }
         g.dispose();
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         ImageIO.write(img, "png", bytes);
-        MemberStore.writeAtomically(file, bytes.toByteArray());
+        AtomicFiles.write(file, bytes.toByteArray());
         written.add(file);
     }
 }

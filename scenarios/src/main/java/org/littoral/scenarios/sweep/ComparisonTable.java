@@ -1,10 +1,8 @@
 package org.littoral.scenarios.sweep;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -12,6 +10,8 @@ import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
+import org.littoral.scenarios.report.Table;
+import org.littoral.scenarios.report.TableWriter;
 import org.littoral.model.coast.Coast;
 import java.util.Map;
 
@@ -162,43 +162,23 @@ public final class ComparisonTable {
         }
     }
 
-    /** RFC 4180 quoting: only fields with a comma, quote or line break are quoted. */
-    private static void appendCsvLine(StringBuilder sb, List<Object> cells) {
-        for (int i = 0; i < cells.size(); i++) {
-            if (i > 0) {
-                sb.append(',');
+    /** The report library's table (CSV/JSON/HTML); a member without a value in a column gets null. */
+    public Table toTable() {
+        Table t = Table.of(columns);
+        for (Map<String, Object> r : rows) {
+            Object[] cells = new Object[columns.size()];
+            for (int i = 0; i < cells.length; i++) {
+                cells[i] = r.get(columns.get(i));
             }
-            Object v = cells.get(i);
-            String t = v == null ? "" : v.toString();
-            if (t.indexOf(',') >= 0 || t.indexOf('"') >= 0 || t.indexOf('\n') >= 0 || t.indexOf('\r') >= 0) {
-                t = '"' + t.replace("\"", "\"\"") + '"';
-            }
-            sb.append(t);
+            t.row(cells);
         }
-        sb.append('\n');
+        return t;
     }
 
-    /** Writes {@code comparison.csv} and {@code comparison.json} atomically. */
-    public void write(Path outDir, String sweepName) throws IOException {
-        StringBuilder sb = new StringBuilder();
-        appendCsvLine(sb, new ArrayList<>(columns));
-        for (Map<String, Object> r : rows) {
-            List<Object> line = new ArrayList<>();
-            for (String c : columns) {
-                line.add(r.get(c));
-            }
-            appendCsvLine(sb, line);
-        }
-        MemberStore.writeAtomically(outDir.resolve("comparison.csv"), sb.toString().getBytes(StandardCharsets.UTF_8));
-
-        ObjectNode j = JsonNodeFactory.instance.objectNode();
-        j.put("sweep", sweepName);
-        var cs = j.putArray("columns");
-        columns.forEach(cs::add);
-        var rs = j.putArray("rows");
-        for (Map<String, Object> r : rows) {
-            rs.add(CanonicalJson.MAPPER.valueToTree(r));
-        }
-        MemberStore.writeAtomically(outDir.resolve("comparison.json"), CanonicalJson.prettyBytes(j));
+    /** Writes {@code comparison.csv} and {@code comparison.json} (one object per member) atomically. */
+    public void write(Path outDir) throws IOException {
+        Table t = toTable();
+        TableWriter.writeCsv(t, outDir.resolve("comparison.csv"));
+        TableWriter.writeJson(t, outDir.resolve("comparison.json"));
     }
 }

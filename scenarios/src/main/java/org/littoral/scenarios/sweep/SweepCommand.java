@@ -56,7 +56,7 @@ public final class SweepCommand implements Callable<Integer> {
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
         SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner, SweepExecutor.Options.forCommandLine(n, resume, retryFailed));
         ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
-        table.write(dir, spec.name());
+        table.write(dir);
         List<Path> figures = ComparisonFigures.write(table, dir);
         System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed); wrote "
                 + dir.resolve("comparison.csv") + ", comparison.json" + (figures.isEmpty() ? "" : " and " + figures.size() + " figure(s)"));

@@ -37,7 +37,7 @@ class ComparisonTableTest {
         assertTrue(failed.get("error").toString().contains("blew up"));
         assertTrue(!failed.containsKey("max_penetration_km"));
 
-        t.write(tmp, spec.name());
+        t.write(tmp);
         List<String> csv = Files.readAllLines(tmp.resolve("comparison.csv"));
         assertEquals(25, csv.size());
         assertTrue(csv.get(0).startsWith("member,status,ambient_wind.from_deg,ambient_wind.speed_m_per_s,breeze_type"), csv.get(0));
