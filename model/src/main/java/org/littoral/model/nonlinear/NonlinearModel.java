@@ -1,0 +1,1095 @@
+package org.littoral.model.nonlinear;
+
+import org.littoral.model.coast.SurfaceSegment;
+import org.littoral.model.field.Background;
+import org.littoral.model.thermo.Thermo;
+
+/**
+ * The 2D (x, z) non-hydrostatic Boussinesq breeze model on an f-plane. Prognostic u (cross-shore), v
+ * (alongshore), w, theta and water-vapour mixing ratio r on an Arakawa C-grid, x periodic, rigid lid.
+ *
+ * <pre>
+ *   du/dt = -adv(u) - d(phi)/dx + f (v - Vg) - alpha (u - Ug) + mixing + drag
+ *   dv/dt = -adv(v)             - f (u - Ug) - alpha (v - Vg) + mixing + drag
+ *   dw/dt = -adv(w) - d(phi)/dz + b           - alpha w
+ *   d(theta)/dt = -adv(theta) + Q - alpha_N (theta - theta_0) + mixing (surface heat flux)
+ *   dr/dt       = -adv(r)         - alpha_N (r - r_0)         + mixing (surface moisture flux)
+ *   du/dx + dw/dz = 0,    b = g [(theta - theta_0) / theta_0 + 0.608 (r - r_0)]
+ * </pre>
+ *
+ * Time stepping: the three-stage strong-stability-preserving Runge-Kutta scheme of Shu &amp; Osher
+ * (1988), J. Comput. Phys. 77, 439-471, eq. (2.18), with a pressure projection (Chorin 1968, Math.
+ * Comp. 22, 745-762) after each stage; the step adapts to the Courant number and to N and f. Mixing,
+ * surface fluxes, drag and the sponges are applied implicitly (backward Euler, tridiagonal in z) once per
+ * step before the explicit stages (first-order splitting). Advection: scalars theta and r in flux form
+ * with the MUSCL piecewise-linear reconstruction (van Leer 1979, J. Comput. Phys. 32, 101-136) and the
+ * monotonised-central limiter (van Leer 1977, J. Comput. Phys. 23, 276-299), monotone and
+ * positivity-preserving at Courant sums up to 0.5; momentum by the third-order upwind-biased flux of
+ * Wicker &amp; Skamarock (2002), Mon. Wea. Rev. 130, 2088-2097, eq. (4).
+ *
+ * <p>Physics only: no I/O. Use {@link #run(NonlinearConfig)}.
+ */
+public final class NonlinearModel {
+    static final double KARMAN = 0.4;
+    /** Virtual-temperature factor 1/eps - 1 (e.g. Emanuel 1994, Atmospheric Convection, eq. 4.3.1). */
+    static final double VIRTUAL_FACTOR = 0.608;
+
+    private final NonlinearConfig cfg;
+    private final StaggeredGrid g;
+    private final PoissonSolver poisson;
+    private final int nx;
+    private final int nz;
+    private final double f;
+    private final double ug;
+    private final double vg;
+    private final boolean lin;
+    private final double invDx;
+
+    // background at centres and interfaces
+    private final double[] th0;
+    private final double[] dth0;
+    private final double[] q0;
+    private final double[] dq0;
+    private final double[] rho0;
+    private final double nMax;
+    private final double surfaceRho;
+    private final double surfacePressure;
+    private final Background background;
+
+    // state and stage copies
+    private final double[] u;
+    private final double[] v;
+    private final double[] w;
+    private final double[] th;
+    private final double[] q;
+    private final double[] un;
+    private final double[] vn;
+    private final double[] wn;
+    private final double[] thn;
+    private final double[] qn;
+    private final double[] tu;
+    private final double[] tv;
+    private final double[] tw;
+    private final double[] tth;
+    private final double[] tq;
+    private final double[] chi;
+    private final double[] phi;
+    // row and column work buffers
+    private final double[] fx;
+    private final double[] fzBot;
+    private final double[] fzTop;
+    private final double[] slopeA;
+    private final double[] slopeB;
+    private final double[] colA;
+    private final double[] colB;
+    private final double[] colC;
+    private final double[] colR;
+    private final double[] colK;
+
+    // surface and boundary layer per column
+    private final boolean[] land;
+    private final double[] z0;
+    private final double[] bowen;
+    private final double[] sstK;
+    private final double[] cd;
+    private final double[] windSfc;
+    private final double[] heatFluxKin;
+    private final double[] moistFluxKin;
+    private final double[] h;
+    private final double[] hWork;
+    private final double[] kIface;
+
+    // damping coefficients
+    private final double[] rTopC;
+    private final double[] rTopF;
+    private final double[] rLatC;
+    private final double[] rLatU;
+    private final int iLeftC;
+    private final int iRightC;
+    private final int iLeftU;
+    private final int iRightU;
+    private final double[] refL;
+    private final double[] refR;
+
+    private final double[] heatingBuf;
+    private double dtLast;
+    private final FarFieldColumn farLeft;
+    private final FarFieldColumn farRight;
+
+    private NonlinearModel(NonlinearConfig cfg) {
+        this.cfg = cfg;
+        this.g = new StaggeredGrid(cfg.xGrid(), cfg.zInterfaces());
+        this.poisson = new PoissonSolver(g);
+        this.nx = g.nx;
+        this.nz = g.nz;
+        this.f = cfg.coast().coriolisPerS();
+        double[] gw = cfg.geostrophicModelComponents();
+        this.ug = gw[0];
+        this.vg = gw[1];
+        this.lin = !cfg.switches().nonlinearTerms();
+        this.invDx = 1.0 / g.dx;
+
+        th0 = new double[nz];
+        dth0 = new double[nz];
+        q0 = new double[nz];
+        dq0 = new double[nz];
+        double n2max = 0;
+        for (int k = 0; k < nz; k++) {
+            th0[k] = cfg.theta().thetaK(g.zc[k]);
+            dth0[k] = cfg.theta().gradientKPerM(g.zc[k]);
+            double r = cfg.surfaceMixingRatio() + cfg.mixingRatioGradientPerM() * g.zc[k];
+            q0[k] = Math.max(1e-5, r);
+            dq0[k] = r > 1e-5 ? cfg.mixingRatioGradientPerM() : 0.0;
+            n2max = Math.max(n2max, Thermo.G / th0[k] * dth0[k]);
+        }
+        for (int k = 1; k < nz; k++) {
+            double zi = g.zf[k];
+            n2max = Math.max(n2max, Thermo.G / cfg.theta().thetaK(zi) * cfg.theta().gradientKPerM(zi));
+        }
+        nMax = Math.sqrt(n2max);
+        double[] uA = new double[nz];
+        double[] vA = new double[nz];
+        java.util.Arrays.fill(uA, ug);
+        java.util.Arrays.fill(vA, vg);
+        double[] p0 = Background.pressureFromTheta(g.zc, th0, q0, cfg.surfacePressurePa());
+        background = new Background(g.zc.clone(), th0.clone(), q0.clone(), p0, uA, vA);
+        rho0 = new double[nz];
+        for (int k = 0; k < nz; k++) {
+            rho0[k] = Thermo.densityKgM3(p0[k], Thermo.temperatureFromPotentialK(th0[k], p0[k]), q0[k]);
+        }
+        surfacePressure = cfg.surfacePressurePa();
+        double ts = Thermo.temperatureFromPotentialK(cfg.theta().thetaK(0.0), surfacePressure);
+        surfaceRho = Thermo.densityKgM3(surfacePressure, ts, cfg.surfaceMixingRatio());
+
+        int nc = nz * nx;
+        u = new double[nc];
+        v = new double[nc];
+        w = new double[(nz + 1) * nx];
+        th = new double[nc];
+        q = new double[nc];
+        un = new double[nc];
+        vn = new double[nc];
+        wn = new double[(nz + 1) * nx];
+        thn = new double[nc];
+        qn = new double[nc];
+        tu = new double[nc];
+        tv = new double[nc];
+        tw = new double[(nz + 1) * nx];
+        tth = new double[nc];
+        tq = new double[nc];
+        chi = new double[nc];
+        phi = new double[nc];
+        fx = new double[nx];
+        fzBot = new double[nx];
+        fzTop = new double[nx];
+        slopeA = new double[nx];
+        slopeB = new double[nx];
+        colA = new double[nz];
+        colB = new double[nz];
+        colC = new double[nz];
+        colR = new double[nz];
+        colK = new double[nz + 1];
+        heatingBuf = cfg.forcing() instanceof Forcing.PrescribedHeating ? new double[nc] : null;
+
+        land = new boolean[nx];
+        z0 = new double[nx];
+        bowen = new double[nx];
+        sstK = new double[nx];
+        cd = new double[nx];
+        windSfc = new double[nx];
+        heatFluxKin = new double[nx];
+        moistFluxKin = new double[nx];
+        h = new double[nx];
+        hWork = new double[nx];
+        kIface = new double[(nz + 1) * nx];
+        for (int i = 0; i < nx; i++) {
+            SurfaceSegment s = cfg.surface().at(g.xc[i]);
+            land[i] = s.isLand();
+            z0[i] = s.roughnessM();
+            if (s instanceof SurfaceSegment.Land l) {
+                bowen[i] = l.bowenRatio();
+                h[i] = cfg.boundaryLayer().initialDepthM();
+            } else if (s instanceof SurfaceSegment.Water wa) {
+                sstK[i] = wa.seaSurfaceTemperatureK();
+                h[i] = cfg.boundaryLayer().marineDepthM();
+            }
+            // neutral drag at the lowest level from the log law (e.g. Garratt 1992, The Atmospheric Boundary Layer, eq. 3.23)
+            double lnz = Math.log(g.zc[0] / z0[i]);
+            cd[i] = (KARMAN / lnz) * (KARMAN / lnz);
+        }
+
+        // damping coefficients: sin^2 ramps (Durran & Klemp 1983, Mon. Wea. Rev. 111, 2341-2361)
+        NonlinearConfig.Damping d = cfg.damping();
+        rTopC = new double[nz];
+        rTopF = new double[nz + 1];
+        if (d.topLayerFraction() > 0) {
+            double zd = g.topM() * (1.0 - d.topLayerFraction());
+            double depth = g.topM() - zd;
+            for (int k = 0; k < nz; k++) {
+                rTopC[k] = topRate(g.zc[k], zd, depth, d.topTimescaleS());
+            }
+            for (int k = 1; k < nz; k++) {
+                rTopF[k] = topRate(g.zf[k], zd, depth, d.topTimescaleS());
+            }
+        }
+        rLatC = new double[nx];
+        rLatU = new double[nx];
+        double width = d.lateralSpongeWidthM();
+        double left = g.xc[0] - 0.5 * g.dx;
+        double right = g.xc[nx - 1] + 0.5 * g.dx;
+        int il = 0;
+        int ir = nx - 1;
+        int ilu = 0;
+        int iru = nx - 1;
+        if (width > 0) {
+            while (il < nx && g.xc[il] - left < width) {
+                il++;
+            }
+            while (ir >= 0 && right - g.xc[ir] < width) {
+                ir--;
+            }
+            while (ilu < nx && g.xc[ilu] - 0.5 * g.dx - left < width) {
+                ilu++;
+            }
+            while (iru >= 0 && right - (g.xc[iru] - 0.5 * g.dx) < width) {
+                iru--;
+            }
+            for (int i = 0; i < nx; i++) {
+                rLatC[i] = lateralRate(g.xc[i], left, right, width, d.lateralTimescaleS());
+                rLatU[i] = lateralRate(g.xc[i] - 0.5 * g.dx, left, right, width, d.lateralTimescaleS());
+            }
+        }
+        iLeftC = il;
+        iRightC = ir;
+        iLeftU = ilu;
+        iRightU = iru;
+        refL = new double[nz + 1];
+        refR = new double[nz + 1];
+        farLeft = width > 0 ? new FarFieldColumn(iLeftC) : null;
+        farRight = width > 0 ? new FarFieldColumn(iRightC) : null;
+    }
+
+    private static double topRate(double z, double zd, double depth, double tau) {
+        if (z <= zd) {
+            return 0.0;
+        }
+        double s = Math.sin(0.5 * Math.PI * (z - zd) / depth);
+        return s * s / tau;
+    }
+
+    private static double lateralRate(double x, double left, double right, double width, double tau) {
+        double dist = Math.min(x - left, right - x);
+        if (dist >= width) {
+            return 0.0;
+        }
+        double s = Math.sin(0.5 * Math.PI * (1.0 - Math.max(0.0, dist) / width));
+        return s * s / tau;
+    }
+
+    /**
+     * Runs the model from start to end and returns the stored snapshots.
+     *
+     * @throws ModelBlowUpException when the run goes unstable (carries the partial solution)
+     */
+    public static NonlinearSolution run(NonlinearConfig config) {
+        return new NonlinearModel(config).integrate();
+    }
+
+    /** For tests: a model ready to integrate, whose final discrete divergence can be inspected. */
+    static NonlinearModel create(NonlinearConfig config) {
+        return new NonlinearModel(config);
+    }
+
+    /** Largest |du/dx + dw/dz| * dx / (typical |u|) of the current state: relative discrete divergence (tests). */
+    double maxRelativeDivergence() {
+        double maxD = 0;
+        double maxU = 1e-30;
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                double d = (u[o + g.ip1[i]] - u[o + i]) * invDx + (w[o + nx + i] - w[o + i]) / g.dzf[k];
+                maxD = Math.max(maxD, Math.abs(d));
+                maxU = Math.max(maxU, Math.abs(u[o + i] - ug));
+            }
+        }
+        return maxD * g.dx / maxU;
+    }
+
+    NonlinearSolution integrate() {
+        NonlinearSolution sol = new NonlinearSolution(g.xc, g.zc, background);
+        initialise();
+        double t0 = cfg.startSolarHours() * 3600.0;
+        double tEnd = cfg.endSolarHours() * 3600.0;
+        double interval = cfg.outputIntervalS();
+        double t = t0;
+        long steps = 0;
+        store(sol, t);
+        int nOut = 1;
+        double nextOut = Math.min(t0 + nOut * interval, tEnd);
+        while (t < tEnd - 1e-6) {
+            double dt = chooseStep();
+            if (t + dt > nextOut - 1e-6) {
+                dt = nextOut - t;
+            } else if (t + 1.5 * dt > nextOut) {
+                dt = 0.5 * (nextOut - t); // two similar steps rather than one tiny one
+            }
+            dtLast = dt;
+            implicitPhysics(t, dt);
+            // mixing, drag and sponges change u and w column by column: remove the divergence they leave
+            // before flux-form advection sees it (a divergent flow would act as a spurious source of theta)
+            project(dt);
+            rk3(t, dt);
+            t += dt;
+            steps++;
+            checkBlowUp(t, sol, steps);
+            if (Math.abs(t - nextOut) < 1e-6) {
+                t = nextOut;
+                store(sol, t);
+                nOut++;
+                nextOut = Math.min(t0 + nOut * interval, tEnd);
+            }
+        }
+        sol.finish(true, steps);
+        return sol;
+    }
+
+    private void initialise() {
+        ScalarField thp = cfg.initialThetaPerturbationK();
+        ScalarField up = cfg.initialUPerturbationMPerS();
+        ScalarField qp = cfg.initialMixingRatioPerturbation();
+        for (int k = 0; k < nz; k++) {
+            for (int i = 0; i < nx; i++) {
+                int n = k * nx + i;
+                u[n] = ug + up.at(g.xc[i] - 0.5 * g.dx, g.zc[k]);
+                v[n] = vg;
+                th[n] = th0[k] + thp.at(g.xc[i], g.zc[k]);
+                q[n] = Math.max(0.0, q0[k] + qp.at(g.xc[i], g.zc[k]));
+            }
+        }
+        project(1.0);
+        java.util.Arrays.fill(phi, 0.0);
+    }
+
+    // ---------------------------------------------------------------- step control
+
+    private double chooseStep() {
+        double c = 0;
+        if (lin) {
+            c = Math.abs(ug) * invDx;
+        } else {
+            for (int k = 0; k < nz; k++) {
+                double idz = 1.0 / g.dzf[k];
+                int o = k * nx;
+                for (int i = 0; i < nx; i++) {
+                    double cu = Math.max(Math.abs(u[o + i]), Math.abs(u[o + g.ip1[i]])) * invDx;
+                    double cw = Math.max(Math.abs(w[o + i]), Math.abs(w[o + nx + i])) * idz;
+                    if (cu + cw > c) {
+                        c = cu + cw;
+                    }
+                }
+            }
+        }
+        NonlinearConfig.Numerics num = cfg.numerics();
+        double dt = num.maxStepS();
+        if (c > 0) {
+            dt = Math.min(dt, num.courantNumber() / c);
+        }
+        if (nMax > 0) {
+            dt = Math.min(dt, num.buoyancyStepFactor() / nMax);
+        }
+        if (f != 0) {
+            dt = Math.min(dt, num.buoyancyStepFactor() / Math.abs(f));
+        }
+        double rate = cfg.damping().rayleighFrictionPerS() + cfg.damping().newtonianCoolingPerS();
+        if (rate > 0) {
+            dt = Math.min(dt, 1.0 / rate);
+        }
+        return dt;
+    }
+
+    // ---------------------------------------------------------------- SSP-RK3 with projection
+
+    private void rk3(double t, double dt) {
+        System.arraycopy(u, 0, un, 0, u.length);
+        System.arraycopy(v, 0, vn, 0, v.length);
+        System.arraycopy(w, 0, wn, 0, w.length);
+        System.arraycopy(th, 0, thn, 0, th.length);
+        System.arraycopy(q, 0, qn, 0, q.length);
+        // Shu & Osher (1988) eq. 2.18: u1 = un + dt L(un); u2 = 3/4 un + 1/4 (u1 + dt L(u1));
+        // u(n+1) = 1/3 un + 2/3 (u2 + dt L(u2)); stage times t, t + dt, t + dt/2.
+        stage(t, dt, 0.0, 1.0);
+        stage(t + dt, dt, 0.75, 0.25);
+        stage(t + 0.5 * dt, dt, 1.0 / 3.0, 2.0 / 3.0);
+    }
+
+    private void stage(double t, double dt, double a, double b) {
+        tendencies(t);
+        combine(u, un, tu, a, b, dt);
+        combine(v, vn, tv, a, b, dt);
+        combine(w, wn, tw, a, b, dt);
+        combine(th, thn, tth, a, b, dt);
+        combine(q, qn, tq, a, b, dt);
+        project(b * dt);
+    }
+
+    private static void combine(double[] x, double[] xn, double[] tx, double a, double b, double dt) {
+        if (a == 0.0) {
+            for (int n = 0; n < x.length; n++) {
+                x[n] = x[n] + dt * tx[n];
+            }
+        } else {
+            for (int n = 0; n < x.length; n++) {
+                x[n] = a * xn[n] + b * (x[n] + dt * tx[n]);
+            }
+        }
+    }
+
+    /** Removes the divergence of (u, w); phi = chi / dtEff is the kinematic pressure p' / rho_0. */
+    private void project(double dtEff) {
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            double idz = 1.0 / g.dzf[k];
+            for (int i = 0; i < nx; i++) {
+                chi[o + i] = (u[o + g.ip1[i]] - u[o + i]) * invDx + (w[o + nx + i] - w[o + i]) * idz;
+            }
+        }
+        poisson.solve(chi, chi);
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                u[o + i] -= (chi[o + i] - chi[o + g.im1[i]]) * invDx;
+            }
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            double idz = 1.0 / g.dzc[k];
+            for (int i = 0; i < nx; i++) {
+                w[o + i] -= (chi[o + i] - chi[o - nx + i]) * idz;
+            }
+        }
+        double inv = 1.0 / dtEff;
+        for (int n = 0; n < chi.length; n++) {
+            phi[n] = chi[n] * inv;
+        }
+    }
+
+    // ---------------------------------------------------------------- explicit tendencies
+
+    private void tendencies(double t) {
+        java.util.Arrays.fill(tu, 0.0);
+        java.util.Arrays.fill(tv, 0.0);
+        java.util.Arrays.fill(tw, 0.0);
+        java.util.Arrays.fill(tth, 0.0);
+        java.util.Arrays.fill(tq, 0.0);
+        advectU();
+        advectCentre3(v, tv);
+        advectW();
+        advectCentreLimited(th, tth);
+        advectCentreLimited(q, tq);
+        double alpha = cfg.damping().rayleighFrictionPerS();
+        double alphaN = cfg.damping().newtonianCoolingPerS();
+        boolean moist = cfg.switches().moistureBuoyancy();
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                int n = o + i;
+                tu[n] += f * (0.5 * (v[o + g.im1[i]] + v[n]) - vg) - alpha * (u[n] - ug);
+                tv[n] += -f * (0.5 * (u[n] + u[o + g.ip1[i]]) - ug) - alpha * (v[n] - vg);
+                tth[n] -= alphaN * (th[n] - th0[k]);
+                tq[n] -= alphaN * (q[n] - q0[k]);
+            }
+            if (lin) {
+                // linearised vertical advection of the basic state: -w d(theta_0)/dz, -w d(r_0)/dz
+                for (int i = 0; i < nx; i++) {
+                    double wc = 0.5 * (w[o + i] + w[o + nx + i]);
+                    tth[o + i] -= wc * dth0[k];
+                    tq[o + i] -= wc * dq0[k];
+                }
+            }
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            double wl = g.wLo[k];
+            double bl = Thermo.G * wl / th0[k - 1];
+            double bh = Thermo.G * (1.0 - wl) / th0[k];
+            for (int i = 0; i < nx; i++) {
+                int n = o + i;
+                double b = bl * (th[n - nx] - th0[k - 1]) + bh * (th[n] - th0[k]);
+                if (moist) {
+                    b += Thermo.G * VIRTUAL_FACTOR * (wl * (q[n - nx] - q0[k - 1]) + (1.0 - wl) * (q[n] - q0[k]));
+                }
+                tw[n] += b - alpha * w[n];
+            }
+        }
+        if (cfg.forcing() instanceof Forcing.PrescribedHeating ph) {
+            HeatingRate hr = ph.heating();
+            for (int k = 0; k < nz; k++) {
+                for (int i = 0; i < nx; i++) {
+                    tth[k * nx + i] += hr.kelvinPerSecond(g.xc[i], g.zc[k], t);
+                }
+            }
+        }
+    }
+
+    /** Third-order upwind-biased flux, Wicker &amp; Skamarock (2002) eq. 4: 4th-order centred plus |a| dissipation. */
+    private static double flux3(double a, double fm1, double f0, double fp1, double fp2) {
+        return a * (7.0 * (f0 + fp1) - (fm1 + fp2)) / 12.0 + Math.abs(a) * ((fp2 - fm1) - 3.0 * (fp1 - f0)) / 12.0;
+    }
+
+    /** Monotonised-central limited slope (van Leer 1977): minmod(2 dm, 2 dp, (dm + dp) / 2). */
+    private static double mcSlope(double dm, double dp) {
+        if (dm * dp <= 0.0) {
+            return 0.0;
+        }
+        double c = 0.5 * (dm + dp);
+        double lim = 2.0 * Math.min(Math.abs(dm), Math.abs(dp));
+        return Math.abs(c) < lim ? c : Math.copySign(lim, c);
+    }
+
+    private void advectCentreLimited(double[] s, double[] ts) {
+        int[] im = g.im1;
+        int[] ip = g.ip1;
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                slopeA[i] = mcSlope(s[o + i] - s[o + im[i]], s[o + ip[i]] - s[o + i]);
+            }
+            for (int i = 0; i < nx; i++) {
+                double a = lin ? ug : u[o + i];
+                int l = im[i];
+                double face = a >= 0 ? s[o + l] + 0.5 * slopeA[l] : s[o + i] - 0.5 * slopeA[i];
+                fx[i] = a * face;
+            }
+            for (int i = 0; i < nx; i++) {
+                ts[o + i] -= (fx[ip[i]] - fx[i]) * invDx;
+            }
+        }
+        if (lin) {
+            return;
+        }
+        // vertical: slopes of the boundary layers are zero (first order next to ground and lid)
+        java.util.Arrays.fill(fzBot, 0.0);
+        java.util.Arrays.fill(slopeA, 0.0); // slope of layer k
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            if (k + 1 < nz) {
+                if (k + 1 < nz - 1) {
+                    for (int i = 0; i < nx; i++) {
+                        slopeB[i] = mcSlope(s[o + nx + i] - s[o + i], s[o + 2 * nx + i] - s[o + nx + i]);
+                    }
+                } else {
+                    java.util.Arrays.fill(slopeB, 0.0);
+                }
+                for (int i = 0; i < nx; i++) {
+                    double a = w[o + nx + i];
+                    double face = a >= 0 ? s[o + i] + 0.5 * slopeA[i] : s[o + nx + i] - 0.5 * slopeB[i];
+                    fzTop[i] = a * face;
+                }
+            } else {
+                java.util.Arrays.fill(fzTop, 0.0);
+            }
+            double idz = 1.0 / g.dzf[k];
+            for (int i = 0; i < nx; i++) {
+                ts[o + i] -= (fzTop[i] - fzBot[i]) * idz;
+                fzBot[i] = fzTop[i];
+                slopeA[i] = slopeB[i];
+            }
+        }
+    }
+
+    /** Advection of a centred momentum component (v) with the third-order flux. */
+    private void advectCentre3(double[] s, double[] ts) {
+        int[] im = g.im1;
+        int[] ip = g.ip1;
+        int[] im2 = g.im2;
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                double a = lin ? ug : u[o + i];
+                fx[i] = flux3(a, s[o + im2[i]], s[o + im[i]], s[o + i], s[o + ip[i]]);
+            }
+            for (int i = 0; i < nx; i++) {
+                ts[o + i] -= (fx[ip[i]] - fx[i]) * invDx;
+            }
+        }
+        if (lin) {
+            return;
+        }
+        java.util.Arrays.fill(fzBot, 0.0);
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            int kf = k + 1; // top interface of layer k
+            if (kf < nz) {
+                boolean full = kf >= 2 && kf <= nz - 2;
+                double wl = g.wLo[kf];
+                for (int i = 0; i < nx; i++) {
+                    double a = w[kf * nx + i];
+                    int n = o + i;
+                    fzTop[i] = full ? flux3(a, s[n - nx], s[n], s[n + nx], s[n + 2 * nx])
+                            : a * (wl * s[n] + (1.0 - wl) * s[n + nx]);
+                }
+            } else {
+                java.util.Arrays.fill(fzTop, 0.0);
+            }
+            double idz = 1.0 / g.dzf[k];
+            for (int i = 0; i < nx; i++) {
+                ts[o + i] -= (fzTop[i] - fzBot[i]) * idz;
+                fzBot[i] = fzTop[i];
+            }
+        }
+    }
+
+    private void advectU() {
+        int[] im = g.im1;
+        int[] ip = g.ip1;
+        int[] ip2 = g.ip2;
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            // flux through cell centre i, the east side of the u control volume around face i
+            for (int i = 0; i < nx; i++) {
+                double a = lin ? ug : 0.5 * (u[o + i] + u[o + ip[i]]);
+                fx[i] = flux3(a, u[o + im[i]], u[o + i], u[o + ip[i]], u[o + ip2[i]]);
+            }
+            for (int i = 0; i < nx; i++) {
+                tu[o + i] -= (fx[i] - fx[im[i]]) * invDx;
+            }
+        }
+        if (lin) {
+            return;
+        }
+        java.util.Arrays.fill(fzBot, 0.0);
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            int kf = k + 1;
+            if (kf < nz) {
+                boolean full = kf >= 2 && kf <= nz - 2;
+                double wl = g.wLo[kf];
+                for (int i = 0; i < nx; i++) {
+                    double a = 0.5 * (w[kf * nx + im[i]] + w[kf * nx + i]);
+                    int n = o + i;
+                    fzTop[i] = full ? flux3(a, u[n - nx], u[n], u[n + nx], u[n + 2 * nx])
+                            : a * (wl * u[n] + (1.0 - wl) * u[n + nx]);
+                }
+            } else {
+                java.util.Arrays.fill(fzTop, 0.0);
+            }
+            double idz = 1.0 / g.dzf[k];
+            for (int i = 0; i < nx; i++) {
+                tu[o + i] -= (fzTop[i] - fzBot[i]) * idz;
+                fzBot[i] = fzTop[i];
+            }
+        }
+    }
+
+    private void advectW() {
+        int[] im = g.im1;
+        int[] ip = g.ip1;
+        int[] ip2 = g.ip2;
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            double wl = g.wLo[k];
+            for (int i = 0; i < nx; i++) {
+                // flux through x_{i+1/2} at interface k
+                double a = lin ? ug : wl * u[o - nx + ip[i]] + (1.0 - wl) * u[o + ip[i]];
+                fx[i] = flux3(a, w[o + im[i]], w[o + i], w[o + ip[i]], w[o + ip2[i]]);
+            }
+            for (int i = 0; i < nx; i++) {
+                tw[o + i] -= (fx[i] - fx[im[i]]) * invDx;
+            }
+        }
+        if (lin) {
+            return;
+        }
+        // vertical flux through layer centre k (between interfaces k and k+1)
+        for (int i = 0; i < nx; i++) {
+            double a = 0.5 * (w[i] + w[nx + i]);
+            fzBot[i] = a * a;
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            boolean full = k + 2 <= nz;
+            for (int i = 0; i < nx; i++) {
+                int n = o + i;
+                double a = 0.5 * (w[n] + w[n + nx]);
+                fzTop[i] = full ? flux3(a, w[n - nx], w[n], w[n + nx], w[n + 2 * nx]) : a * a;
+            }
+            double idz = 1.0 / g.dzc[k];
+            for (int i = 0; i < nx; i++) {
+                tw[o + i] -= (fzTop[i] - fzBot[i]) * idz;
+                fzBot[i] = fzTop[i];
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- implicit physics (split)
+
+    private void implicitPhysics(double t, double dt) {
+        if (farLeft != null) {
+            farLeft.step(t, dt);
+            farRight.step(t, dt);
+        }
+        surfaceFluxes(t);
+        if (cfg.switches().mixing()) {
+            mixedLayer(t, dt);
+            verticalMixing(dt);
+        } else {
+            double idz = dt / g.dzf[0];
+            for (int i = 0; i < nx; i++) {
+                th[i] += heatFluxKin[i] * idz;
+                q[i] = Math.max(0.0, q[i] + moistFluxKin[i] * idz);
+            }
+        }
+        sponges(dt);
+    }
+
+    /**
+     * Surface heat and moisture fluxes (kinematic: K m/s and kg/kg m/s) for the prescribed-flux forcing.
+     * Water: bulk formulas with the Large &amp; Pond (1982) neutral coefficients C_H = 1.13e-3, C_E = 1.15e-3.
+     */
+    private void surfaceFluxes(double t) {
+        for (int i = 0; i < nx; i++) {
+            double uc = 0.5 * (u[i] + u[g.ip1[i]]);
+            windSfc[i] = Math.max(0.5, Math.sqrt(uc * uc + v[i] * v[i]));
+        }
+        for (int i = 0; i < nx; i++) {
+            fluxes(i, t, windSfc[i], th[i], q[i], fluxPair);
+            heatFluxKin[i] = fluxPair[0];
+            moistFluxKin[i] = fluxPair[1];
+        }
+    }
+
+    private final double[] fluxPair = new double[2];
+
+    /** Kinematic heat and moisture flux {K m/s, kg/kg m/s} over column i's surface type. */
+    private void fluxes(int i, double t, double wind, double theta1, double q1, double[] out) {
+        if (!(cfg.forcing() instanceof Forcing.PrescribedSurfaceFlux pf)) {
+            out[0] = 0.0;
+            out[1] = 0.0;
+            return;
+        }
+        if (land[i]) {
+            double hLand = pf.landSensibleWm2(t);
+            out[0] = hLand / (surfaceRho * Thermo.CP);
+            // Bowen ratio B = H / LE (e.g. Oke 1987): LE = H / B by day, no dew at night
+            out[1] = hLand > 0 ? hLand / bowen[i] / (surfaceRho * Thermo.LV) : 0.0;
+        } else {
+            double spd = Math.max(1.0, wind);
+            double thetaSfc = sstK[i] * Math.pow(Thermo.P0 / surfacePressure, Thermo.KAPPA);
+            out[0] = 1.13e-3 * spd * (thetaSfc - theta1);
+            // saturation over sea water reduced by 2 % for salinity (e.g. Large & Pond 1982)
+            double qs = 0.98 * Thermo.saturationMixingRatio(sstK[i], surfacePressure);
+            out[1] = 1.15e-3 * spd * (qs - q1);
+        }
+    }
+
+    /**
+     * Slab mixed-layer depth per column: zero-order-jump growth d(h^2)/dt = 2 (1 + 2A) H_kin / gamma
+     * (Tennekes 1973) while the surface heats, upwind advection by the layer-mean cross-shore wind,
+     * collapse to the night depth when the heat flux turns negative; the marine layer over water keeps
+     * at least its configured depth.
+     */
+    private void mixedLayer(double t, double dt) {
+        NonlinearConfig.BoundaryLayer bl = cfg.boundaryLayer();
+        // advection: dh/dt = -u_ml dh/dx (first-order upwind, monotone)
+        for (int i = 0; i < nx; i++) {
+            double hu = 0;
+            double wsum = 0;
+            for (int k = 0; k < nz && g.zf[k] < h[i]; k++) {
+                double dz = Math.min(g.zf[k + 1], h[i]) - g.zf[k];
+                hu += 0.5 * (u[k * nx + i] + u[k * nx + g.ip1[i]]) * dz;
+                wsum += dz;
+            }
+            double um = wsum > 0 ? hu / wsum : 0;
+            double dhdx = um >= 0 ? (h[i] - h[g.im1[i]]) * invDx : (h[g.ip1[i]] - h[i]) * invDx;
+            hWork[i] = h[i] - dt * um * dhdx;
+        }
+        for (int i = 0; i < nx; i++) {
+            h[i] = grownDepth(hWork[i], heatFluxKin[i], land[i], dt);
+        }
+    }
+
+    /** One step of the slab depth: ZOJ growth while heated, collapse on land when not, marine floor on water. */
+    private double grownDepth(double hh, double heatFlux, boolean isLand, double dt) {
+        NonlinearConfig.BoundaryLayer bl = cfg.boundaryLayer();
+        double floor = isLand ? bl.nightDepthM() : bl.marineDepthM();
+        if (heatFlux > 0) {
+            double gamma = Math.max(1e-4, cfg.theta().gradientKPerM(hh));
+            // d(h^2)/dt = 2 (1 + 2A) H_kin / gamma, Tennekes (1973)
+            hh = Math.sqrt(hh * hh + 2.0 * (1.0 + 2.0 * bl.entrainmentRatio()) * heatFlux * dt / gamma);
+        } else if (isLand) {
+            hh = bl.nightDepthM();
+        }
+        return Math.min(Math.max(hh, floor), 0.9 * g.topM());
+    }
+
+    /**
+     * Implicit (backward Euler) vertical mixing of u, v, theta and r with K from the K-profile
+     * K = kappa w_s z (1 - z/h)^2 below h (Troen &amp; Mahrt 1986), w_s = (u*^3 + 0.6 w*^3)^(1/3)
+     * (Holtslag &amp; Boville 1993; from memory), plus a background K above; surface fluxes and the bulk
+     * drag tau/rho = C_D |V| V (implicit in V) as the lower boundary condition.
+     */
+    private void verticalMixing(double dt) {
+        for (int i = 0; i < nx; i++) {
+            kProfile(heatFluxKin[i], windSfc[i], cd[i], h[i], kIface, i, nx);
+        }
+        for (int i = 0; i < nx; i++) {
+            // theta with surface heat flux
+            loadColumnK(i, i, dt);
+            solveColumn(th, i, dt, heatFluxKin[i], 0.0);
+            solveColumn(q, i, dt, moistFluxKin[i], 0.0);
+            solveColumn(v, i, dt, 0.0, cd[i] * windSfc[i]);
+            // u at the west face of cell i: average K and drag of the two columns
+            loadColumnK(g.im1[i], i, dt);
+            int l = g.im1[i];
+            solveColumn(u, i, dt, 0.0, 0.5 * (cd[i] * windSfc[i] + cd[l] * windSfc[l]));
+        }
+        for (int i = 0; i < nx; i++) {
+            q[i] = Math.max(q[i], 0.0);
+        }
+    }
+
+    /** K at interfaces 0..nz of one column into out[offset + k * stride]. */
+    private void kProfile(double heatFlux, double wind, double cdI, double hI, double[] out, int offset, int stride) {
+        double kbg = cfg.boundaryLayer().backgroundDiffusivityM2PerS();
+        double ustar = Math.max(0.01, Math.sqrt(cdI) * wind);
+        double ws = ustar;
+        if (heatFlux > 0) {
+            double wstar3 = Thermo.G / th0[0] * heatFlux * hI;
+            ws = Math.cbrt(ustar * ustar * ustar + 0.6 * wstar3);
+        }
+        out[offset] = 0;
+        out[offset + nz * stride] = 0;
+        for (int k = 1; k < nz; k++) {
+            double z = g.zf[k];
+            double kk = kbg;
+            if (z < hI) {
+                double sh = 1.0 - z / hI;
+                kk += KARMAN * ws * z * sh * sh;
+            }
+            out[offset + k * stride] = kk;
+        }
+    }
+
+    private void loadColumnK(int i1, int i2, double dt) {
+        for (int k = 0; k <= nz; k++) {
+            colK[k] = 0.5 * (kIface[k * nx + i1] + kIface[k * nx + i2]);
+        }
+    }
+
+    /**
+     * Backward-Euler diffusion of column i of s with interface diffusivities colK; a surface flux
+     * (kinematic) into the lowest layer and a linear drag coefficient (m/s) on the lowest layer.
+     */
+    private void solveColumn(double[] s, int i, double dt, double surfaceFlux, double dragMPerS) {
+        solveColumn(s, i, nx, dt, surfaceFlux, dragMPerS);
+    }
+
+    /** As above for the column s[offset + k * stride]. */
+    private void solveColumn(double[] s, int offset, int stride, double dt, double surfaceFlux, double dragMPerS) {
+        for (int k = 0; k < nz; k++) {
+            double lo = k > 0 ? dt * colK[k] / (g.dzf[k] * g.dzc[k]) : 0.0;
+            double hi = k < nz - 1 ? dt * colK[k + 1] / (g.dzf[k] * g.dzc[k + 1]) : 0.0;
+            colA[k] = -lo;
+            colC[k] = -hi;
+            colB[k] = 1.0 + lo + hi;
+            colR[k] = s[offset + k * stride];
+        }
+        colR[0] += dt * surfaceFlux / g.dzf[0];
+        colB[0] += dt * dragMPerS / g.dzf[0];
+        // Thomas algorithm
+        for (int k = 1; k < nz; k++) {
+            double m = colA[k] / colB[k - 1];
+            colB[k] -= m * colC[k - 1];
+            colR[k] -= m * colR[k - 1];
+        }
+        double x = colR[nz - 1] / colB[nz - 1];
+        s[offset + (nz - 1) * stride] = x;
+        for (int k = nz - 2; k >= 0; k--) {
+            x = (colR[k] - colC[k] * x) / colB[k];
+            s[offset + k * stride] = x;
+        }
+    }
+
+    /**
+     * The undisturbed far field over the surface at each end of the domain: a single column with the
+     * same surface flux, slab mixed layer and K-profile mixing but no circulation (ambient wind for the
+     * friction velocity). The lateral sponges relax theta and r toward it: a reference that evolves
+     * with the local heating yet cannot feed back on the circulation.
+     */
+    private final class FarFieldColumn {
+        final int i;
+        final double[] thRef = new double[nz];
+        final double[] qRef = new double[nz];
+        double hRef;
+        final double[] flRef = new double[2];
+
+        FarFieldColumn(int i) {
+            this.i = i;
+            System.arraycopy(th0, 0, thRef, 0, nz);
+            System.arraycopy(q0, 0, qRef, 0, nz);
+            hRef = land[i] ? cfg.boundaryLayer().initialDepthM() : cfg.boundaryLayer().marineDepthM();
+        }
+
+        void step(double t, double dt) {
+            double spd = Math.max(0.5, Math.hypot(ug, vg));
+            double[] fl = flRef;
+            fluxes(i, t, spd, thRef[0], qRef[0], fl);
+            double alphaN = cfg.damping().newtonianCoolingPerS();
+            if (alphaN > 0 || heatingBuf != null) {
+                HeatingRate hr = cfg.forcing() instanceof Forcing.PrescribedHeating ph ? ph.heating() : null;
+                for (int k = 0; k < nz; k++) {
+                    double q = hr == null ? 0.0 : hr.kelvinPerSecond(g.xc[i], g.zc[k], t);
+                    thRef[k] = (thRef[k] + dt * (q + alphaN * th0[k])) / (1.0 + dt * alphaN);
+                    qRef[k] = (qRef[k] + dt * alphaN * q0[k]) / (1.0 + dt * alphaN);
+                }
+            }
+            if (!cfg.switches().mixing()) {
+                thRef[0] += dt * fl[0] / g.dzf[0];
+                qRef[0] = Math.max(0.0, qRef[0] + dt * fl[1] / g.dzf[0]);
+            } else {
+                hRef = grownDepth(hRef, fl[0], land[i], dt);
+                kProfile(fl[0], spd, cd[i], hRef, colK, 0, 1);
+                solveColumn(thRef, 0, 1, dt, fl[0], 0.0);
+                solveColumn(qRef, 0, 1, dt, fl[1], 0.0);
+                qRef[0] = Math.max(0.0, qRef[0]);
+            }
+            // the same damping layer aloft as the domain, so the sponge corners agree
+            for (int k = 0; k < nz; k++) {
+                double rt = dt * rTopC[k];
+                if (rt > 0) {
+                    thRef[k] = (thRef[k] + rt * th0[k]) / (1.0 + rt);
+                    qRef[k] = (qRef[k] + rt * q0[k]) / (1.0 + rt);
+                }
+            }
+        }
+    }
+
+    /**
+     * Implicit Rayleigh relaxation: aloft toward the ambient state (Ug, Vg, 0, theta_0, r_0); in the
+     * lateral sponges u, v, w toward (Ug, Vg, 0) and theta, r toward the {@link FarFieldColumn} of that
+     * end (the far field over that surface keeps its own heating without a spurious coast at the wrap).
+     */
+    private void sponges(double dt) {
+        boolean lateral = cfg.damping().lateralSpongeWidthM() > 0;
+        relaxCentres(u, dt, rLatU, iLeftU, iRightU, lateral, ug);
+        relaxCentres(v, dt, rLatC, iLeftC, iRightC, lateral, vg);
+        relaxScalar(th, th0, farLeft == null ? null : farLeft.thRef, farRight == null ? null : farRight.thRef, dt, lateral);
+        relaxScalar(q, q0, farLeft == null ? null : farLeft.qRef, farRight == null ? null : farRight.qRef, dt, lateral);
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                double r = dt * (rTopF[k] + (lateral ? rLatC[i] : 0.0));
+                if (r > 0) {
+                    w[o + i] /= 1.0 + r;
+                }
+            }
+        }
+    }
+
+    /** Velocities: toward the ambient value both aloft and in the lateral sponges (a fixed reference, no feedback). */
+    private void relaxCentres(double[] s, double dt, double[] rLat, int il, int ir, boolean lateral, double ambient) {
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            double rt = dt * rTopC[k];
+            for (int i = 0; i < nx; i++) {
+                double r = rt + (lateral ? dt * rLat[i] : 0.0);
+                if (r > 0) {
+                    s[o + i] = (s[o + i] + r * ambient) / (1.0 + r);
+                }
+            }
+        }
+    }
+
+    /** Top layer toward the ambient profile first, then the lateral sponge toward the far-field column. */
+    private void relaxScalar(double[] s, double[] ambient, double[] farLeft, double[] farRight, double dt, boolean lateral) {
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            double rt = dt * rTopC[k];
+            if (rt > 0) {
+                for (int i = 0; i < nx; i++) {
+                    s[o + i] = (s[o + i] + rt * ambient[k]) / (1.0 + rt);
+                }
+            }
+            if (!lateral) {
+                continue;
+            }
+            double refLeft = farLeft[k];
+            double refRight = farRight[k];
+            for (int i = 0; i < nx; i++) {
+                double rl = dt * rLatC[i];
+                if (rl > 0) {
+                    double ref = i < nx / 2 ? refLeft : refRight;
+                    s[o + i] = (s[o + i] + rl * ref) / (1.0 + rl);
+                }
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- checks and output
+
+    private void checkBlowUp(double t, NonlinearSolution sol, long steps) {
+        double limit = cfg.numerics().blowUpWindMPerS();
+        String var = null;
+        int at = -1;
+        double val = 0;
+        for (int n = 0; n < u.length && var == null; n++) {
+            if (!(Math.abs(u[n]) <= limit)) {
+                var = "u";
+                at = n;
+                val = u[n];
+            } else if (!(Math.abs(v[n]) <= limit)) {
+                var = "v";
+                at = n;
+                val = v[n];
+            } else if (!(Math.abs(w[n + nx]) <= limit)) {
+                var = "w";
+                at = n + nx;
+                val = w[n + nx];
+            } else if (!(Math.abs(th[n] - 300.0) < 200.0)) {
+                var = "theta";
+                at = n;
+                val = th[n];
+            } else if (Double.isNaN(q[n])) {
+                var = "mixing ratio";
+                at = n;
+                val = q[n];
+            }
+        }
+        if (var == null) {
+            return;
+        }
+        int k = at / nx;
+        int i = at % nx;
+        double z = var.equals("w") ? g.zf[k] : g.zc[k];
+        double x = var.equals("u") ? g.xc[i] - 0.5 * g.dx : g.xc[i];
+        sol.finish(false, steps);
+        throw new ModelBlowUpException(t / 3600.0, x / 1000.0, z, var, val, dtLast, sol);
+    }
+
+    private void store(NonlinearSolution sol, double t) {
+        int nc = nz * nx;
+        float[] fu = new float[nc];
+        float[] fv = new float[nc];
+        float[] fw = new float[nc];
+        float[] ft = new float[nc];
+        float[] fq = new float[nc];
+        float[] fp = new float[nc];
+        float[] fh = new float[nx];
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                int n = o + i;
+                fu[n] = (float) (0.5 * (u[n] + u[o + g.ip1[i]]));
+                fv[n] = (float) v[n];
+                fw[n] = (float) (0.5 * (w[n] + w[n + nx]));
+                ft[n] = (float) th[n];
+                fq[n] = (float) q[n];
+                fp[n] = (float) (rho0[k] * phi[n]);
+            }
+        }
+        for (int i = 0; i < nx; i++) {
+            fh[i] = (float) h[i];
+        }
+        sol.add(new NonlinearSolution.Stored(t, fu, fv, fw, ft, fq, fp, fh));
+    }
+}
