@@ -1,0 +1,135 @@
+package org.littoral.model.nonlinear;
+
+import java.util.List;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.coast.SurfaceMap;
+import org.littoral.model.coast.SurfaceSegment;
+import org.littoral.model.grid.HorizontalGrid;
+import org.littoral.model.grid.VerticalGrid;
+import org.littoral.model.thermo.Thermo;
+
+/**
+ * Idealised flows with published answers, run through the nonlinear model on coarse grids (seconds of
+ * CPU each). Used by the unit tests and the validation suite; physics only, no I/O.
+ */
+public final class CanonicalFlows {
+    private CanonicalFlows() {
+    }
+
+    /** A surface map of water everywhere (no land-sea contrast). */
+    public static SurfaceMap allWater(double sstK) {
+        return new SurfaceMap(List.of(new SurfaceSegment.Water("water", Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
+                sstK, 2e-4)));
+    }
+
+    /** A surface map of land everywhere. */
+    public static SurfaceMap allLand(double bowenRatio, double roughnessM) {
+        return new SurfaceMap(List.of(new SurfaceSegment.Land("land", Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
+                0.2, bowenRatio, roughnessM, 0.3)));
+    }
+
+    /**
+     * Result of a lock-exchange run.
+     *
+     * @param frontSpeedMPerS speed of the dense current's nose along the ground (fit over the second and third thirds)
+     * @param referenceSpeedMPerS sqrt(g' H)
+     */
+    public record LockExchange(double frontSpeedMPerS, double referenceSpeedMPerS, double depthM, double reducedGravity) {
+        /** Front speed over sqrt(g' H): 0.5 for the energy-conserving current of Benjamin (1968). */
+        public double froudeNumber() {
+            return frontSpeedMPerS / referenceSpeedMPerS;
+        }
+    }
+
+    /**
+     * Full-depth lock exchange without rotation, heating, mixing or damping: air colder by deltaThetaK for
+     * x &lt; 0 beside warmer air, neutral background, rigid lid at H. Free-slip ground (no drag).
+     */
+    public static LockExchange lockExchange(double depthM, double deltaThetaK, int nx, double dxM, int layers, double durationS) {
+        double theta = 300.0;
+        double half = 0.5 * nx * dxM;
+        NonlinearConfig c = NonlinearConfig.builder(new Coast(0.0, 0.0, 0.0, 270.0, 80), allWater(293.15),
+                        HorizontalGrid.centred(nx, dxM), VerticalGrid.uniform(layers + 1, depthM))
+                .theta(new ThetaProfile.ConstantN(theta, 0.0)).moisture(0.0, 0.0)
+                .forcing(new Forcing.None()).switches(new NonlinearConfig.Switches(true, false, false))
+                .damping(new NonlinearConfig.Damping(0, 0, 0, 300, 0, 600))
+                .solarHours(0, durationS / 3600.0).outputIntervalS(durationS / 30.0)
+                // x < 0 cold; the periodic wrap makes a second lock at the domain ends, half a domain away
+                .initialThetaPerturbation((x, z) -> x < 0 && x > -half ? -deltaThetaK : 0.0).build();
+        NonlinearSolution s = NonlinearModel.run(c);
+        double[] x = s.xM();
+        List<NonlinearSolution.Stored> st = s.stored();
+        int n0 = st.size() / 3;
+        double sx = 0;
+        double st1 = 0;
+        double sxx = 0;
+        double sxt = 0;
+        int m = 0;
+        for (int n = n0; n < st.size(); n++) {
+            float[] th = st.get(n).theta();
+            double nose = Double.NaN;
+            double threshold = theta - 0.5 * deltaThetaK;
+            // nose of the cold current moving into x > 0, searched up to a quarter domain (before it meets the other)
+            for (int i = 1; i < x.length; i++) {
+                if (x[i] <= 0 || x[i] > 0.5 * half) {
+                    continue;
+                }
+                if (th[i - 1] < threshold && th[i] >= threshold) {
+                    nose = x[i - 1] + (threshold - th[i - 1]) / (th[i] - th[i - 1]) * (x[i] - x[i - 1]);
+                }
+            }
+            if (Double.isNaN(nose)) {
+                continue;
+            }
+            double t = st.get(n).timeSec();
+            sx += t;
+            st1 += nose;
+            sxx += t * t;
+            sxt += t * nose;
+            m++;
+        }
+        double speed = (m * sxt - sx * st1) / (m * sxx - sx * sx);
+        double gPrime = Thermo.G * deltaThetaK / theta;
+        return new LockExchange(speed, Math.sqrt(gPrime * depthM), depthM, gPrime);
+    }
+
+    /**
+     * Signed area swept by the low-level wind perturbation (u - Ug, v - Vg) at the coast over one day of
+     * the classic diurnal heating (half the integral of u dv - v du): negative = clockwise rotation seen
+     * from above, the sense Haurwitz (1947) found for the Northern Hemisphere.
+     *
+     * @return {signed area m2/s2, peak perturbation speed m/s}
+     */
+    public static double[] breezeHodographArea(double latitudeDeg) {
+        double omega = 2 * Math.PI / 86400.0;
+        double q0 = 4e-5;
+        double x0 = 10_000.0;
+        double depth = 500.0;
+        HeatingRate q = (x, z, t) -> q0 * (0.5 * Math.PI + Math.atan(x / x0)) * Math.exp(-z / depth)
+                * Math.sin(omega * (t - 6 * 3600.0));
+        NonlinearConfig c = NonlinearConfig.builder(new Coast(latitudeDeg, 0.0, 0.0, 270.0, 172), SurfaceMap.simpleCoast(293.15, 0.2, 1, 0.1),
+                        HorizontalGrid.centred(128, 4000.0), VerticalGrid.stretched(21, 8000.0, 50.0))
+                .forcing(new Forcing.PrescribedHeating(q)).switches(new NonlinearConfig.Switches(true, false, false))
+                .damping(new NonlinearConfig.Damping(1.0 / 86400.0, 1.0 / 86400.0, 0.3, 600, 100_000, 1800))
+                .solarHours(6, 54).outputIntervalS(900).build();
+        NonlinearSolution s = NonlinearModel.run(c);
+        int nx = s.xM().length;
+        int i = nx / 2; // x = 0, the coast
+        List<NonlinearSolution.Stored> st = s.stored();
+        double area = 0;
+        double peak = 0;
+        double start = 30 * 3600.0;
+        for (int n = 1; n < st.size(); n++) {
+            if (st.get(n - 1).timeSec() < start) {
+                continue;
+            }
+            double u1 = st.get(n - 1).u()[i];
+            double v1 = st.get(n - 1).v()[i];
+            double u2 = st.get(n).u()[i];
+            double v2 = st.get(n).v()[i];
+            area += 0.5 * (u1 * v2 - v1 * u2);
+            peak = Math.max(peak, Math.hypot(u2, v2));
+        }
+        return new double[] {area, peak};
+    }
+}
