@@ -202,6 +202,63 @@ final class ComplexFft {
                     }
                 }
             }
+            case 5 -> {
+                final double c1 = Math.cos(2 * Math.PI / 5);
+                final double c2 = Math.cos(4 * Math.PI / 5);
+                final double s1 = Math.sin(2 * Math.PI / 5);
+                final double s2 = Math.sin(4 * Math.PI / 5);
+                for (int q = 0; q < r; q++) {
+                    int out = q * l;
+                    for (int j = 0; j < lPrev; j++) {
+                        int tw = j * 5;
+                        double x0r = aRe[q * lPrev + j];
+                        double x0i = aIm[q * lPrev + j];
+                        double yr = aRe[(q + r) * lPrev + j];
+                        double yi = aIm[(q + r) * lPrev + j];
+                        double x1r = yr * tr[tw + 1] - yi * ti[tw + 1];
+                        double x1i = yr * ti[tw + 1] + yi * tr[tw + 1];
+                        yr = aRe[(q + 2 * r) * lPrev + j];
+                        yi = aIm[(q + 2 * r) * lPrev + j];
+                        double x2r = yr * tr[tw + 2] - yi * ti[tw + 2];
+                        double x2i = yr * ti[tw + 2] + yi * tr[tw + 2];
+                        yr = aRe[(q + 3 * r) * lPrev + j];
+                        yi = aIm[(q + 3 * r) * lPrev + j];
+                        double x3r = yr * tr[tw + 3] - yi * ti[tw + 3];
+                        double x3i = yr * ti[tw + 3] + yi * tr[tw + 3];
+                        yr = aRe[(q + 4 * r) * lPrev + j];
+                        yi = aIm[(q + 4 * r) * lPrev + j];
+                        double x4r = yr * tr[tw + 4] - yi * ti[tw + 4];
+                        double x4i = yr * ti[tw + 4] + yi * tr[tw + 4];
+                        double t1r = x1r + x4r;
+                        double t1i = x1i + x4i;
+                        double t2r = x2r + x3r;
+                        double t2i = x2i + x3i;
+                        double t3r = x1r - x4r;
+                        double t3i = x1i - x4i;
+                        double t4r = x2r - x3r;
+                        double t4i = x2i - x3i;
+                        double a1r = x0r + c1 * t1r + c2 * t2r;
+                        double a1i = x0i + c1 * t1i + c2 * t2i;
+                        double a2r = x0r + c2 * t1r + c1 * t2r;
+                        double a2i = x0i + c2 * t1i + c1 * t2i;
+                        double b1r = s1 * t3r + s2 * t4r;
+                        double b1i = s1 * t3i + s2 * t4i;
+                        double b2r = s2 * t3r - s1 * t4r;
+                        double b2i = s2 * t3i - s1 * t4i;
+                        bRe[out + j] = x0r + t1r + t2r;
+                        bIm[out + j] = x0i + t1i + t2i;
+                        // y1 = a1 - i b1, y4 = a1 + i b1, y2 = a2 - i b2, y3 = a2 + i b2
+                        bRe[out + j + lPrev] = a1r + b1i;
+                        bIm[out + j + lPrev] = a1i - b1r;
+                        bRe[out + j + 4 * lPrev] = a1r - b1i;
+                        bIm[out + j + 4 * lPrev] = a1i + b1r;
+                        bRe[out + j + 2 * lPrev] = a2r + b2i;
+                        bIm[out + j + 2 * lPrev] = a2i - b2r;
+                        bRe[out + j + 3 * lPrev] = a2r - b2i;
+                        bIm[out + j + 3 * lPrev] = a2i + b2r;
+                    }
+                }
+            }
             default -> {
                 double[] xr = scratchRe;
                 double[] xi = scratchIm;

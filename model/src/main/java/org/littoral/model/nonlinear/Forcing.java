@@ -1,7 +1,8 @@
 package org.littoral.model.nonlinear;
 
 /** What drives the nonlinear model. */
-public sealed interface Forcing permits Forcing.None, Forcing.PrescribedHeating, Forcing.PrescribedSurfaceFlux {
+public sealed interface Forcing permits Forcing.None, Forcing.PrescribedHeating, Forcing.PrescribedSurfaceFlux,
+        Forcing.SurfaceEnergyBalance {
 
     /** No diabatic forcing and no surface heat or moisture fluxes (drag still acts when mixing is on). */
     record None() implements Forcing {
@@ -22,8 +23,8 @@ public sealed interface Forcing permits Forcing.None, Forcing.PrescribedHeating,
     /**
      * A prescribed diurnal land sensible heat flux, H = peak sin(pi (t - sunrise) / (sunset - sunrise))
      * by day and {@code nightSensibleWm2} at night, with latent heat H / Bowen ratio of the land segment
-     * (by day); water fluxes from bulk formulas with the segment's sea-surface temperature
-     * (Large &amp; Pond 1982 neutral coefficients).
+     * (by day); water fluxes from the bulk formulas with stability of
+     * {@link org.littoral.model.surface.BulkFlux#overWater} and the segment's sea-surface temperature.
      */
     record PrescribedSurfaceFlux(double peakLandSensibleWm2, double sunriseSolarHours, double sunsetSolarHours,
                                  double nightSensibleWm2) implements Forcing {
@@ -50,6 +51,26 @@ public sealed interface Forcing permits Forcing.None, Forcing.PrescribedHeating,
             }
             return Math.max(nightSensibleWm2,
                     peakLandSensibleWm2 * Math.sin(Math.PI * (h - sunriseSolarHours) / (sunsetSolarHours - sunriseSolarHours)));
+        }
+    }
+
+    /**
+     * Land fluxes from the surface energy balance driven by solar geometry (latitude, day of year, solar
+     * time) and cloud fraction ({@link org.littoral.model.surface.ColumnSurfaceFluxes}); water fluxes from
+     * bulk formulas with stability and the segment's sea-surface temperature.
+     *
+     * @param cloudFraction total cloud, 0..1
+     * @param partition how land available energy splits into sensible and latent heat
+     */
+    record SurfaceEnergyBalance(double cloudFraction,
+                                org.littoral.model.surface.SurfaceEnergyBalance.Partition partition) implements Forcing {
+        public SurfaceEnergyBalance {
+            if (!(cloudFraction >= 0 && cloudFraction <= 1)) {
+                throw new IllegalArgumentException("surface energy balance: cloud fraction must be in 0..1; got " + cloudFraction);
+            }
+            if (partition == null) {
+                throw new IllegalArgumentException("surface energy balance: choose a partition (BOWEN_RATIO or PRIESTLEY_TAYLOR)");
+            }
         }
     }
 }

@@ -2,6 +2,11 @@ package org.littoral.model.nonlinear;
 
 import org.littoral.model.coast.SurfaceSegment;
 import org.littoral.model.field.Background;
+import org.littoral.model.mixedlayer.SlabMixedLayer;
+import org.littoral.model.surface.BulkFlux;
+import org.littoral.model.surface.BulkFluxes;
+import org.littoral.model.surface.ColumnSurfaceFluxes;
+import org.littoral.model.surface.KProfile;
 import org.littoral.model.thermo.Thermo;
 
 /**
@@ -88,6 +93,10 @@ public final class NonlinearModel {
 
     // surface and boundary layer per column
     private final boolean[] land;
+    private final SurfaceSegment[] segment;
+    private final ColumnSurfaceFluxes energyBalance;
+    private final double[] theta1;
+    private final double[] q1;
     private final double[] z0;
     private final double[] bowen;
     private final double[] sstK;
@@ -202,8 +211,15 @@ public final class NonlinearModel {
         h = new double[nx];
         hWork = new double[nx];
         kIface = new double[(nz + 1) * nx];
+        cgFactor = new double[nx];
+        segment = new SurfaceSegment[nx];
+        theta1 = new double[nx];
+        q1 = new double[nx];
+        energyBalance = cfg.forcing() instanceof Forcing.SurfaceEnergyBalance seb
+                ? new ColumnSurfaceFluxes(cfg.surface(), g.xc, cfg.coast(), seb.partition()) : null;
         for (int i = 0; i < nx; i++) {
             SurfaceSegment s = cfg.surface().at(g.xc[i]);
+            segment[i] = s;
             land[i] = s.isLand();
             z0[i] = s.roughnessM();
             if (s instanceof SurfaceSegment.Land l) {
@@ -743,42 +759,60 @@ public final class NonlinearModel {
     }
 
     /**
-     * Surface heat and moisture fluxes (kinematic: K m/s and kg/kg m/s) for the prescribed-flux forcing.
-     * Water: bulk formulas with the Large &amp; Pond (1982) neutral coefficients C_H = 1.13e-3, C_E = 1.15e-3.
+     * Surface heat and moisture fluxes (kinematic: K m/s and kg/kg m/s) and drag coefficients of every
+     * column, from the air in the lowest layer.
      */
     private void surfaceFluxes(double t) {
         for (int i = 0; i < nx; i++) {
             double uc = 0.5 * (u[i] + u[g.ip1[i]]);
             windSfc[i] = Math.max(0.5, Math.sqrt(uc * uc + v[i] * v[i]));
         }
+        if (energyBalance != null) {
+            System.arraycopy(th, 0, theta1, 0, nx);
+            System.arraycopy(q, 0, q1, 0, nx);
+            energyBalance.compute(t, ((Forcing.SurfaceEnergyBalance) cfg.forcing()).cloudFraction(), windSfc, g.zc[0],
+                    theta1, q1, surfacePressure);
+            System.arraycopy(energyBalance.kinematicHeatFluxKMs(), 0, heatFluxKin, 0, nx);
+            System.arraycopy(energyBalance.kinematicMoistureFlux(), 0, moistFluxKin, 0, nx);
+            System.arraycopy(energyBalance.dragCoefficient(), 0, cd, 0, nx);
+            return;
+        }
         for (int i = 0; i < nx; i++) {
             fluxes(i, t, windSfc[i], th[i], q[i], fluxPair);
             heatFluxKin[i] = fluxPair[0];
             moistFluxKin[i] = fluxPair[1];
+            cd[i] = fluxPair[2];
         }
     }
 
-    private final double[] fluxPair = new double[2];
+    private final double[] fluxPair = new double[3];
 
-    /** Kinematic heat and moisture flux {K m/s, kg/kg m/s} over column i's surface type. */
-    private void fluxes(int i, double t, double wind, double theta1, double q1, double[] out) {
+    /**
+     * {kinematic heat flux K m/s, moisture flux kg/kg m/s, drag coefficient} over column i's surface for
+     * the prescribed forcings: water from the bulk formulas with stability ({@link BulkFlux#overWater}),
+     * land drag from {@link BulkFlux#withHeatFlux} (neutral when no flux is prescribed).
+     */
+    private void fluxes(int i, double t, double wind, double thetaAir, double qAir, double[] out) {
+        SurfaceSegment seg = segment[i];
         if (!(cfg.forcing() instanceof Forcing.PrescribedSurfaceFlux pf)) {
             out[0] = 0.0;
             out[1] = 0.0;
+            out[2] = BulkFlux.neutral(wind, g.zc[0], seg.roughnessM()).dragCoefficient();
             return;
         }
-        if (land[i]) {
+        if (seg instanceof SurfaceSegment.Land l) {
             double hLand = pf.landSensibleWm2(t);
             out[0] = hLand / (surfaceRho * Thermo.CP);
             // Bowen ratio B = H / LE (e.g. Oke 1987): LE = H / B by day, no dew at night
-            out[1] = hLand > 0 ? hLand / bowen[i] / (surfaceRho * Thermo.LV) : 0.0;
+            out[1] = hLand > 0 ? hLand / l.bowenRatio() / (surfaceRho * Thermo.LV) : 0.0;
+            out[2] = BulkFlux.withHeatFlux(wind, g.zc[0], l.roughnessM(), out[0], thetaAir).dragCoefficient();
         } else {
-            double spd = Math.max(1.0, wind);
-            double thetaSfc = sstK[i] * Math.pow(Thermo.P0 / surfacePressure, Thermo.KAPPA);
-            out[0] = 1.13e-3 * spd * (thetaSfc - theta1);
-            // saturation over sea water reduced by 2 % for salinity (e.g. Large & Pond 1982)
-            double qs = 0.98 * Thermo.saturationMixingRatio(sstK[i], surfacePressure);
-            out[1] = 1.15e-3 * spd * (qs - q1);
+            SurfaceSegment.Water wa = (SurfaceSegment.Water) seg;
+            BulkFluxes bf = BulkFlux.overWater(wind, g.zc[0], wa.seaSurfaceTemperatureK(), thetaAir, Math.max(0.0, qAir),
+                    surfacePressure, wa.roughnessM());
+            out[0] = bf.kinematicHeatFluxKMs();
+            out[1] = bf.kinematicMoistureFlux();
+            out[2] = bf.dragCoefficient();
         }
     }
 
@@ -812,12 +846,10 @@ public final class NonlinearModel {
     private double grownDepth(double hh, double heatFlux, boolean isLand, double dt) {
         NonlinearConfig.BoundaryLayer bl = cfg.boundaryLayer();
         double floor = isLand ? bl.nightDepthM() : bl.marineDepthM();
-        if (heatFlux > 0) {
-            double gamma = Math.max(1e-4, cfg.theta().gradientKPerM(hh));
-            // d(h^2)/dt = 2 (1 + 2A) H_kin / gamma, Tennekes (1973)
-            hh = Math.sqrt(hh * hh + 2.0 * (1.0 + 2.0 * bl.entrainmentRatio()) * heatFlux * dt / gamma);
-        } else if (isLand) {
-            hh = bl.nightDepthM();
+        if (heatFlux > 0 || isLand) {
+            double gamma = Math.min(0.09, Math.max(1e-4, cfg.theta().gradientKPerM(hh)));
+            // zero-order-jump growth d(h^2)/dt = 2 (1 + 2A) H_kin / gamma, collapse when not heated (Tennekes 1973)
+            hh = new SlabMixedLayer(bl.entrainmentRatio(), gamma, floor).step(hh, heatFlux, dt);
         }
         return Math.min(Math.max(hh, floor), 0.9 * g.topM());
     }
@@ -830,13 +862,13 @@ public final class NonlinearModel {
      */
     private void verticalMixing(double dt) {
         for (int i = 0; i < nx; i++) {
-            kProfile(heatFluxKin[i], windSfc[i], cd[i], h[i], kIface, i, nx);
+            cgFactor[i] = kProfile(heatFluxKin[i], windSfc[i], cd[i], h[i], kIface, i, nx);
         }
         for (int i = 0; i < nx; i++) {
             // theta with surface heat flux
             loadColumnK(i, i, dt);
-            solveColumn(th, i, dt, heatFluxKin[i], 0.0);
-            solveColumn(q, i, dt, moistFluxKin[i], 0.0);
+            solveColumn(th, i, nx, dt, heatFluxKin[i], 0.0, cgFactor[i] * heatFluxKin[i]);
+            solveColumn(q, i, nx, dt, moistFluxKin[i], 0.0, cgFactor[i] * moistFluxKin[i]);
             solveColumn(v, i, dt, 0.0, cd[i] * windSfc[i]);
             // u at the west face of cell i: average K and drag of the two columns
             loadColumnK(g.im1[i], i, dt);
@@ -849,26 +881,23 @@ public final class NonlinearModel {
     }
 
     /** K at interfaces 0..nz of one column into out[offset + k * stride]. */
-    private void kProfile(double heatFlux, double wind, double cdI, double hI, double[] out, int offset, int stride) {
+    private double kProfile(double heatFlux, double wind, double cdI, double hI, double[] out, int offset, int stride) {
         double kbg = cfg.boundaryLayer().backgroundDiffusivityM2PerS();
         double ustar = Math.max(0.01, Math.sqrt(cdI) * wind);
-        double ws = ustar;
-        if (heatFlux > 0) {
-            double wstar3 = Thermo.G / th0[0] * heatFlux * hI;
-            ws = Math.cbrt(ustar * ustar * ustar + 0.6 * wstar3);
-        }
+        // Troen & Mahrt (1986) profile with the Holtslag & Boville (1993) velocity scale (surface package)
+        KProfile kp = KProfile.of(ustar, heatFlux, th0[0], hI, kbg);
         out[offset] = 0;
         out[offset + nz * stride] = 0;
         for (int k = 1; k < nz; k++) {
-            double z = g.zf[k];
-            double kk = kbg;
-            if (z < hI) {
-                double sh = 1.0 - z / hI;
-                kk += KARMAN * ws * z * sh * sh;
-            }
-            out[offset + k * stride] = kk;
+            out[offset + k * stride] = g.zf[k] < hI ? kp.diffusivityM2s(g.zf[k]) : kbg;
         }
+        // countergradient (non-local) term of Troen & Mahrt (1986): gamma_c = C w'x'_s / (w_s h), C = 6.5
+        // (from memory), so the heated layer mixes to neutral instead of staying superadiabatic
+        return heatFlux > 0 ? COUNTERGRADIENT_C / (kp.velocityScaleMs(0.5 * hI) * hI) : 0.0;
     }
+
+    static final double COUNTERGRADIENT_C = 6.5;
+    private double[] cgFactor;
 
     private void loadColumnK(int i1, int i2, double dt) {
         for (int k = 0; k <= nz; k++) {
@@ -881,11 +910,12 @@ public final class NonlinearModel {
      * (kinematic) into the lowest layer and a linear drag coefficient (m/s) on the lowest layer.
      */
     private void solveColumn(double[] s, int i, double dt, double surfaceFlux, double dragMPerS) {
-        solveColumn(s, i, nx, dt, surfaceFlux, dragMPerS);
+        solveColumn(s, i, nx, dt, surfaceFlux, dragMPerS, 0.0);
     }
 
     /** As above for the column s[offset + k * stride]. */
-    private void solveColumn(double[] s, int offset, int stride, double dt, double surfaceFlux, double dragMPerS) {
+    private void solveColumn(double[] s, int offset, int stride, double dt, double surfaceFlux, double dragMPerS,
+                             double countergradient) {
         for (int k = 0; k < nz; k++) {
             double lo = k > 0 ? dt * colK[k] / (g.dzf[k] * g.dzc[k]) : 0.0;
             double hi = k < nz - 1 ? dt * colK[k + 1] / (g.dzf[k] * g.dzc[k + 1]) : 0.0;
@@ -893,6 +923,13 @@ public final class NonlinearModel {
             colC[k] = -hi;
             colB[k] = 1.0 + lo + hi;
             colR[k] = s[offset + k * stride];
+            if (countergradient != 0.0) {
+                // explicit divergence of the non-local flux K gamma_c through the layer's interfaces
+                double kb = cfg.boundaryLayer().backgroundDiffusivityM2PerS();
+                double fTop = k + 1 < nz ? Math.max(0.0, colK[k + 1] - kb) : 0.0;
+                double fBot = k > 0 ? Math.max(0.0, colK[k] - kb) : 0.0;
+                colR[k] -= dt * countergradient * (fTop - fBot) / g.dzf[k];
+            }
         }
         colR[0] += dt * surfaceFlux / g.dzf[0];
         colB[0] += dt * dragMPerS / g.dzf[0];
@@ -921,19 +958,36 @@ public final class NonlinearModel {
         final double[] thRef = new double[nz];
         final double[] qRef = new double[nz];
         double hRef;
-        final double[] flRef = new double[2];
+        final double[] flRef = new double[3];
+        final ColumnSurfaceFluxes eb1;
+        final double[] one1 = new double[1];
+        final double[] one2 = new double[1];
+        final double[] one3 = new double[1];
 
         FarFieldColumn(int i) {
             this.i = i;
             System.arraycopy(th0, 0, thRef, 0, nz);
             System.arraycopy(q0, 0, qRef, 0, nz);
             hRef = land[i] ? cfg.boundaryLayer().initialDepthM() : cfg.boundaryLayer().marineDepthM();
+            eb1 = cfg.forcing() instanceof Forcing.SurfaceEnergyBalance seb
+                    ? new ColumnSurfaceFluxes(cfg.surface(), new double[] {g.xc[i]}, cfg.coast(), seb.partition()) : null;
         }
 
         void step(double t, double dt) {
             double spd = Math.max(0.5, Math.hypot(ug, vg));
             double[] fl = flRef;
-            fluxes(i, t, spd, thRef[0], qRef[0], fl);
+            if (eb1 != null) {
+                one1[0] = spd;
+                one2[0] = thRef[0];
+                one3[0] = qRef[0];
+                eb1.compute(t, ((Forcing.SurfaceEnergyBalance) cfg.forcing()).cloudFraction(), one1, g.zc[0], one2, one3,
+                        surfacePressure);
+                fl[0] = eb1.kinematicHeatFluxKMs()[0];
+                fl[1] = eb1.kinematicMoistureFlux()[0];
+                fl[2] = eb1.dragCoefficient()[0];
+            } else {
+                fluxes(i, t, spd, thRef[0], qRef[0], fl);
+            }
             double alphaN = cfg.damping().newtonianCoolingPerS();
             if (alphaN > 0 || heatingBuf != null) {
                 HeatingRate hr = cfg.forcing() instanceof Forcing.PrescribedHeating ph ? ph.heating() : null;
@@ -948,9 +1002,9 @@ public final class NonlinearModel {
                 qRef[0] = Math.max(0.0, qRef[0] + dt * fl[1] / g.dzf[0]);
             } else {
                 hRef = grownDepth(hRef, fl[0], land[i], dt);
-                kProfile(fl[0], spd, cd[i], hRef, colK, 0, 1);
-                solveColumn(thRef, 0, 1, dt, fl[0], 0.0);
-                solveColumn(qRef, 0, 1, dt, fl[1], 0.0);
+                double cg = kProfile(fl[0], spd, fl[2], hRef, colK, 0, 1);
+                solveColumn(thRef, 0, 1, dt, fl[0], 0.0, cg * fl[0]);
+                solveColumn(qRef, 0, 1, dt, fl[1], 0.0, cg * fl[1]);
                 qRef[0] = Math.max(0.0, qRef[0]);
             }
             // the same damping layer aloft as the domain, so the sponge corners agree
