@@ -21,6 +21,7 @@ import picocli.CommandLine.ScopeType;
             org.littoral.scenarios.observe.ObserveCommand.class,
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
+            org.littoral.scenarios.demo.MakeDemoDataCommand.class,
         })
 public final class Main implements Callable<Integer> {
 
