@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.zip.GZIPOutputStream;
 import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.analysis.ingest.ProfileColumns;
 
 /**
  * Writes the INVENTED demo campaign as tidy CSV (one row per sample, units in the column names), each
@@ -25,14 +26,15 @@ public final class DemoDataWriter {
     public static final String NOTICE = "# INVENTED DATA for demonstration; not observations. "
             + "Quillmarsh Reach, its sites and this campaign are invented.";
 
-    /** Binned-profile columns (5 m bins of the ascent). */
-    public static final List<String> BINNED_COLUMNS = List.of("day", "site", "time_local", "height_m", "pressure_hPa",
-            "temperature_C", "rh_percent", "mixing_ratio_g_per_kg", "dewpoint_C", "wind_speed_m_per_s",
-            "wind_direction_deg", "theta_K", "theta_v_K", "theta_e_K");
+    /** Binned-profile columns (5 m bins of the ascent): the analysis chain's own definition. */
+    public static final List<String> BINNED_COLUMNS = ProfileColumns.BINNED;
     /** Raw 10 Hz columns (ascent and descent, two temperature and two humidity sensors). */
-    public static final List<String> RAW_COLUMNS = List.of("day", "site", "flight_id", "time_local", "time_s",
-            "height_m", "pressure_hPa", "temperature_C_1", "temperature_C_2", "rh_percent_1", "rh_percent_2",
-            "wind_speed_m_per_s", "wind_direction_deg");
+    public static final List<String> RAW_COLUMNS = List.of(ProfileColumns.DAY, ProfileColumns.SITE,
+            ProfileColumns.FLIGHT_ID, ProfileColumns.TIME_LOCAL, ProfileColumns.TIME_S, ProfileColumns.HEIGHT_M,
+            ProfileColumns.PRESSURE_HPA, ProfileColumns.TEMPERATURE_C_SENSOR_PREFIX + 1,
+            ProfileColumns.TEMPERATURE_C_SENSOR_PREFIX + 2, ProfileColumns.RH_PERCENT_SENSOR_PREFIX + 1,
+            ProfileColumns.RH_PERCENT_SENSOR_PREFIX + 2, ProfileColumns.WIND_SPEED_M_PER_S,
+            ProfileColumns.WIND_DIRECTION_DEG);
 
     private final DemoCampaign campaign;
 
@@ -67,6 +69,7 @@ public final class DemoDataWriter {
         Files.createDirectories(dir.resolve("binned"));
         Files.createDirectories(dir.resolve("raw"));
         writeText(dir.resolve("coast.yaml"), coastYaml());
+        writeText(dir.resolve("scenario-quillmarsh-pure.yaml"), scenarioYaml());
         writeText(dir.resolve("days.csv"), daysCsv());
         writeText(dir.resolve("truth/passages.csv"), passagesCsv());
         writeText(dir.resolve("truth/glitches.csv"), glitchesCsv(raw));
@@ -81,44 +84,98 @@ public final class DemoDataWriter {
                 + " (org.littoral.scenarios.demo, independent of the littoral breeze models)\n";
     }
 
-    String coastYaml() {
-        StringBuilder b = new StringBuilder();
-        b.append("# INVENTED coast for demonstration; not a real place. Written by littoral make-demo-data.\n");
-        b.append("# x is the distance inland from the sea shore of the barrier strip (m); the sea is at x < 0.\n");
-        b.append("name: \"").append(DemoCoast.NAME).append("\"\n");
-        b.append("invented: true\n");
-        b.append("campaign: \"").append(DemoCoast.CAMPAIGN).append("\"\n");
-        b.append("latitude_deg: ").append(DemoCoast.LATITUDE_DEG).append('\n');
-        b.append("longitude_deg: ").append(DemoCoast.LONGITUDE_DEG).append("   # open ocean: the coast is invented\n");
-        b.append("utc_offset_hours: ").append(DemoCoast.UTC_OFFSET_HOURS).append('\n');
-        b.append("bearing_land_to_sea_deg: ").append(DemoCoast.BEARING_LAND_TO_SEA_DEG)
-                .append("   # sea to the south-east; onshore wind blows from 135 deg\n");
-        b.append("bay_shore_bearing_deg: ").append(DemoCoast.BAY_SHORE_BEARING_DEG)
-                .append("   # from the bay-shore site towards the bay\n");
-        b.append("surface:\n");
-        b.append(segment("sea", "water", null, DemoCoast.BARRIER_FROM_M, "sea_surface_temperature_K: "
-                + DemoCoast.SEA_SURFACE_TEMPERATURE_K + ", roughness_m: 0.0002"));
-        b.append(segment("barrier", "land", DemoCoast.BARRIER_FROM_M, DemoCoast.BAY_FROM_M,
-                "albedo: 0.30, bowen_ratio: 2.0, roughness_m: 0.01, soil_moisture: 0.15"));
-        b.append(segment("bay", "water", DemoCoast.BAY_FROM_M, DemoCoast.MAINLAND_FROM_M,
-                "sea_surface_temperature_K: " + DemoCoast.BAY_SURFACE_TEMPERATURE_K + ", roughness_m: 0.0002"));
-        b.append(segment("mainland", "land", DemoCoast.MAINLAND_FROM_M, null,
-                "albedo: 0.20, bowen_ratio: 0.8, roughness_m: 0.10, soil_moisture: 0.30"));
-        b.append("sites:\n");
+    /** Keys of the scenario file's coast section (docs/scenario-schema.md), shared by coast.yaml and the scenario. */
+    private static String coastSection(int dayOfYear) {
+        return "coast:\n"
+                + "  latitude_deg: " + DemoCoast.LATITUDE_DEG + "\n"
+                + "  longitude_deg: " + DemoCoast.LONGITUDE_DEG + "   # open ocean: the coast is invented\n"
+                + "  utc_offset_h: " + DemoCoast.UTC_OFFSET_HOURS + "\n"
+                + "  bearing_land_to_sea_deg: " + DemoCoast.BEARING_LAND_TO_SEA_DEG
+                + "   # sea to the south-east: an onshore wind blows from 135 deg\n"
+                + "  day_of_year: " + dayOfYear + "\n";
+    }
+
+    private static String surfaceSection() {
+        return "surface:   # x = 0 is the sea shore of the barrier strip\n"
+                + "  - {name: sea, type: water, ends_at_km: " + DemoCoast.BARRIER_FROM_M / 1000.0 + ", sst_K: "
+                + DemoCoast.SEA_SURFACE_TEMPERATURE_K + "}\n"
+                + "  - {name: barrier, type: land, ends_at_km: " + DemoCoast.BAY_FROM_M / 1000.0
+                + ", albedo: 0.30, bowen_ratio: 2.0, roughness_m: 0.01, soil_moisture_fraction: 0.15}\n"
+                + "  - {name: bay, type: water, ends_at_km: " + DemoCoast.MAINLAND_FROM_M / 1000.0 + ", sst_K: "
+                + DemoCoast.BAY_SURFACE_TEMPERATURE_K + "}\n"
+                + "  - {name: mainland, type: land, albedo: 0.20, bowen_ratio: 0.8, roughness_m: 0.10, soil_moisture_fraction: 0.30}\n";
+    }
+
+    private static String sitesSection() {
+        StringBuilder b = new StringBuilder("sites:\n");
         for (DemoCoast.Site s : DemoCoast.SITES) {
-            b.append("  - {name: ").append(s.name()).append(", inland_distance_m: ").append(s.inlandDistanceM())
-                    .append(", description: \"").append(s.description()).append("\"}\n");
+            b.append("  - {name: ").append(s.name()).append(", inland_km: ").append(s.inlandDistanceM() / 1000.0)
+                    .append("}   # ").append(s.description()).append('\n');
         }
-        b.append("flights:\n");
-        b.append("  cadence_min: 30\n  dense_cadence_min: 15\n  dense_half_window_min: 75\n");
-        b.append("  first_flight_local: \"07:00\"\n  last_flight_local: \"18:00\"\n  ceiling_m: 600\n");
-        b.append("  bin_m: 5\n  ascent_m_per_s: 3\n  sample_hz: 10\n");
         return b.toString();
     }
 
-    private static String segment(String name, String kind, Double from, Double to, String props) {
-        return "  - {name: " + name + ", kind: " + kind + ", from_m: " + (from == null ? "-.inf" : from)
-                + ", to_m: " + (to == null ? ".inf" : to) + ", " + props + "}\n";
+    /** Mid-season day of year of the campaign. */
+    int midSeasonDayOfYear() {
+        List<DemoDay> days = campaign.days();
+        return (days.get(0).date().getDayOfYear() + days.get(days.size() - 1).date().getDayOfYear()) / 2;
+    }
+
+    /**
+     * The coast file of the invented coast: a {@code coast} section with the scenario schema's keys (what
+     * {@code littoral observe --coast} reads), the surface and sites as in a scenario file, and the
+     * campaign's flight plan for the reader.
+     */
+    String coastYaml() {
+        return "# INVENTED coast for demonstration; not a real place. Written by littoral make-demo-data.\n"
+                + "# Keys of the coast, surface and sites sections follow docs/scenario-schema.md.\n"
+                + "name: quillmarsh-reach\n"
+                + "description: \"" + DemoCoast.NAME + ": sea, barrier strip, bay, mainland; "
+                + DemoCoast.CAMPAIGN + "\"\n"
+                + "invented: true\n"
+                + coastSection(midSeasonDayOfYear())
+                + surfaceSection()
+                + sitesSection()
+                + "bay_shore_bearing_deg: " + DemoCoast.BAY_SHORE_BEARING_DEG
+                + "   # from the bay-shore site towards the bay: the bay breeze blows from here\n"
+                + "campaign_flights:   # what the invented campaign flew (every 15 min within 75 min of the expected front)\n"
+                + "  cadence_min: 30\n  dense_cadence_min: 15\n  dense_half_window_min: 75\n"
+                + "  first_flight_h: 7\n  last_flight_h: 18\n  ceiling_m: 600\n  bin_m: 5\n"
+                + "  ascent_rate_m_per_s: 3\n  sample_hz: 10\n";
+    }
+
+    /**
+     * A scenario for the invented coast (linear model; keys as in docs/scenario-schema.md): a typical
+     * "pure" campaign day, weak offshore ambient flow, so model and demo observations can be compared.
+     */
+    String scenarioYaml() {
+        return "# INVENTED coast (Quillmarsh Reach) for demonstration; written by littoral make-demo-data.\n"
+                + "# Hypothesis: on a weak-offshore (\"pure\") summer day the sea breeze forms by late morning\n"
+                + "# and reaches the bay-shore site (4 km) before noon and the inland site (25 km) in the early\n"
+                + "# afternoon, as on the invented campaign's pure days.\n"
+                + "name: quillmarsh-pure\n"
+                + "description: >-\n"
+                + "  INVENTED Quillmarsh Reach coast (sea, 1.2 km barrier strip, 2.5 km bay, mainland) at 39.6 N on a\n"
+                + "  weak-offshore day: when does the sea breeze reach the 4 km and 25 km demo sites?\n"
+                + "kind: linear\n"
+                + coastSection(midSeasonDayOfYear())
+                + surfaceSection()
+                + "grid:\n  points: 2048\n  spacing_km: 0.5\n  levels: 81\n  top_m: 4000\n  first_level_spacing_m: 10\n"
+                + "atmosphere:\n"
+                + "  surface_theta_K: 294.0\n"
+                + "  buoyancy_frequency_per_s: 0.0135   # theta gradient about 5.5 K/km, as on the invented days\n"
+                + "  surface_mixing_ratio_g_per_kg: 10\n"
+                + "  mixing_ratio_gradient_g_per_kg_per_km: -3\n"
+                + "  surface_pressure_hPa: 1014\n"
+                + "ambient_wind:\n  speed_m_per_s: 3\n  from_deg: 315   # offshore\n"
+                + "heating:\n  shape: slab\n  peak_flux_difference_W_per_m2: 250\n  entrainment_ratio: 0.2\n"
+                + "  initial_depth_m: 100\n  transition_half_width_km: 1\n"
+                + "physics:\n  friction_per_s: 2.0e-5\n  hydrostatic: true\n  harmonics: 24\n"
+                + sitesSection()
+                + "flights:\n  cadence_min: 30\n  start_h: 7\n  end_h: 18\n  dense_cadence_min: 15\n"
+                + "  dense_start_h: 10\n  dense_end_h: 15\n  ceiling_m: 600\n  bin_m: 5\n  ascent_rate_m_per_s: 3\n"
+                + "  noise:\n    seed: " + campaign.seed() + "\n"
+                + "output:\n  start_h: 4\n  end_h: 24\n";
     }
 
     String daysCsv() {

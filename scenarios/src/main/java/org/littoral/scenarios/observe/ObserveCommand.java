@@ -70,7 +70,7 @@ public final class ObserveCommand implements Callable<Integer> {
         List<Path> files = new ArrayList<>();
         if (Files.isDirectory(obs)) {
             try (Stream<Path> s = Files.list(obs)) {
-                s.filter(p -> p.getFileName().toString().endsWith(".csv")).sorted().forEach(files::add);
+                s.filter(p -> p.getFileName().toString().endsWith(".csv") || p.getFileName().toString().endsWith(".csv.gz")).sorted().forEach(files::add);
             }
             if (files.isEmpty()) {
                 throw new UserInputException("observations folder " + obs + " holds no *.csv files; give a profile CSV or a folder of them");

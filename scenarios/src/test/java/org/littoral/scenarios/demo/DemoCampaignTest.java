@@ -226,6 +226,57 @@ class DemoCampaignTest {
         }
     }
 
+    /** The files go through the analysis chain's own reader unchanged (binned and raw, gzipped). */
+    @Test
+    void theAnalysisIngestReadsTheDemoFiles(@TempDir Path tmp) throws IOException {
+        DemoDataWriter w = new DemoDataWriter(CAMPAIGN);
+        DemoDay day = CAMPAIGN.day(w.defaultRawSiteDays().get(0).date());
+        w.writeBinned(tmp.resolve("binned.csv.gz"), List.of(day));
+        List<DemoFlights.Flight> flights = DemoFlights.schedule(day, 0);
+        w.writeRaw(day, 0, flights.subList(0, 4), tmp.resolve("raw.csv.gz"));
+        org.littoral.scenarios.analysis.ingest.ProfileCsvReader reader =
+                new org.littoral.scenarios.analysis.ingest.ProfileCsvReader(new org.littoral.scenarios.analysis.ingest.IngestSettings());
+        var binned = reader.read(tmp.resolve("binned.csv.gz"));
+        assertFalse(binned.raw());
+        assertEquals(DemoFlights.schedule(day, 0).size() + DemoFlights.schedule(day, 1).size(), binned.profiles().size());
+        var raw = reader.read(tmp.resolve("raw.csv.gz"));
+        assertTrue(raw.raw());
+        assertEquals(4, raw.profiles().size());
+        // The raw ascent binned by the analysis chain agrees with the generator's own 5 m profile of the same
+        // flight to within the instruments' noise and lag (0.5 K near 300 m).
+        DemoFlights.BinnedAscent mine = DemoFlights.binned(day, flights.get(1));
+        org.littoral.model.sounding.Profile theirs = raw.profiles().get(1);
+        int k = 0;
+        while (k < theirs.size() && Math.abs(theirs.heightM()[k] - 302.5) > 2.6) {
+            k++;
+        }
+        assertTrue(k < theirs.size(), "no bin near 300 m");
+        assertEquals(mine.temperatureC()[60] + 273.15, theirs.temperatureK()[k], 0.5);
+    }
+
+    @Test
+    void theScenarioAndCoastFilesReadAsTheInventedCoast(@TempDir Path tmp) throws IOException {
+        DemoDataWriter w = new DemoDataWriter(CAMPAIGN);
+        var scenario = org.littoral.scenarios.scenario.ScenarioFile.parse("scenario-quillmarsh-pure.yaml", w.scenarioYaml(), false);
+        assertEquals(DemoCoast.BEARING_LAND_TO_SEA_DEG, scenario.coast().bearingLandToSeaDeg());
+        assertEquals(DemoCoast.LATITUDE_DEG, scenario.coast().latitudeDeg());
+        Files.writeString(tmp.resolve("coast.yaml"), w.coastYaml());
+        Coast c = org.littoral.scenarios.observe.CoastFile.load(tmp.resolve("coast.yaml").toString());
+        assertEquals(scenario.coast(), c);
+    }
+
+    /** The small files in demo-data/ are exactly what the documented generator writes with the default seed. */
+    @Test
+    void theRepositoryDemoFilesComeFromTheGenerator() throws IOException {
+        Path dir = Path.of("..", "demo-data");
+        DemoDataWriter w = new DemoDataWriter(CAMPAIGN);
+        assertEquals(w.daysCsv(), Files.readString(dir.resolve("days.csv")));
+        assertEquals(w.passagesCsv(), Files.readString(dir.resolve("truth/passages.csv")));
+        assertEquals(w.glitchesCsv(w.defaultRawSiteDays()), Files.readString(dir.resolve("truth/glitches.csv")));
+        assertEquals(w.coastYaml(), Files.readString(dir.resolve("coast.yaml")));
+        assertEquals(w.scenarioYaml(), Files.readString(dir.resolve("scenario-quillmarsh-pure.yaml")));
+    }
+
     @Test
     void humidityOver100PercentOccursOnlyWherePlanted() {
         Set<String> planted = new HashSet<>();

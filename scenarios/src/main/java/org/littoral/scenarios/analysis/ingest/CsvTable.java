@@ -33,7 +33,11 @@ public final class CsvTable {
     }
 
     public static CsvTable read(Path file) {
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        // Gzipped CSV (name ending in .gz) is read transparently: the demo campaign ships that way.
+        try (BufferedReader r = file.getFileName().toString().endsWith(".gz")
+                ? new BufferedReader(new java.io.InputStreamReader(
+                        new java.util.zip.GZIPInputStream(Files.newInputStream(file), 1 << 16), StandardCharsets.UTF_8))
+                : Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(file.getFileName().toString(), r);
         } catch (IOException e) {
             throw new UserInputException(file + ": cannot read (" + e.getMessage() + "); check the path");
