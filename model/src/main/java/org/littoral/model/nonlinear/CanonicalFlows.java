@@ -132,4 +132,87 @@ public final class CanonicalFlows {
         }
         return new double[] {area, peak};
     }
+
+    /**
+     * Near-surface front diagnostics of a coast run at one time: the strongest convergence of the
+     * lowest-layer cross-shore wind over land (0..maxInlandM) and where it is.
+     *
+     * @return {front x m, convergence -du/dx 1/s, peak lowest-layer onshore wind m/s relative to Ug}
+     */
+    public static double[] frontAt(NonlinearSolution s, double timeSec, double maxInlandM) {
+        var snap = s.snapshotAt(timeSec);
+        double[] x = s.xM();
+        double ug = s.background().ambientUMPerS()[0];
+        double best = 0;
+        double at = Double.NaN;
+        double peak = 0;
+        for (int i = 1; i < x.length - 1; i++) {
+            double ua = snap.uMPerS()[i] - ug;
+            if (Math.abs(x[i]) < maxInlandM) {
+                peak = Math.max(peak, ua);
+            }
+            if (x[i] < 0 || x[i] > maxInlandM) {
+                continue;
+            }
+            double conv = -(snap.uMPerS()[i + 1] - snap.uMPerS()[i - 1]) / (x[i + 1] - x[i - 1]);
+            if (conv > best) {
+                best = conv;
+                at = x[i];
+            }
+        }
+        return new double[] {at, best, peak};
+    }
+
+    /**
+     * A sea breeze on a coarse grid (2 km, 320 km domain, 40 layers to 5 km) with a prescribed land
+     * heat flux (250 W/m2 peak, Bowen ratio 1), 06-16 solar h, under a geostrophic wind.
+     */
+    public static NonlinearSolution coarseSeaBreeze(double latitudeDeg, double geostrophicSpeed, double fromDeg, double endSolarHours) {
+        NonlinearConfig c = NonlinearConfig.builder(new Coast(latitudeDeg, 0.0, 0.0, 270.0, 172),
+                        SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1), HorizontalGrid.centred(160, 2000.0),
+                        VerticalGrid.stretched(41, 5000.0, 30.0))
+                .geostrophicWind(geostrophicSpeed, fromDeg)
+                .forcing(new Forcing.PrescribedSurfaceFlux(250.0, 6.0, 18.0, 0.0))
+                .solarHours(6.0, endSolarHours).outputIntervalS(900.0).build();
+        return NonlinearModel.run(c);
+    }
+
+    /**
+     * Slab mixed-layer depth over uniform land heated by a prescribed half-sine flux, in the full model
+     * (mixing on, no coast), into a constant lapse rate.
+     *
+     * @return {model h at the end m, zero-order-jump h m, depth of the resolved well-mixed theta layer m}
+     */
+    public static double[] heatedColumn(double peakFluxWm2, double lapseKPerM, double entrainmentRatio, double endSolarHours) {
+        double[] zt = {0.0, 10_000.0};
+        double[] tt = {300.0, 300.0 + lapseKPerM * 10_000.0};
+        NonlinearConfig.BoundaryLayer bl = new NonlinearConfig.BoundaryLayer(entrainmentRatio, 100.0, 100.0, 200.0, 0.5);
+        NonlinearConfig c = NonlinearConfig.builder(new Coast(40.0, 0.0, 0.0, 270.0, 172), allLand(1.0, 0.1),
+                        HorizontalGrid.centred(8, 2000.0), VerticalGrid.uniform(81, 4000.0))
+                .theta(new ThetaProfile.Tabulated(zt, tt)).boundaryLayer(bl)
+                .damping(new NonlinearConfig.Damping(0, 0, 0.2, 600, 0, 600))
+                .forcing(new Forcing.PrescribedSurfaceFlux(peakFluxWm2, 6.0, 18.0, 0.0))
+                .solarHours(6.0, endSolarHours).outputIntervalS(1800.0).build();
+        NonlinearSolution s = NonlinearModel.run(c);
+        double hModel = s.mixedLayerDepthM(s.endSec())[0];
+        // zero-order jump: h^2 = h0^2 + 2 (1 + 2A) Integral(H_kin dt) / gamma (Tennekes 1973)
+        double ts = Thermo.temperatureFromPotentialK(300.0, c.surfacePressurePa());
+        double rho = Thermo.densityKgM3(c.surfacePressurePa(), ts, c.surfaceMixingRatio());
+        double dayS = 12 * 3600.0;
+        double integral = peakFluxWm2 / (rho * Thermo.CP) * dayS / Math.PI
+                * (1.0 - Math.cos(Math.PI * (endSolarHours - 6.0) * 3600.0 / dayS));
+        double hZoj = org.littoral.model.mixedlayer.ZeroOrderJump.depthM(100.0, entrainmentRatio, lapseKPerM, integral);
+        // resolved theta: top of the layer within 0.5 K of the lowest-layer theta (a common parcel-style criterion)
+        var snap = s.snapshotAt(s.endSec());
+        double[] z = s.zM();
+        double th1 = snap.thetaK()[0];
+        double top = z[0];
+        for (int k = 0; k < z.length; k++) {
+            if (snap.thetaK()[k * snap.nx()] > th1 + 0.5) {
+                break;
+            }
+            top = z[k];
+        }
+        return new double[] {hModel, hZoj, top};
+    }
 }

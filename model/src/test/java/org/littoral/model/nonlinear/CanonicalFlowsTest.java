@@ -25,4 +25,12 @@ class CanonicalFlowsTest {
         assertTrue(north[0] < 0, "NH area " + north[0]);
         assertTrue(south[0] > 0, "SH area " + south[0]);
     }
+
+    /** Tennekes (1973) zero-order jump with A = 0.2 (from memory): h^2 = h0^2 + 2 (1 + 2A) Integral(H dt) / gamma. */
+    @Test
+    void slabMixedLayerOverHeatedLandFollowsTheZeroOrderJumpAndTheResolvedLayerAgrees() {
+        double[] r = CanonicalFlows.heatedColumn(200.0, 0.005, 0.2, 12.0);
+        assertEquals(r[1], r[0], 0.05 * r[1]);
+        assertEquals(r[0], r[2], 0.15 * r[0], "resolved well-mixed depth " + r[2]);
+    }
 }
