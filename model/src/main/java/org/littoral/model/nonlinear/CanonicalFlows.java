@@ -103,12 +103,12 @@ public final class CanonicalFlows {
     public static double[] breezeHodographArea(double latitudeDeg) {
         double omega = 2 * Math.PI / 86400.0;
         double q0 = 4e-5;
-        double x0 = 10_000.0;
+        double x0 = 20_000.0;
         double depth = 500.0;
         HeatingRate q = (x, z, t) -> q0 * (0.5 * Math.PI + Math.atan(x / x0)) * Math.exp(-z / depth)
                 * Math.sin(omega * (t - 6 * 3600.0));
         NonlinearConfig c = NonlinearConfig.builder(new Coast(latitudeDeg, 0.0, 0.0, 270.0, 172), SurfaceMap.simpleCoast(293.15, 0.2, 1, 0.1),
-                        HorizontalGrid.centred(128, 4000.0), VerticalGrid.stretched(21, 8000.0, 50.0))
+                        HorizontalGrid.centred(64, 8000.0), VerticalGrid.stretched(17, 8000.0, 60.0))
                 .forcing(new Forcing.PrescribedHeating(q)).switches(new NonlinearConfig.Switches(true, false, false))
                 .damping(new NonlinearConfig.Damping(1.0 / 86400.0, 1.0 / 86400.0, 0.3, 600, 100_000, 1800))
                 .solarHours(6, 54).outputIntervalS(900).build();
