@@ -215,4 +215,117 @@ public final class CanonicalFlows {
         }
         return new double[] {hModel, hZoj, top};
     }
+
+    /**
+     * The classic heating of linear theory on a periodic domain, Q = Q0 pi M(x) exp(-z/H) sin(Omega (t - t_r)),
+     * with M the land indicator of [0, L/2) smoothed by arctan steps of half-width x0 and summed over its
+     * periodic images: the mask the linear model uses (its {@code ShoreMask}) rebuilt in x space.
+     */
+    public static HeatingRate classicPeriodicHeating(double q0KPerS, double x0M, double depthM, double sunriseSolarHours,
+                                                     HorizontalGrid grid) {
+        double omega = 2 * Math.PI / 86400.0;
+        double length = grid.lengthM();
+        double[] piM = new double[grid.nx()];
+        for (int i = 0; i < piM.length; i++) {
+            piM[i] = periodicArctanMask(grid.xM(i), x0M, length);
+        }
+        return (x, z, t) -> {
+            int i = (int) Math.round((x - grid.x0M()) / grid.dxM());
+            double m = i >= 0 && i < piM.length && Math.abs(grid.xM(i) - x) < 1e-6 ? piM[i] : periodicArctanMask(x, x0M, length);
+            return q0KPerS * m * Math.exp(-z / depthM) * Math.sin(omega * (t - sunriseSolarHours * 3600.0));
+        };
+    }
+
+    /** pi M(x) for land on [0, L/2): arctan steps at 0 and L/2 with their periodic images (|n| &lt;= 400). */
+    static double periodicArctanMask(double x, double x0M, double length) {
+        double half = 0.5 * length;
+        double m = 0;
+        for (int n = -400; n <= 400; n++) {
+            double xs = n * length;
+            m += Math.atan((x - xs) / x0M) - Math.atan((x - xs - half) / x0M);
+        }
+        return m;
+    }
+
+    /**
+     * The nonlinear model with {@code Switches.linearEquations()} against the linear spectral model,
+     * same classic heating, 45 N, N = 0.01, friction = cooling = 1/(12 h), non-hydrostatic; the nonlinear
+     * run spins up from rest for two days and day 3 is compared with the periodic linear solution.
+     *
+     * @return {peak onshore u nonlinear, peak linear, time of peak nonlinear h, time of peak linear h,
+     *         pattern correlation of u at the linear peak (|x| &lt; 150 km, z &lt; 4 km)}
+     */
+    public static double[] linearModeComparison() {
+        Coast coast = new Coast(45.0, 0.0, 0.0, 270.0, 172);
+        SurfaceMap map = SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1);
+        int nx = 128;
+        HorizontalGrid xg = HorizontalGrid.centred(nx, 4000.0);
+        VerticalGrid zi = VerticalGrid.stretched(25, 8000.0, 50.0);
+        double alpha = 1.0 / 43200.0;
+        double q0 = 2e-5;
+        double x0 = 10_000.0;
+        double hq = 500.0;
+        NonlinearConfig c = NonlinearConfig.builder(coast, map, xg, zi).switches(NonlinearConfig.Switches.linearEquations())
+                .forcing(new Forcing.PrescribedHeating(classicPeriodicHeating(q0, x0, hq, 6.0, xg)))
+                .damping(new NonlinearConfig.Damping(alpha, alpha, 0.3, 600, 0, 600)).solarHours(0, 72).outputIntervalS(900).build();
+        NonlinearSolution s = NonlinearModel.run(c);
+        double[] zc = s.zM();
+        org.littoral.model.linear.LinearConfig lc = new org.littoral.model.linear.LinearConfig(coast, map, xg, VerticalGrid.of(zc),
+                0.01, alpha, alpha, 0.0, false, 1, new org.littoral.model.linear.HeatingSpec.ClassicShape(q0, x0, hq, 6.0),
+                300.0, 0.008, -2e-6, 101325.0);
+        var ls = org.littoral.model.linear.LinearBreezeModel.solve(lc);
+        double[] x = s.xM();
+        double bestN = -1e9;
+        double tN = 0;
+        double bestL = -1e9;
+        double tL = 0;
+        for (double t = 48 * 3600.0; t <= 72 * 3600.0; t += 900.0) {
+            var a = s.snapshotAt(t);
+            var b = ls.snapshotAt(t);
+            for (int i = 0; i < nx; i++) {
+                if (Math.abs(x[i]) > 100_000) {
+                    continue;
+                }
+                if (a.uMPerS()[i] > bestN) {
+                    bestN = a.uMPerS()[i];
+                    tN = t;
+                }
+                if (b.uMPerS()[i] > bestL) {
+                    bestL = b.uMPerS()[i];
+                    tL = t;
+                }
+            }
+        }
+        var a = s.snapshotAt(tL);
+        var b = ls.snapshotAt(tL);
+        double ma = 0;
+        double mb = 0;
+        int n = 0;
+        for (int k = 0; k < zc.length; k++) {
+            for (int i = 0; i < nx; i++) {
+                if (Math.abs(x[i]) <= 150_000 && zc[k] <= 4000) {
+                    ma += a.uMPerS()[k * nx + i];
+                    mb += b.uMPerS()[k * nx + i];
+                    n++;
+                }
+            }
+        }
+        ma /= n;
+        mb /= n;
+        double sab = 0;
+        double saa = 0;
+        double sbb = 0;
+        for (int k = 0; k < zc.length; k++) {
+            for (int i = 0; i < nx; i++) {
+                if (Math.abs(x[i]) <= 150_000 && zc[k] <= 4000) {
+                    double da = a.uMPerS()[k * nx + i] - ma;
+                    double db = b.uMPerS()[k * nx + i] - mb;
+                    sab += da * db;
+                    saa += da * da;
+                    sbb += db * db;
+                }
+            }
+        }
+        return new double[] {bestN, bestL, tN / 3600.0 - 48, tL / 3600.0 - 48, sab / Math.sqrt(saa * sbb)};
+    }
 }

@@ -41,6 +41,7 @@ public final class NonlinearModelSuite implements ValidationSuite {
         hodograph(out);
         mixedLayer(out);
         ambientFlow(out);
+        linearMode(out);
         return out;
     }
 
@@ -88,6 +89,20 @@ public final class NonlinearModelSuite implements ValidationSuite {
                 "slab mixed-layer depth at 12 solar h over uniform land, m", r[1], 0.05, r[0], true,
                 String.format(Locale.ROOT, "half-sine 200 W/m2 peak from 6 h, gamma = 5 K/km, A = 0.2, h0 = 100 m; the resolved theta "
                         + "profile is well mixed (within 0.5 K) to %.0f m", r[2])));
+    }
+
+    private static void linearMode(List<ValidationCase> out) {
+        double[] r = CanonicalFlows.linearModeComparison();
+        String src = "LinearBreezeModel (Rotunno 1983 equations, spectral) with the same heating";
+        String note = "nonlinear terms, mixing and drag off; classic heating Q0 = 2e-5 K/s, x0 = 10 km, H = 500 m; 45 N, "
+                + "N = 0.01 1/s, friction = cooling = 1/(12 h); 4 km grid, day 3 of a run from rest";
+        out.add(ValidationCase.relative("nonlinear.linear-mode-peak-u", src, "peak onshore u within 100 km of the coast, m/s",
+                r[1], 0.10, r[0], false, note));
+        out.add(ValidationCase.absolute("nonlinear.linear-mode-peak-time", src, "time of the peak, h after midnight",
+                r[3], 0.5, r[2], false, note));
+        boolean ok = r[4] >= 0.95;
+        out.add(new ValidationCase("nonlinear.linear-mode-pattern", src, "pattern correlation of u at the peak (|x| < 150 km, z < 4 km)",
+                ">= 0.95", "threshold", ValidationCase.fmt(r[4]), ok, false, note));
     }
 
     private static void ambientFlow(List<ValidationCase> out) {
