@@ -51,6 +51,8 @@ public final class AnalysisBenchmark implements Benchmark {
         int passages = 0;
         int profiles = 0;
         double genS = 0;
+        java.util.Map<String, double[]> truth = new java.util.HashMap<>();
+        AnalysisResult last = null;
         resetPeaks();
         for (int rep = 0; rep < reps; rep++) {
             Random r = new Random(4242);
@@ -67,6 +69,8 @@ public final class AnalysisBenchmark implements Benchmark {
                 double bay = !Double.isNaN(front) && r.nextDouble() < 0.3 ? front - 1.5 - r.nextDouble() : Double.NaN;
                 SyntheticAscents.DaySpec spec = SyntheticAscents.DaySpec.typical("S" + (d % 2), "2024-06-" + String.format(Locale.ROOT,
                         "%02d", 1 + d / 2 % 30) + (d >= 60 ? "b" : ""), coast, amb, front, bay, r.nextLong());
+                truth.put(spec.day() + "/" + spec.site(), Double.isNaN(front) ? new double[0]
+                        : Double.isNaN(bay) ? new double[] {front} : new double[] {bay, front});
                 long g0 = System.nanoTime();
                 List<RawFlight> flights = SyntheticAscents.day(spec);
                 long g1 = System.nanoTime();
@@ -88,6 +92,7 @@ public final class AnalysisBenchmark implements Benchmark {
             genS = genNs / 1e9;
             passages = res.passages().size();
             profiles = all.size();
+            last = res;
         }
         double peakMb = peakHeapMb();
         double[] sorted = times.clone();
@@ -101,9 +106,37 @@ public final class AnalysisBenchmark implements Benchmark {
                 samples / 1e6 / median);
         out.printf(Locale.ROOT, "  generation of the invented flights (not counted): %.2f s%n", genS);
         out.printf(Locale.ROOT, "  peak heap: %.0f MB (target %.0f MB); single thread%n", peakMb, TARGET_MB);
+        score(out, last, truth, coast);
         boolean ok = median < TARGET_S && peakMb < TARGET_MB;
         out.printf(Locale.ROOT, "  target < %.0f s and < %.0f MB: %s%n", TARGET_S, TARGET_MB, ok ? "met" : "NOT met");
         return ok ? 0 : 1;
+    }
+
+    /** Skill on the invented days (known passage times), per detector and combined; not timed. */
+    private static void score(PrintStream out, AnalysisResult res, java.util.Map<String, double[]> truth, Coast coast) {
+        AnalysisSettings s = new AnalysisSettings();
+        List<org.littoral.scenarios.analysis.detect.PassageDetector> dets =
+                org.littoral.scenarios.analysis.detect.PassageFinder.detectors(s.detection);
+        org.littoral.scenarios.analysis.detect.DetectionScore[] per =
+                new org.littoral.scenarios.analysis.detect.DetectionScore[dets.size() + 1];
+        Arrays.fill(per, new org.littoral.scenarios.analysis.detect.DetectionScore(0, 0, 0, 0));
+        for (org.littoral.scenarios.analysis.SiteDayResult r : res.siteDays()) {
+            double[] tr = truth.get(r.siteDay().key());
+            double[] t = r.siteDay().timeHours();
+            for (int k = 0; k < dets.size(); k++) {
+                double[] found = dets.get(k).detect(r.siteDay(), coast).stream()
+                        .mapToDouble(org.littoral.scenarios.analysis.detect.ChangeCandidate::timeHours).toArray();
+                per[k] = per[k].plus(org.littoral.scenarios.analysis.detect.DetectionScore.score(tr, found, t));
+            }
+            double[] passages = r.passages().stream().mapToDouble(org.littoral.scenarios.analysis.detect.Passage::timeHours).toArray();
+            per[dets.size()] = per[dets.size()].plus(org.littoral.scenarios.analysis.detect.DetectionScore.score(tr, passages, t));
+        }
+        for (int k = 0; k <= dets.size(); k++) {
+            String name = k < dets.size() ? dets.get(k).name() : "passages (combined)";
+            out.printf(Locale.ROOT, "  skill %-20s %d of %d true passages within one flight interval (%.0f %%), %d false of %d (%.0f %%)%n",
+                    name, per[k].hits(), per[k].truths(), 100 * per[k].hitRate(), per[k].falseDetections(), per[k].detections(),
+                    100 * per[k].falseRate());
+        }
     }
 
     private static void resetPeaks() {

@@ -15,9 +15,12 @@ import org.littoral.scenarios.analysis.Variable;
  * change point is placed where all series jointly change their means. Because the daily standard
  * deviation contains the signal, this is a scaled-likelihood criterion rather than a likelihood;
  * the penalty counts one mean per series plus the location ((p + 1) ln n for BIC). A profile
- * missing any series is left out of this detector (logged by the chain as a skipped profile).
+ * missing any series is left out of this detector. The penalty is multiplied by
+ * {@link DetectionSettings#multiPenaltyFactor} (default 2): slow diurnal trends in theta otherwise
+ * get cut into steps.
  */
 public final class MultivariateDetector implements PassageDetector {
+
     private final DetectionSettings s;
 
     public MultivariateDetector(DetectionSettings settings) {

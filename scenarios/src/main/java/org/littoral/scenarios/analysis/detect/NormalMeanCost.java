@@ -9,7 +9,7 @@ package org.littoral.scenarios.analysis.detect;
  *
  * <p>Allocates its prefix sums (2 p (n + 1) doubles) once in the constructor.
  */
-public final class NormalMeanCost {
+public final class NormalMeanCost implements SegmentCost {
     private final int n;
     private final int dims;
     private final double[] s1;
@@ -41,6 +41,7 @@ public final class NormalMeanCost {
         }
     }
 
+    @Override
     public int length() {
         return n;
     }
@@ -49,7 +50,14 @@ public final class NormalMeanCost {
         return dims;
     }
 
+    /** One mean per dimension. */
+    @Override
+    public int parametersPerChange() {
+        return dims;
+    }
+
     /** Cost of the segment of samples a..b-1 (0 &lt;= a &lt; b &lt;= n). */
+    @Override
     public double cost(int a, int b) {
         int len = b - a;
         double c = 0.0;

@@ -9,10 +9,10 @@ public final class OptimalPartitioning {
     private OptimalPartitioning() {
     }
 
-    public static Segmentation segment(NormalMeanCost cost, Penalty penalty, int minSegmentLength) {
+    public static Segmentation segment(SegmentCost cost, Penalty penalty, int minSegmentLength) {
         int n = cost.length();
         int m = Math.max(1, minSegmentLength);
-        double beta = penalty.perChange(Math.max(n, 2), cost.dimensions());
+        double beta = penalty.perChange(Math.max(n, 2), cost.parametersPerChange());
         double[] f = new double[n + 1];
         int[] last = new int[n + 1];
         java.util.Arrays.fill(f, Double.POSITIVE_INFINITY);
@@ -37,7 +37,7 @@ public final class OptimalPartitioning {
      * Bull. Math. Biol. 51, 39-54), no penalty; totalCost is the sum of segment costs.
      * Returns null when no such segmentation exists. Allocates O(k n).
      */
-    public static Segmentation segmentWithChanges(NormalMeanCost cost, int k, int minSegmentLength) {
+    public static Segmentation segmentWithChanges(SegmentCost cost, int k, int minSegmentLength) {
         int n = cost.length();
         int m = Math.max(1, minSegmentLength);
         double[][] f = new double[k + 1][n + 1];

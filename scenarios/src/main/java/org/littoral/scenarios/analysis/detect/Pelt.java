@@ -16,10 +16,10 @@ public final class Pelt {
     }
 
     /** Runs PELT; allocates O(n) work arrays. */
-    public static Segmentation segment(NormalMeanCost cost, Penalty penalty, int minSegmentLength) {
+    public static Segmentation segment(SegmentCost cost, Penalty penalty, int minSegmentLength) {
         int n = cost.length();
         int m = Math.max(1, minSegmentLength);
-        double beta = penalty.perChange(Math.max(n, 2), cost.dimensions());
+        double beta = penalty.perChange(Math.max(n, 2), cost.parametersPerChange());
         double[] f = new double[n + 1];
         int[] last = new int[n + 1];
         java.util.Arrays.fill(f, Double.POSITIVE_INFINITY);

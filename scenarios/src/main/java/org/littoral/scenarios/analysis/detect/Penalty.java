@@ -47,7 +47,7 @@ public record Penalty(Kind kind, double manualValue, double factor) {
         return new Penalty(kind, manualValue, factor * f);
     }
 
-    /** Penalty per change point for a series of n samples and p changing means. */
+    /** Penalty per change point for a series of n samples and p changing parameters (means, or means and slopes). */
     public double perChange(int n, int p) {
         double logN = Math.log(n);
         double v = switch (kind) {

@@ -45,7 +45,9 @@ class DetectorsTest {
     void theMultivariateDetectorSeesAThermodynamicChangeWithSteadyWind() {
         double[] w = Coast.eastNorthFromDirection(4, 270);
         SiteDay sd = day(13.2, 301, 298, w, w, 2);
-        assertEquals(1, new MultivariateDetector(new DetectionSettings()).detect(sd, COAST).size());
+        DetectionSettings s = new DetectionSettings();
+        s.multiVariables = List.of(org.littoral.scenarios.analysis.Variable.THETA);
+        assertEquals(1, new MultivariateDetector(s).detect(sd, COAST).size());
         assertEquals(0, new WindShiftDetector(new DetectionSettings()).detect(sd, COAST).size());
     }
 
@@ -53,6 +55,7 @@ class DetectorsTest {
     void aChangeOnlyTheMultivariateDetectorFindsIsListedAsUnconfirmed() {
         double[] w = Coast.eastNorthFromDirection(4, 270);
         DetectionSettings s = new DetectionSettings();
+        s.multiVariables = List.of(org.littoral.scenarios.analysis.Variable.THETA);
         PassageFinder.Outcome o = PassageFinder.find(day(13.2, 301, 298, w, w, 3), COAST, PassageFinder.detectors(s), s);
         assertTrue(o.passages().isEmpty());
         assertEquals(1, o.unconfirmed().size());
