@@ -21,7 +21,8 @@ public final class AnalysisOutputs {
     private AnalysisOutputs() {
     }
 
-    public static List<Path> write(Path out, AnalysisResult r, QcLog qc, String what, Coast coast, List<Profile> profiles)
+    public static List<Path> write(Path out, AnalysisResult r, QcLog qc, String what, Coast coast, List<Profile> profiles,
+            org.littoral.scenarios.analysis.AnalysisSettings settings)
             throws IOException {
         List<Path> files = new ArrayList<>();
         files.add(text(out.resolve("site-days.csv"), AnalysisTables.siteDays(r)));
@@ -61,7 +62,7 @@ public final class AnalysisOutputs {
         Path summary = out.resolve("analysis.json");
         AtomicWrite.write(summary, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
         files.add(summary);
-        files.addAll(AnalysisReport.write(out, r, qc, what, coast));
+        files.addAll(AnalysisReport.write(out, r, qc, what, coast, settings));
         return files;
     }
 

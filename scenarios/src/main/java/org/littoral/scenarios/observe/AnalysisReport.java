@@ -3,59 +3,102 @@ package org.littoral.scenarios.observe;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+
 import org.littoral.model.coast.Coast;
 import org.littoral.scenarios.analysis.AnalysisResult;
+import org.littoral.scenarios.analysis.AnalysisSettings;
 import org.littoral.scenarios.analysis.SiteDayResult;
 import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.analysis.ingest.QcLog;
 import org.littoral.scenarios.analysis.stats.ComparisonRow;
+import org.littoral.scenarios.report.HtmlReport;
+import org.littoral.scenarios.report.Table;
 
-/** The analysis report (self-contained HTML). */
-final class AnalysisReport {
+/**
+ * The analysis report: a self-contained HTML page with the passages, figures (written also as PNG files
+ * next to it) and the group comparisons. {@link #addSections} puts the same content into a larger
+ * report (the demo).
+ */
+public final class AnalysisReport {
     private AnalysisReport() {
     }
 
-    static List<Path> write(Path out, AnalysisResult r, QcLog qc, String what, Coast coast) throws IOException {
+    static List<Path> write(Path out, AnalysisResult r, QcLog qc, String what, Coast coast, AnalysisSettings s)
+            throws IOException {
         List<Path> files = new ArrayList<>();
-        StringBuilder h = new StringBuilder();
-        h.append("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>littoral analysis</title><style>"
-                + "body{font-family:DejaVu Sans,Arial,sans-serif;max-width:1100px;margin:2em auto;color:#222}table{border-collapse:collapse}"
-                + "td,th{border:1px solid #bbb;padding:2px 6px;font-size:12px}th{background:#eef}</style></head><body>");
-        h.append("<h1>Analysis of ").append(esc(what)).append("</h1>");
-        h.append("<p>").append(r.siteDays().size()).append(" site-days, ").append(r.passages().size()).append(" passages (")
-                .append(r.passages().stream().filter(Passage::turnsOnshore).count()).append(" turning the wind onshore). QC log: ")
-                .append(qc.entries().size()).append(" entries (qc-log.csv).</p>");
-        h.append("<h2>Passages</h2><table><tr><th>day</th><th>site</th><th>#</th><th>time</th><th>&plusmn; h</th><th>confidence</th>"
-                + "<th>onshore</th><th>detectors</th><th>breeze type</th></tr>");
+        List<AnalysisFigures.Captioned> figs = AnalysisFigures.all(r, s, coast);
+        for (AnalysisFigures.Captioned c : figs) {
+            Path png = out.resolve(c.fileName());
+            c.figure().writePng(png);
+            files.add(png);
+        }
+        HtmlReport rep = HtmlReport.create("littoral analysis: " + what);
+        rep.meta("analysed", what);
+        rep.meta("coast", String.format(Locale.ROOT, "latitude %.2f deg, land-to-sea bearing %.0f deg", coast.latitudeDeg(),
+                coast.bearingLandToSeaDeg()));
+        addSections(rep, r, qc, figs);
+        rep.cautions();
+        Path html = out.resolve("report.html");
+        rep.write(html);
+        files.add(html);
+        return files;
+    }
+
+    /** Adds the analysis sections (summary, passages, figures, comparisons) to {@code rep}. */
+    public static void addSections(HtmlReport rep, AnalysisResult r, QcLog qc, List<AnalysisFigures.Captioned> figs) {
+        long onshore = r.passages().stream().filter(Passage::turnsOnshore).count();
+        rep.section("Passages found");
+        rep.paragraph(String.format(Locale.ROOT, "%d site-days analysed; %d passages detected, %d of them turning the wind into "
+                + "the onshore sector. The QC log (qc-log.csv) has %d entries%s.", r.siteDays().size(), r.passages().size(),
+                onshore, qc == null ? 0 : qc.entries().size(),
+                qc == null || qc.warnings().isEmpty() ? "" : "; warnings: " + String.join("; ", qc.warnings())));
+        Map<String, Integer> types = new LinkedHashMap<>();
         for (SiteDayResult d : r.siteDays()) {
-            for (Passage p : d.passages()) {
-                h.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%s</td><td>%d</td><td>%s</td><td>%.2f</td><td>%.2f</td><td>%s</td>"
-                        + "<td>%s</td><td>%s</td></tr>", esc(p.day()), esc(p.site()), p.ordinal(), clock(p.timeHours()), p.uncertaintyHours(),
-                        p.confidence(), p.turnsOnshore() ? "yes" : "no", esc(String.join(" ", p.detectors())), d.breezeType().name()));
+            types.merge(d.breezeType().name().toLowerCase(Locale.ROOT), 1, Integer::sum);
+        }
+        rep.keyValues(types);
+        for (AnalysisFigures.Captioned c : figs) {
+            if (c.fileName().startsWith("wind-direction")) {
+                rep.figure(c.figure(), c.caption());
             }
         }
-        h.append("</table>");
-        h.append("<h2>Group comparisons</h2><p>").append(esc(r.comparisonNote() == null ? "" : r.comparisonNote())).append("</p>");
-        h.append("<table><tr><th>metric</th><th>by</th><th>A</th><th>B</th><th>n</th><th>mean A</th><th>mean B</th><th>test</th>"
-                + "<th>p</th><th>p (Holm)</th></tr>");
-        for (ComparisonRow c : r.comparisons()) {
-            h.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%s</td><td>%s</td><td>%s</td><td>%d/%d</td><td>%.3g</td><td>%.3g</td>"
-                    + "<td>%s</td><td>%.3g</td><td>%.3g</td></tr>", esc(c.metric()), esc(c.attribute()), esc(c.groupA()), esc(c.groupB()),
-                    c.nA(), c.nB(), c.meanA(), c.meanB(), c.test().name(), c.pValue(), c.pHolm()));
+        Table t = Table.of("day", "site", "#", "time (local)", "+/- h", "confidence", "onshore", "detectors", "breeze type");
+        for (SiteDayResult d : r.siteDays()) {
+            for (Passage p : d.passages()) {
+                t.row(p.day(), p.site(), p.ordinal(), clock(p.timeHours()), p.uncertaintyHours(), p.confidence(),
+                        p.turnsOnshore() ? "yes" : "no", String.join(" ", p.detectors()),
+                        d.breezeType().name().toLowerCase(Locale.ROOT));
+            }
         }
-        h.append("</table></body></html>\n");
-        files.add(AnalysisOutputs.text(out.resolve("report.html"), h.toString()));
-        return files;
+        t.decimals("+/- h", 2).decimals("confidence", 2);
+        rep.table("Detected passages per site and day (passages.csv has every column). Timing uncertainty is at least half "
+                + "the local flight interval; confidence is the detectors' agreement.", t);
+        rep.section("Responses, distributions and composites");
+        for (AnalysisFigures.Captioned c : figs) {
+            if (!c.fileName().startsWith("wind-direction")) {
+                rep.figure(c.figure(), c.caption());
+            }
+        }
+        rep.section("Group comparisons");
+        if (r.comparisonNote() != null && !r.comparisonNote().isBlank()) {
+            rep.paragraph(r.comparisonNote());
+        }
+        Table c = Table.of("metric", "by", "A", "B", "n A", "n B", "mean A", "mean B", "difference", "test", "p", "p (Holm)");
+        for (ComparisonRow row : r.comparisons()) {
+            c.row(row.metric(), row.attribute(), row.groupA(), row.groupB(), row.nA(), row.nB(), row.meanA(), row.meanB(),
+                    row.meanA() - row.meanB(), row.test().name(), row.pValue(), row.pHolm());
+        }
+        c.decimals("mean A", 3).decimals("mean B", 3).decimals("difference", 3).decimals("p", 4).decimals("p (Holm)", 4);
+        rep.table("Comparisons between groups: the test is chosen from the samples' size and normality diagnostics "
+                + "(comparisons.csv has them); p (Holm) corrects for the number of comparisons made.", c);
     }
 
     static String clock(double h) {
         long m = Math.round(h * 60);
         return String.format(Locale.ROOT, "%02d:%02d", m / 60, m % 60);
-    }
-
-    static String esc(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 }

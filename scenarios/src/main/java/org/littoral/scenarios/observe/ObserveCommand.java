@@ -56,7 +56,7 @@ public final class ObserveCommand implements Callable<Integer> {
             System.err.println("littoral: QC warning: " + w);
         }
         AnalysisResult r = AnalysisChain.run(o.profiles(), coast, settings);
-        List<Path> files = AnalysisOutputs.write(out, r, o.qc(), "observed profiles " + obs, coast, o.profiles());
+        List<Path> files = AnalysisOutputs.write(out, r, o.qc(), "observed profiles " + obs, coast, o.profiles(), settings);
         System.out.println("littoral: analysed " + o.profiles().size() + " profiles in " + r.siteDays().size() + " site-days; "
                 + r.passages().size() + " passages; wrote " + files.size() + " files to " + out + " (open report.html)");
         return 0;

@@ -87,7 +87,7 @@ public final class PlanOutputs {
         root.set("notes", json.valueToTree(r.notes));
         root.set("files", json.valueToTree(List.of("site-capture.csv", "recommendations.csv", "arrival-fan.csv", "members/")));
         atomic(dir.resolve("plan.json"), json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
-        PlanReport.write(dir, plan, model, base, r, windows);
+        PlanReport.write(dir, plan, model.equals("scenario") ? base.kind().name().toLowerCase(Locale.ROOT) : model, r, windows);
     }
 
     static void printSummary(PlanSpec plan, PlanResult r, PrintStream out) {

@@ -1,65 +1,169 @@
 package org.littoral.scenarios.plan;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.stream.Collectors;
-import org.littoral.scenarios.scenario.Scenario;
 
-/** The plan's self-contained HTML report (tables now; figures are added by the report library). */
-final class PlanReport {
+import org.littoral.scenarios.report.FanChartFigure;
+import org.littoral.scenarios.report.Figure;
+import org.littoral.scenarios.report.HtmlReport;
+import org.littoral.scenarios.report.LineFigure;
+import org.littoral.scenarios.report.Marker;
+import org.littoral.scenarios.report.Series;
+import org.littoral.scenarios.report.Table;
+
+/**
+ * The plan's self-contained HTML report: recommendations, the fan chart of arrival time against inland
+ * distance, capture probability by distance and cadence, dense-cadence windows, cautions. The figures
+ * are also written as PNG files; {@link #addSections} puts the same content into a larger report.
+ */
+public final class PlanReport {
     private PlanReport() {
     }
 
-    static void write(Path dir, PlanSpec plan, String model, Scenario base, PlanResult r, DenseWindow[][] windows) throws IOException {
-        StringBuilder h = new StringBuilder();
-        h.append("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>littoral plan ")
-                .append(esc(plan.ensemble().name())).append("</title><style>body{font-family:DejaVu Sans,Arial,sans-serif;max-width:1000px;"
-                + "margin:2em auto;color:#222}table{border-collapse:collapse}td,th{border:1px solid #bbb;padding:3px 8px;"
-                + "font-size:13px}th{background:#eef}.caution{border:2px solid #c60;background:#fff4e5;padding:.6em 1em}</style></head><body>");
-        h.append("<h1>Site and cadence plan: ").append(esc(plan.ensemble().name())).append("</h1>");
-        h.append("<div class=\"caution\"><b>Caution.</b> ").append(esc(PlanOutputs.CAUTION)).append("</div>");
-        h.append("<p>").append(r.members).append(" ensemble members of <code>").append(esc(plan.ensemble().baseLabel()))
-                .append("</code> (").append(esc(model)).append(" model), ").append(plan.candidatesKm().length)
-                .append(" candidate distances, ").append(plan.sitesPerSet()).append(" sites per set, operating hours ")
-                .append(PlanOutputs.clock(plan.operatingStartH())).append("&ndash;").append(PlanOutputs.clock(plan.operatingEndH()))
-                .append(", ceiling ").append(String.format(Locale.ROOT, "%.0f", plan.ceilingM())).append(" m.</p>");
-        h.append("<h2>Recommendations</h2><table><tr><th>rank</th><th>sites (km inland)</th><th>cadence</th><th>score</th>"
-                + "<th>P(capture) [95% CI]</th><th>P(speed) [95% CI]</th>").append(r.hasBay ? "<th>P(bay/sea)</th>" : "")
-                .append("<th>flights/day</th></tr>");
+    /** A figure with its file name and caption. */
+    public record Captioned(String fileName, Figure figure, String caption) {
+    }
+
+    static void write(Path dir, PlanSpec plan, String model, PlanResult r, DenseWindow[][] windows) throws IOException {
+        List<Captioned> figs = figures(plan, r);
+        for (Captioned c : figs) {
+            c.figure().writePng(dir.resolve(c.fileName()));
+        }
+        HtmlReport rep = HtmlReport.create("littoral site and cadence plan: " + plan.ensemble().name());
+        rep.meta("base scenario", plan.ensemble().baseLabel());
+        rep.meta("model", model);
+        rep.meta("members", r.members + (r.failedMembers > 0 ? " (" + r.failedMembers + " failed)" : ""));
+        rep.caution("Planning advice, not a forecast.", PlanOutputs.CAUTION);
+        addSections(rep, plan, r, windows, figs);
+        rep.cautions();
+        rep.write(dir.resolve("report.html"));
+    }
+
+    /** The figures of a plan, in reading order. */
+    public static List<Captioned> figures(PlanSpec plan, PlanResult r) {
+        List<Captioned> out = new ArrayList<>();
+        if (!r.fan.isEmpty()) {
+            int n = r.fan.size();
+            double[] x = new double[n];
+            double[][] p = new double[5][n];
+            for (int i = 0; i < n; i++) {
+                PlanResult.FanRow f = r.fan.get(i);
+                x[i] = f.distanceKm();
+                p[0][i] = f.p5();
+                p[1][i] = f.p25();
+                p[2][i] = f.p50();
+                p[3][i] = f.p75();
+                p[4][i] = f.p95();
+            }
+            FanChartFigure fan = FanChartFigure.builder().size(900, 560).title("Front arrival time against inland distance")
+                    .x(x, "inland distance", "km").y("arrival (local time)", "h").percentiles(p[0], p[1], p[2], p[3], p[4])
+                    .build();
+            out.add(new Captioned("arrival-fan.png", fan, String.format(Locale.ROOT, "Arrival time of the onshore flow at each "
+                    + "candidate distance over the %d ensemble members: median (line), 25-75 %% (dark) and 5-95 %% (light) "
+                    + "ranges, over the members in which the front arrives there (the fraction is in Table 2).", r.members)));
+        }
+        Map<String, List<PlanResult.SiteRow>> byCadence = new LinkedHashMap<>();
+        for (PlanResult.SiteRow s : r.sites) {
+            byCadence.computeIfAbsent(s.cadence(), k -> new ArrayList<>()).add(s);
+        }
+        if (!byCadence.isEmpty()) {
+            LineFigure.Builder b = LineFigure.builder().size(900, 520).title("Probability that one site captures the passage")
+                    .x("inland distance", "km").y("P(captured)", "").yRange(0, 1.05);
+            int m = 0;
+            for (Map.Entry<String, List<PlanResult.SiteRow>> e : byCadence.entrySet()) {
+                List<PlanResult.SiteRow> rows = e.getValue();
+                double[] x = new double[rows.size()];
+                double[] y = new double[rows.size()];
+                double[] err = new double[rows.size()];
+                for (int i = 0; i < x.length; i++) {
+                    Proportion c = rows.get(i).captured();
+                    x[i] = rows.get(i).distanceKm();
+                    y[i] = c == null ? Double.NaN : c.estimate();
+                    err[i] = c == null ? Double.NaN : 0.5 * (c.upper() - c.lower());
+                }
+                b.series(Series.of(e.getKey(), x, y).marker(Marker.cycle(m++)).errorBars(null, err));
+            }
+            out.add(new Captioned("capture-by-distance.png", b.build(), String.format(Locale.ROOT, "Probability that a site at "
+                    + "each distance captures the passage (detected by the analysis chain within %.0f min of the model's arrival, "
+                    + "with at least %d profiles before and %d after it inside operating hours), per cadence option; bars: "
+                    + "half-width of the 95 %% Wilson interval.", plan.criteria().timingToleranceH() * 60,
+                    plan.criteria().minProfilesBefore(), plan.criteria().minProfilesAfter())));
+        }
+        return out;
+    }
+
+    /** Adds the plan sections (recommendations, figures, windows, arrival table) to {@code rep}. */
+    public static void addSections(HtmlReport rep, PlanSpec plan, PlanResult r, DenseWindow[][] windows, List<Captioned> figs) {
+        rep.section("Recommended site sets and cadences");
+        rep.paragraph(String.format(Locale.ROOT, "%d ensemble members of %s; %d candidate distances (%s km), %d sites per set, "
+                + "operating hours %s-%s, profiles to %.0f m. Ranking score: %s.", r.members, plan.ensemble().baseLabel(),
+                plan.candidatesKm().length, range(plan.candidatesKm()), plan.sitesPerSet(), PlanOutputs.clock(plan.operatingStartH()),
+                PlanOutputs.clock(plan.operatingEndH()), plan.ceilingM(), r.hasBay
+                        ? "0.5 P(speed resolved) + 0.3 P(passage captured at one site or more) + 0.2 P(bay and sea breeze separated)"
+                        : "0.6 P(speed resolved) + 0.4 P(passage captured at one site or more)"));
+        List<String> cols = new ArrayList<>(List.of("rank", "sites (km inland)", "cadence", "score", "P(capture)", "P(speed)"));
+        if (r.hasBay) {
+            cols.add("P(bay/sea)");
+        }
+        cols.add("flights/day");
+        Table t = Table.of(cols);
         for (int i = 0; i < Math.min(plan.top(), r.ranked.size()); i++) {
             SiteSetScore s = r.ranked.get(i);
-            h.append("<tr><td>").append(i + 1).append("</td><td>")
-                    .append(s.distancesKm().stream().map(d -> String.format(Locale.ROOT, "%.1f", d)).collect(Collectors.joining(", ")))
-                    .append("</td><td>").append(esc(s.cadence())).append("</td><td>").append(String.format(Locale.ROOT, "%.2f", s.score()))
-                    .append("</td><td>").append(ci(s.anyCaptured())).append("</td><td>").append(ci(s.speedResolved())).append("</td>")
-                    .append(r.hasBay ? "<td>" + ci(s.bayAndSeaSeparated()) + "</td>" : "").append("<td>").append(s.flightsPerDay())
-                    .append("</td></tr>");
+            List<Object> row = new ArrayList<>(List.of(i + 1, s.distancesKm().stream().map(d -> String.format(Locale.ROOT, "%.1f", d))
+                    .collect(Collectors.joining(", ")), s.cadence(), s.score(), ci(s.anyCaptured()), ci(s.speedResolved())));
+            if (r.hasBay) {
+                row.add(ci(s.bayAndSeaSeparated()));
+            }
+            row.add(s.flightsPerDay());
+            t.row(row.toArray());
         }
-        h.append("</table>");
-        for (String n : r.notes) {
-            h.append("<p><i>Note:</i> ").append(esc(n)).append("</p>");
+        t.decimals("score", 2);
+        rep.table("Ranked recommendations with 95 % Wilson intervals in brackets (recommendations.csv lists every set).", t);
+        if (!r.notes.isEmpty()) {
+            rep.bullets(r.notes);
         }
-        h.append("<h2>Arrival time against inland distance</h2><table><tr><th>km</th><th>members with arrival</th><th>5%</th>"
-                + "<th>25%</th><th>median</th><th>75%</th><th>95%</th></tr>");
-        for (PlanResult.FanRow f : r.fan) {
-            h.append(String.format(Locale.ROOT, "<tr><td>%.1f</td><td>%.0f%%</td><td>%s</td><td>%s</td><td>%s</td><td>%s</td><td>%s</td></tr>",
-                    f.distanceKm(), 100 * f.fractionArriving(), PlanOutputs.clock(f.p5()), PlanOutputs.clock(f.p25()),
-                    PlanOutputs.clock(f.p50()), PlanOutputs.clock(f.p75()), PlanOutputs.clock(f.p95())));
+        rep.section("Arrival times and capture by distance");
+        for (Captioned c : figs) {
+            rep.figure(c.figure(), c.caption());
         }
-        h.append("</table></body></html>\n");
-        PlanOutputs.atomic(dir.resolve("report.html"), h.toString().getBytes(StandardCharsets.UTF_8));
+        Table f = Table.of("km", "members with arrival", "5 %", "25 %", "median", "75 %", "95 %");
+        for (PlanResult.FanRow row : r.fan) {
+            f.row(row.distanceKm(), String.format(Locale.ROOT, "%.0f %%", 100 * row.fractionArriving()), PlanOutputs.clock(row.p5()),
+                    PlanOutputs.clock(row.p25()), PlanOutputs.clock(row.p50()), PlanOutputs.clock(row.p75()),
+                    PlanOutputs.clock(row.p95()));
+        }
+        f.decimals("km", 1);
+        rep.table("Percentiles of the model arrival time (local clock) at each candidate distance.", f);
+        Table w = Table.of("cadence", "km", "dense window (local)", "P(front arrives)", "P(captured)", "flights/day", "feasible");
+        for (PlanResult.SiteRow s : r.sites) {
+            w.row(s.cadence(), s.distanceKm(), Double.isNaN(s.denseStartH()) ? "none"
+                    : PlanOutputs.clock(s.denseStartH()) + "-" + PlanOutputs.clock(s.denseEndH()), ci(s.frontArrives()), ci(s.captured()),
+                    s.meanFlights(), s.feasible() ? "yes" : "no (too many flights)");
+        }
+        w.decimals("km", 1).decimals("flights/day", 1);
+        rep.table("Per distance and cadence option: the recommended window for the dense cadence (10th-90th percentile of the "
+                + "ensemble arrival time widened by one base interval, clipped to operating hours), and the probabilities behind "
+                + "the ranking.", w);
+    }
+
+    private static String range(double[] km) {
+        if (km.length == 0) {
+            return "none";
+        }
+        return km.length == 1 ? String.format(Locale.ROOT, "%.1f", km[0])
+                : String.format(Locale.ROOT, "%.1f to %.1f", km[0], km[km.length - 1]);
     }
 
     private static String ci(Proportion p) {
         if (p == null) {
             return "-";
         }
-        return String.format(Locale.ROOT, "%.0f%% [%.0f&ndash;%.0f]", 100 * p.estimate(), 100 * p.lower(), 100 * p.upper());
-    }
-
-    static String esc(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+        return String.format(Locale.ROOT, "%.0f %% [%.0f-%.0f]", 100 * p.estimate(), 100 * p.lower(), 100 * p.upper());
     }
 }

@@ -6,6 +6,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /** Write-then-rename, so a reader (or a resumed sweep) never sees a half-written file. */
 public final class AtomicFiles {
@@ -21,6 +22,7 @@ public final class AtomicFiles {
         Path tmp = Files.createTempFile(parent, "." + abs.getFileName(), ".tmp");
         try {
             Files.write(tmp, content);
+            shareable(tmp);
             try {
                 Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
             } catch (AtomicMoveNotSupportedException e) {
@@ -28,6 +30,18 @@ public final class AtomicFiles {
             }
         } finally {
             Files.deleteIfExists(tmp);
+        }
+    }
+
+    /**
+     * Temp files are created owner-only (rw-------); outputs are meant to be read by others too, so give
+     * the temp file the usual rw-r--r-- before it is renamed into place (no-op off POSIX file systems).
+     */
+    public static void shareable(Path tmp) throws IOException {
+        try {
+            Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rw-r--r--"));
+        } catch (UnsupportedOperationException e) {
+            // not a POSIX file system: keep the platform default
         }
     }
 

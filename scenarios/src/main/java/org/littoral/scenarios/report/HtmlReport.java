@@ -67,6 +67,12 @@ public final class HtmlReport {
         return this;
     }
 
+    /** A sub-heading inside the current section (not numbered, not in the contents). */
+    public HtmlReport subsection(String heading) {
+        blocks.add(sb -> sb.append("<h3>").append(escape(heading)).append("</h3>\n"));
+        return this;
+    }
+
     /** A paragraph of plain text (escaped; blank lines split paragraphs). */
     public HtmlReport paragraph(String text) {
         for (String para : text.split("\\n\\s*\\n")) {

@@ -4,7 +4,7 @@ package org.littoral.scenarios.report;
 public enum Marker {
     NONE, CIRCLE, SQUARE, TRIANGLE, DIAMOND, CROSS, PLUS;
 
-    static Marker cycle(int i) {
+    public static Marker cycle(int i) {
         Marker[] m = {CIRCLE, SQUARE, TRIANGLE, DIAMOND, CROSS, PLUS};
         return m[Math.floorMod(i, m.length)];
     }

@@ -1,0 +1,296 @@
+package org.littoral.scenarios.observe;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.TreeMap;
+
+import org.littoral.model.coast.Coast;
+import org.littoral.model.sounding.Profile;
+import org.littoral.scenarios.analysis.AnalysisResult;
+import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.analysis.Layer;
+import org.littoral.scenarios.analysis.SiteDayResult;
+import org.littoral.scenarios.analysis.Variable;
+import org.littoral.scenarios.analysis.composite.CompositeRow;
+import org.littoral.scenarios.analysis.composite.CompositeSpec;
+import org.littoral.scenarios.analysis.detect.Passage;
+import org.littoral.scenarios.analysis.metrics.PassageResponse;
+import org.littoral.scenarios.report.BoxPlotFigure;
+import org.littoral.scenarios.report.Figure;
+import org.littoral.scenarios.report.FigureGrid;
+import org.littoral.scenarios.report.HistogramFigure;
+import org.littoral.scenarios.report.LineFigure;
+import org.littoral.scenarios.report.Marker;
+import org.littoral.scenarios.report.Palette;
+import org.littoral.scenarios.report.Series;
+
+/**
+ * The figures of an analysis (observed or synthetic profiles alike): wind direction per site and day
+ * with the detected passages marked, passage-time distributions, box plots of the post-passage
+ * changes by breeze type, and the composites around the passage. Each method returns a figure with
+ * its caption, or nothing when the analysis has no data for it.
+ */
+public final class AnalysisFigures {
+    private AnalysisFigures() {
+    }
+
+    /** A figure, the file name it is written under and its caption. */
+    public record Captioned(String fileName, Figure figure, String caption) {
+    }
+
+    /** Panels per row in the day-by-day small multiples. */
+    static final int DAY_COLUMNS = 3;
+    /** At most this many days in one small-multiples image (larger campaigns get several). */
+    static final int DAYS_PER_GRID = 24;
+
+    /** All figures, in reading order. */
+    public static List<Captioned> all(AnalysisResult r, AnalysisSettings s, Coast coast) {
+        List<Captioned> out = new ArrayList<>(dayPanels(r, s, coast));
+        passageTimes(r).ifPresent(out::add);
+        out.addAll(responseBoxes(r, s));
+        out.addAll(composites(r));
+        return out;
+    }
+
+    /**
+     * Wind direction in the detector's layer against local time, one panel per day, one line per site,
+     * with each detected passage as a dashed vertical line labelled by site and onshore ('on') or not.
+     */
+    static List<Captioned> dayPanels(AnalysisResult r, AnalysisSettings s, Coast coast) {
+        Map<String, List<SiteDayResult>> byDay = new TreeMap<>();
+        for (SiteDayResult d : r.siteDays()) {
+            byDay.computeIfAbsent(d.siteDay().day(), k -> new ArrayList<>()).add(d);
+        }
+        List<String> sites = new ArrayList<>();
+        for (SiteDayResult d : r.siteDays()) {
+            if (!sites.contains(d.siteDay().site())) {
+                sites.add(d.siteDay().site());
+            }
+        }
+        Layer layer = s.detection.windLayer;
+        double onshoreFrom = coast.bearingLandToSeaDeg();
+        List<Figure> panels = new ArrayList<>();
+        for (Map.Entry<String, List<SiteDayResult>> e : byDay.entrySet()) {
+            LineFigure.Builder b = LineFigure.builder().size(420, 280).title(e.getKey() + " (" + breezeType(e.getValue()) + ")")
+                    .x("local time", "h").y("wind from", "deg").yRange(0, 360).xRange(6, 20);
+            b.reference(onshoreFrom, "onshore");
+            for (SiteDayResult d : e.getValue()) {
+                double[] t = d.siteDay().timeHours();
+                double[] dir = directionSeries(d.siteDay().profiles(), layer, coast, s.metrics.minValidFraction);
+                int colour = sites.indexOf(d.siteDay().site());
+                double[][] xy = breakWraps(t, dir);
+                Series line = Series.of(d.siteDay().site(), xy[0], xy[1]).marker(Marker.CIRCLE).width(1.5f)
+                        .color(Palette.qualitative(colour));
+                b.series(panels.size() % DAYS_PER_GRID == 0 ? line : line.hideInLegend());
+                for (Passage p : d.passages()) {
+                    b.event(p.timeHours(), shortName(d.siteDay().site()) + (p.turnsOnshore() ? " on" : ""));
+                }
+            }
+            panels.add(b.build());
+        }
+        List<Captioned> out = new ArrayList<>();
+        if (panels.isEmpty()) {
+            return out;
+        }
+        for (int from = 0, part = 1; from < panels.size(); from += DAYS_PER_GRID, part++) {
+            List<Figure> chunk = panels.subList(from, Math.min(panels.size(), from + DAYS_PER_GRID));
+            String suffix = panels.size() > DAYS_PER_GRID ? " (part " + part + ")" : "";
+            out.add(new Captioned("wind-direction-days" + (panels.size() > DAYS_PER_GRID ? "-" + part : "") + ".png",
+                    FigureGrid.of("Wind direction " + layer.label() + " by day" + suffix, chunk, DAY_COLUMNS),
+                    String.format(Locale.ROOT, "Wind direction (where the wind blows from) averaged over %s above ground against "
+                            + "local time, one panel per day%s, one colour per site (%s). Dashed vertical lines: detected passages, "
+                            + "labelled by site and 'on' when the passage turns the wind into the onshore sector. Dashed horizontal "
+                            + "line: the onshore direction (from the sea, %.0f deg). Panel titles give the day's breeze type.",
+                            layer.label(), suffix, String.join(", ", sites), onshoreFrom)));
+        }
+        return out;
+    }
+
+    private static String breezeType(List<SiteDayResult> ds) {
+        return ds.isEmpty() ? "" : ds.get(0).breezeType().name().toLowerCase(Locale.ROOT);
+    }
+
+    private static String shortName(String site) {
+        return site.length() <= 4 ? site : site.substring(0, 3);
+    }
+
+    /** Meteorological direction of the layer-mean wind vector, NaN where the layer has too few valid levels. */
+    static double[] directionSeries(List<Profile> profiles, Layer layer, Coast coast, double minValid) {
+        double[] out = new double[profiles.size()];
+        for (int i = 0; i < out.length; i++) {
+            double e = Variable.WIND_EAST.layerMean(profiles.get(i), layer, coast, minValid);
+            double n = Variable.WIND_NORTH.layerMean(profiles.get(i), layer, coast, minValid);
+            out[i] = Double.isNaN(e) || Double.isNaN(n) ? Double.NaN : Coast.directionFromDeg(e, n);
+        }
+        return out;
+    }
+
+    /**
+     * Inserts a NaN (a line break) between consecutive points whose direction differs by more than
+     * 180 deg, so a wind turning through north is not drawn as a line across the whole panel.
+     * Returns {x, y}.
+     */
+    static double[][] breakWraps(double[] t, double[] dir) {
+        List<Double> xs = new ArrayList<>();
+        List<Double> ys = new ArrayList<>();
+        double prev = Double.NaN;
+        for (int i = 0; i < dir.length; i++) {
+            if (!Double.isNaN(prev) && !Double.isNaN(dir[i]) && Math.abs(dir[i] - prev) > 180) {
+                xs.add(0.5 * (t[i - 1] + t[i]));
+                ys.add(Double.NaN);
+            }
+            xs.add(t[i]);
+            ys.add(dir[i]);
+            if (!Double.isNaN(dir[i])) {
+                prev = dir[i];
+            }
+        }
+        return new double[][] {toArray(xs), toArray(ys)};
+    }
+
+    /** Histogram of the first onshore passage time per site. */
+    static java.util.Optional<Captioned> passageTimes(AnalysisResult r) {
+        Map<String, List<Double>> bySite = new LinkedHashMap<>();
+        for (SiteDayResult d : r.siteDays()) {
+            Passage p = d.firstOnshorePassage();
+            if (p != null) {
+                bySite.computeIfAbsent(d.siteDay().site(), k -> new ArrayList<>()).add(p.timeHours());
+            }
+        }
+        if (bySite.isEmpty()) {
+            return java.util.Optional.empty();
+        }
+        HistogramFigure.Builder b = HistogramFigure.builder().size(900, 500).title("First onshore passage time by site")
+                .x("local time", "h").binWidth(0.5);
+        int n = 0;
+        for (Map.Entry<String, List<Double>> e : bySite.entrySet()) {
+            b.data(e.getKey() + " (n = " + e.getValue().size() + ")", toArray(e.getValue()));
+            n += e.getValue().size();
+        }
+        return java.util.Optional.of(new Captioned("passage-times.png", b.build(), "Distribution of the first passage that "
+                + "turns the wind onshore, per site (" + n + " site-days with one), in 30-min bins of local time."));
+    }
+
+    /** Box plots of the change across the first onshore passage, by breeze type, for theta, mixing ratio and theta-e. */
+    static List<Captioned> responseBoxes(AnalysisResult r, AnalysisSettings s) {
+        Map<String, String> typeOf = new LinkedHashMap<>();
+        for (SiteDayResult d : r.siteDays()) {
+            typeOf.put(d.siteDay().key(), d.breezeType().name().toLowerCase(Locale.ROOT));
+        }
+        Layer layer = s.metrics.layers.get(0);
+        List<Figure> panels = new ArrayList<>();
+        for (Variable v : List.of(Variable.THETA, Variable.MIXING_RATIO, Variable.THETA_E)) {
+            Map<String, List<Double>> groups = new TreeMap<>();
+            for (PassageResponse pr : r.responses()) {
+                if (pr.variable() == v && pr.layer().equals(layer) && pr.passage().turnsOnshore() && pr.passage().ordinal() >= 1
+                        && Double.isFinite(pr.change())) {
+                    String g = typeOf.getOrDefault(pr.passage().day() + "/" + pr.passage().site(), "?");
+                    groups.computeIfAbsent(g, k -> new ArrayList<>()).add(pr.change());
+                }
+            }
+            if (groups.isEmpty()) {
+                continue;
+            }
+            BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(480, 420).title("Change of " + label(v) + ", " + layer.label())
+                    .y("change " + label(v), v.unit()).x("breeze type").showMean(true);
+            for (Map.Entry<String, List<Double>> e : groups.entrySet()) {
+                b.group(e.getKey() + " (" + e.getValue().size() + ")", toArray(e.getValue()));
+            }
+            panels.add(b.build());
+        }
+        List<Captioned> out = new ArrayList<>();
+        if (!panels.isEmpty()) {
+            out.add(new Captioned("response-boxes.png", FigureGrid.of("Post-passage changes by breeze type", panels, 3),
+                    String.format(Locale.ROOT, "Change of the %s layer mean across each onshore passage (post-window mean minus "
+                            + "pre-window mean; windows in the analysis settings), grouped by the day's breeze type (number of "
+                            + "passages in brackets). Boxes: quartiles; whiskers: 1.5 IQR; diamond: mean.", layer.label())));
+        }
+        return out;
+    }
+
+    /** Composite medians with inter-quartile bands around the passage, one panel per variable, one line per group. */
+    static List<Captioned> composites(AnalysisResult r) {
+        Map<CompositeSpec, Map<String, List<CompositeRow>>> bySpec = new LinkedHashMap<>();
+        for (CompositeRow c : r.composites()) {
+            bySpec.computeIfAbsent(c.spec(), k -> new LinkedHashMap<>()).computeIfAbsent(c.group(), k -> new ArrayList<>()).add(c);
+        }
+        List<Figure> relative = new ArrayList<>();
+        List<Figure> hourly = new ArrayList<>();
+        for (Map.Entry<CompositeSpec, Map<String, List<CompositeRow>>> e : bySpec.entrySet()) {
+            CompositeSpec spec = e.getKey();
+            boolean rel = spec.axis() == CompositeSpec.Axis.RELATIVE_TO_PASSAGE;
+            LineFigure.Builder b = LineFigure.builder().size(600, 400)
+                    .title(label(spec.variable()) + (spec.anomaly() ? " anomaly" : "") + ", " + spec.layer().label())
+                    .x(rel ? "time after passage" : "local time", "h")
+                    .y(label(spec.variable()) + (spec.anomaly() ? " anomaly" : ""), spec.variable().unit());
+            int colour = 0;
+            boolean any = false;
+            for (Map.Entry<String, List<CompositeRow>> g : e.getValue().entrySet()) {
+                List<CompositeRow> rows = g.getValue();
+                List<Double> xs = new ArrayList<>();
+                List<Double> lo = new ArrayList<>();
+                List<Double> med = new ArrayList<>();
+                List<Double> hi = new ArrayList<>();
+                for (CompositeRow c : rows) {
+                    if (c.box().n() >= 3) {
+                        xs.add(c.binCentreHours());
+                        lo.add(c.box().q1());
+                        med.add(c.box().median());
+                        hi.add(c.box().q3());
+                    }
+                }
+                if (xs.size() < 2) {
+                    continue;
+                }
+                any = true;
+                java.awt.Color col = Palette.qualitative(colour++);
+                b.band(null, toArray(xs), toArray(lo), toArray(hi), col, 0.18);
+                b.series(Series.of(g.getKey(), toArray(xs), toArray(med)).color(col).marker(Marker.CIRCLE));
+            }
+            if (rel) {
+                b.event(0, "passage");
+            }
+            if (any) {
+                (rel ? relative : hourly).add(b.build());
+            }
+        }
+        List<Captioned> out = new ArrayList<>();
+        if (!relative.isEmpty()) {
+            out.add(new Captioned("composites-relative.png", FigureGrid.of("Composites around the first onshore passage", relative, 2),
+                    "Median (line) and inter-quartile range (band) over site-days of each variable's anomaly from its mean over the pre-passage "
+                            + "window, against time after the first onshore passage, by breeze type; bins with fewer than 3 values are "
+                            + "left out."));
+        }
+        if (!hourly.isEmpty()) {
+            out.add(new Captioned("composites-hourly.png", FigureGrid.of("Composites by hour of day", hourly, 2),
+                    "Median (line) and inter-quartile range (band) over site-days of each variable against local time, by breeze "
+                            + "type; bins with fewer than 3 values are left out."));
+        }
+        return out;
+    }
+
+    private static String label(Variable v) {
+        return switch (v) {
+            case TEMPERATURE -> "T";
+            case THETA -> "theta";
+            case MIXING_RATIO -> "mixing ratio";
+            case THETA_E -> "theta-e";
+            case WIND_SPEED -> "wind speed";
+            case CROSS_SHORE_WIND -> "onshore wind";
+            case ALONGSHORE_WIND -> "alongshore wind";
+            case WIND_EAST -> "eastward wind";
+            case WIND_NORTH -> "northward wind";
+        };
+    }
+
+    private static double[] toArray(List<Double> l) {
+        double[] a = new double[l.size()];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = l.get(i);
+        }
+        return a;
+    }
+}
