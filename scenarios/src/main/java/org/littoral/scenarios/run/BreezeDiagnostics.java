@@ -58,7 +58,10 @@ public final class BreezeDiagnostics {
                 }
             }
         }
-        double[] atCoast = seriesAt(fs, 0.0);
+        // Onset and arrivals are read from the TOTAL near-surface cross-shore wind (ambient included): the
+        // wind a site sees turn onshore, which is what a profiling campaign (and the analysis chain) detects.
+        // With an onshore ambient wind the total is onshore from the start and there is no arrival.
+        double[] atCoast = seriesAt(fs.nearSurfaceTotalU, fs, 0.0);
         Double onset = firstRise(fs.clockH, atCoast, threshold);
         boolean onshoreAtStart = atCoast[0] >= threshold;
 
@@ -83,13 +86,15 @@ public final class BreezeDiagnostics {
         List<SiteTiming> sites = new ArrayList<>();
         for (int s = 0; s < siteXM.length; s++) {
             double[] series = seriesAt(fs, siteXM[s]);
+            double[] total = seriesAt(fs.nearSurfaceTotalU, fs, siteXM[s]);
+            double[] along = seriesAt(fs.nearSurfaceTotalV, fs, siteXM[s]);
             int pk = 0;
             for (int n = 1; n < nt; n++) {
                 if (series[n] > series[pk]) {
                     pk = n;
                 }
             }
-            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], firstRise(fs.clockH, series, threshold), series[pk], fs.clockH[pk]));
+            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], firstOnshore(fs.clockH, total, along, threshold), series[pk], fs.clockH[pk]));
         }
         List<SiteTiming> byX = new ArrayList<>(sites);
         byX.sort((a, b) -> Double.compare(a.xM(), b.xM()));
@@ -107,13 +112,52 @@ public final class BreezeDiagnostics {
 
     /** u' along the output times at position x (linear in x). */
     static double[] seriesAt(FieldSections fs, double x) {
+        return seriesAt(fs.nearSurfaceU, fs, x);
+    }
+
+    /** A near-surface section (u' or total u, [time][x]) along the output times at position x (linear in x). */
+    static double[] seriesAt(double[][] section, FieldSections fs, double x) {
         int i = FieldSections.bracket(fs.xM, x);
         double w = Math.max(0, Math.min(1, (x - fs.xM[i]) / (fs.xM[i + 1] - fs.xM[i])));
         double[] out = new double[fs.clockH.length];
         for (int n = 0; n < out.length; n++) {
-            out[n] = (1 - w) * fs.nearSurfaceU[n][i] + w * fs.nearSurfaceU[n][i + 1];
+            out[n] = (1 - w) * section[n][i] + w * section[n][i + 1];
         }
         return out;
+    }
+
+    /**
+     * Half-width of the onshore sector, degrees either side of the inland direction: the same default as
+     * the analysis chain's (analysis.detect.DetectionSettings.onshoreHalfWidthDeg), so the model's own arrival
+     * and what the chain detects in its synthetic soundings mean the same thing.
+     */
+    public static final double ONSHORE_HALF_WIDTH_DEG = 60.0;
+
+    /**
+     * Arrival of the onshore flow at a site: the first time the TOTAL near-surface wind, having been outside,
+     * enters the onshore sector (cross-shore component at least the threshold and within
+     * {@link #ONSHORE_HALF_WIDTH_DEG} of the inland direction); interpolated between output times on the
+     * cross-shore component; null when it never does (e.g. onshore from the start, or never onshore).
+     */
+    static Double firstOnshore(double[] t, double[] cross, double[] along, double threshold) {
+        double tan = Math.tan(Math.toRadians(ONSHORE_HALF_WIDTH_DEG));
+        boolean prevIn = inSector(cross[0], along[0], threshold, tan);
+        for (int n = 1; n < cross.length; n++) {
+            boolean in = inSector(cross[n], along[n], threshold, tan);
+            if (!prevIn && in) {
+                // the sector edge is reached when cross = max(threshold, |along| / tan): interpolate on that margin
+                double m0 = cross[n - 1] - Math.max(threshold, Math.abs(along[n - 1]) / tan);
+                double m1 = cross[n] - Math.max(threshold, Math.abs(along[n]) / tan);
+                double f = m1 > m0 ? Math.max(0, Math.min(1, -m0 / (m1 - m0))) : 1.0;
+                return t[n - 1] + f * (t[n] - t[n - 1]);
+            }
+            prevIn = in;
+        }
+        return null;
+    }
+
+    private static boolean inSector(double cross, double along, double threshold, double tanHalfWidth) {
+        return cross >= threshold && Math.abs(along) <= cross * tanHalfWidth;
     }
 
     /** First time the series rises through the threshold (interpolated), or null. */

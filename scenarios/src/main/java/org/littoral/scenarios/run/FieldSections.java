@@ -25,6 +25,8 @@ public final class FieldSections {
     public final double[][] nearSurfaceU;
     /** [time][x] near-surface total cross-shore wind, m/s. */
     public final double[][] nearSurfaceTotalU;
+    /** [time][x] near-surface total alongshore wind, m/s (ambient included). */
+    public final double[][] nearSurfaceTotalV;
     /** [site][time][level]. */
     public final double[][][] siteU;
     public final double[][][] siteV;
@@ -42,6 +44,7 @@ public final class FieldSections {
         int nt = clockH.length;
         nearSurfaceU = new double[nt][xM.length];
         nearSurfaceTotalU = new double[nt][xM.length];
+        nearSurfaceTotalV = new double[nt][xM.length];
         siteU = new double[sites][nt][zM.length];
         siteV = new double[sites][nt][zM.length];
         siteTheta = new double[sites][nt][zM.length];
@@ -101,9 +104,11 @@ public final class FieldSections {
         for (int n = 0; n < nt; n++) {
             Snapshot s = sol.snapshotAt(fs.modelSec[n]);
             double[] u = s.uMPerS();
+            double[] v = s.vMPerS();
             for (int i = 0; i < nx; i++) {
                 double total = (1 - wz) * u[k0 * nx + i] + wz * u[(k0 + 1) * nx + i];
                 fs.nearSurfaceTotalU[n][i] = total;
+                fs.nearSurfaceTotalV[n][i] = (1 - wz) * v[k0 * nx + i] + wz * v[(k0 + 1) * nx + i];
                 fs.nearSurfaceU[n][i] = total - ambientNear;
             }
             for (int site = 0; site < col.length; site++) {
