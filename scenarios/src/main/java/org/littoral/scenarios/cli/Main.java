@@ -22,6 +22,7 @@ import picocli.CommandLine.ScopeType;
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
             org.littoral.scenarios.demo.MakeDemoDataCommand.class,
+            org.littoral.scenarios.demo.DemoCommand.class,
         })
 public final class Main implements Callable<Integer> {
 

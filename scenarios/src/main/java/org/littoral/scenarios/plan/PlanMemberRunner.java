@@ -61,12 +61,18 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
         return scenarios.scenarioOf(m);
     }
 
-    /** The model's onshore-flow arrival (local clock h, NaN = none) at every candidate distance. */
+    /**
+     * The model's onshore-flow arrival (local clock h, NaN = none) at every candidate distance, read at the
+     * middle of the layer the wind-shift detector watches (100-300 m by default, so at 200 m): the slab
+     * heating confines the early-morning onshore flow to a shallow layer near the ground, and a campaign's
+     * detector sees the breeze when it reaches its layer, so that is the arrival to score against.
+     */
     public double[] truths(Scenario s, BreezeSolution sol) {
         double[] x = candidateXM();
         List<String> names = siteNames();
         boolean periodic = s.kind() == Scenario.Kind.LINEAR;
-        FieldSections fs = FieldSections.evaluate(sol, s.coast(), s.output().clockHours(), s.output().nearSurfaceM(), x, periodic,
+        double truthHeightM = 0.5 * (analysis.detection.windLayer.bottomM() + analysis.detection.windLayer.topM());
+        FieldSections fs = FieldSections.evaluate(sol, s.coast(), s.output().clockHours(), truthHeightM, x, periodic,
                 null);
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, x, s.output().onshoreThresholdMPerS());
         double[] out = new double[x.length];

@@ -12,7 +12,7 @@ import org.littoral.scenarios.cli.UserInputException;
 public final class BuiltinScenarios {
     private static final String DIR = "/org/littoral/scenarios/builtin/";
     private static final List<String> NAMES = List.of("classic-45N", "classic-20N", "critical-30N-friction",
-            "offshore-ambient", "onshore-ambient", "sea-barrier-bay");
+            "offshore-ambient", "onshore-ambient", "sea-barrier-bay", "quillmarsh-reach");
 
     private BuiltinScenarios() {
     }

@@ -35,6 +35,25 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--list", description = "List the built-in sweeps and exit.")
     boolean list;
 
+    /** What a sweep produced: the executor's outcome, the comparison table and the figure files. */
+    public record Result(SweepSpec spec, SweepExecutor.Outcome outcome, ComparisonTable table, List<Path> figures) {
+    }
+
+    /** Runs a sweep into {@code dir} (progress on a terminal), then writes the comparison table and figures. */
+    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles)
+            throws Exception {
+        List<Member> members = MemberExpander.expand(spec);
+        ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), keepRunFiles ? dir.resolve("runs") : null,
+                Solver.standard());
+        runner.checkAll(members);
+        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner,
+                SweepExecutor.Options.forCommandLine(threads, resume, retryFailed));
+        ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
+        table.write(dir);
+        List<Path> figures = ComparisonFigures.write(table, dir);
+        return new Result(spec, o, table, figures);
+    }
+
     @Override
     public Integer call() throws Exception {
         if (list || sweep == null) {
@@ -49,17 +68,11 @@ public final class SweepCommand implements Callable<Integer> {
         }
         SweepSpec spec = SweepFile.load(sweep, ScenarioMemberRunner.scenarioSource());
         Path dir = out != null ? out : Path.of("out", "sweeps", spec.name());
-        List<Member> members = MemberExpander.expand(spec);
-        ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), noRunFiles ? null : dir.resolve("runs"),
-                Solver.standard());
-        runner.checkAll(members);
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner, SweepExecutor.Options.forCommandLine(n, resume, retryFailed));
-        ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
-        table.write(dir);
-        List<Path> figures = ComparisonFigures.write(table, dir);
+        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles);
+        SweepExecutor.Outcome o = r.outcome();
         System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed); wrote "
-                + dir.resolve("comparison.csv") + ", comparison.json" + (figures.isEmpty() ? "" : " and " + figures.size() + " figure(s)"));
+                + dir.resolve("comparison.csv") + ", comparison.json" + (r.figures().isEmpty() ? "" : " and " + r.figures().size() + " figure(s)"));
         if (o.failed() > 0) {
             System.out.println("littoral: " + o.failed() + " member(s) failed; their reasons are in the 'error' column and in members/<id>.json");
             return 1;

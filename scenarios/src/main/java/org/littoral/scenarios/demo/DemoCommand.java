@@ -1,0 +1,242 @@
+package org.littoral.scenarios.demo;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.littoral.model.coast.Coast;
+import org.littoral.scenarios.analysis.AnalysisChain;
+import org.littoral.scenarios.analysis.AnalysisResult;
+import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.analysis.SiteDayResult;
+import org.littoral.scenarios.analysis.detect.ChangeCandidate;
+import org.littoral.scenarios.analysis.detect.DetectionScore;
+import org.littoral.scenarios.analysis.detect.Passage;
+import org.littoral.scenarios.analysis.detect.PassageDetector;
+import org.littoral.scenarios.analysis.detect.PassageFinder;
+import org.littoral.scenarios.analysis.ingest.CsvTable;
+import org.littoral.scenarios.analysis.ingest.DayTableReader;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.observe.AnalysisFigures;
+import org.littoral.scenarios.observe.AnalysisOutputs;
+import org.littoral.scenarios.observe.AnalysisReport;
+import org.littoral.scenarios.observe.CoastFile;
+import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.plan.PlanCommand;
+import org.littoral.scenarios.plan.PlanFile;
+import org.littoral.scenarios.plan.PlanReport;
+import org.littoral.scenarios.plan.PlanSpec;
+import org.littoral.scenarios.report.HtmlReport;
+import org.littoral.scenarios.report.Table;
+import org.littoral.scenarios.sweep.ScenarioMemberRunner;
+import org.littoral.scenarios.sweep.SweepCommand;
+import org.littoral.scenarios.sweep.SweepFile;
+import org.littoral.scenarios.sweep.SweepSpec;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * The whole story on the INVENTED Quillmarsh Reach campaign in one run and one report: the hypothesis
+ * sweep of ambient flows, the analysis of the demo observations (scored against their answer key), site
+ * and cadence planning for the invented coast, and (where those commands are present) the model-observation
+ * comparison and the timing checks. Every part keeps its own outputs in a sub-folder; index.html embeds
+ * every figure.
+ */
+@Command(name = "demo", mixinStandardHelpOptions = true,
+        description = "Run the whole story on the INVENTED demo campaign (Quillmarsh Reach) and write one report, out/demo/index.html.")
+public final class DemoCommand implements Callable<Integer> {
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/demo", description = "Output folder (default: ${DEFAULT-VALUE}).")
+    Path out;
+
+    @Option(names = "--data", paramLabel = "DIR", defaultValue = "demo-data",
+            description = "Demo campaign folder (default: ${DEFAULT-VALUE}; written afresh by the generator when it is missing).")
+    Path data;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--resume", description = "Keep sweep and plan members already computed in DIR.")
+    boolean resume;
+
+    /** Sweep of ambient flows run by the demo. */
+    static final String HYPOTHESIS_SWEEP = "ambient-flow";
+    /** Plan run by the demo (the invented coast). */
+    static final String PLAN = "quillmarsh-plan";
+
+    @Override
+    public Integer call() throws Exception {
+        int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        Progress p = new Progress(System.err, 4);
+        Files.createDirectories(out);
+        HtmlReport rep = HtmlReport.create("littoral demo: the INVENTED Quillmarsh Reach campaign");
+        rep.meta("data", "INVENTED demonstration data (not observations), " + data);
+        rep.meta("written by", "littoral demo");
+
+        p.step("demo campaign data");
+        Path dataDir = ensureData(data, out.resolve("demo-data"));
+        Coast coast = CoastFile.load(dataDir.resolve("coast.yaml").toString());
+        intro(rep, dataDir);
+
+        p.step("hypothesis sweep of ambient flows (" + HYPOTHESIS_SWEEP + ")");
+        SweepSpec sweep = SweepFile.load(HYPOTHESIS_SWEEP, ScenarioMemberRunner.scenarioSource());
+        SweepCommand.Result sr = SweepCommand.run(sweep, out.resolve("sweep"), n, resume, false, false);
+        sweepSection(rep, sr);
+
+        p.step("analysis of the demo observations");
+        AnalysisSettings settings = new AnalysisSettings();
+        ObserveCommand.Observed o = ObserveCommand.ingest(dataDir.resolve("binned").resolve("profiles-binned.csv.gz"), settings);
+        settings.dayAttributes.putAll(DayTableReader.read(dataDir.resolve("days.csv")));
+        AnalysisResult ar = AnalysisChain.run(o.profiles(), coast, settings);
+        Path obsDir = out.resolve("observe");
+        Files.createDirectories(obsDir);
+        o.qc().writeCsv(obsDir.resolve("qc-log.csv"));
+        AnalysisOutputs.write(obsDir, ar, o.qc(), "the INVENTED demo campaign", coast, o.profiles(), settings);
+        List<AnalysisFigures.Captioned> figs = AnalysisFigures.all(ar, settings, coast);
+        rep.section("The demo observations: what the analysis chain finds");
+        rep.paragraph("The same analysis chain that reads synthetic soundings reads the (invented) observations: ingest and QC, "
+                + "passage detectors (PELT change points on the wind and a multivariate change point over several levels and "
+                + "variables), response metrics, composites and group statistics. Full tables: observe/.");
+        skillTable(rep, ar, settings, coast, dataDir.resolve("truth").resolve("passages.csv"));
+        AnalysisReport.addSections(rep, ar, o.qc(), figs);
+
+        p.step("site and cadence plan for the invented coast (" + PLAN + ")");
+        PlanSpec plan = PlanFile.load(PLAN);
+        PlanCommand.PlanOutcome po = PlanCommand.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
+        List<PlanReport.Captioned> pf = PlanReport.figures(plan, po.result());
+        rep.paragraph("");
+        PlanReport.addSections(rep, plan, po.result(), po.windows(), pf);
+
+        rep.section("Cautions");
+        rep.cautions();
+        Path index = out.resolve("index.html");
+        rep.write(index);
+        p.done("wrote " + index + " (" + rep.figureCount() + " figures, " + rep.tableCount() + " tables)");
+        System.out.println("littoral: demo written to " + index);
+        return 0;
+    }
+
+    /** The campaign folder to read: the given one when it holds the files, else a fresh copy from the generator. */
+    static Path ensureData(Path given, Path fallback) throws IOException {
+        if (Files.isRegularFile(given.resolve("coast.yaml")) && Files.isRegularFile(given.resolve("binned/profiles-binned.csv.gz"))
+                && Files.isRegularFile(given.resolve("truth/passages.csv")) && Files.isRegularFile(given.resolve("days.csv"))) {
+            return given;
+        }
+        new DemoDataWriter(DemoCampaign.generate(DemoCampaign.DEFAULT_SEED)).writeAll(fallback, List.of());
+        return fallback;
+    }
+
+    private static void intro(HtmlReport rep, Path dataDir) {
+        rep.section("What was run and why");
+        rep.paragraph("Quillmarsh Reach is an INVENTED coast (sea, a 1.2 km barrier strip, a 2.5 km bay, the mainland) with two "
+                + "profiling sites, 'bayshore' 4 km and 'inland' 25 km from the sea shore, and an INVENTED campaign of 36 days "
+                + "of drone-like profiles to 600 m, every 30 min and every 15 min around the expected front. The days were made "
+                + "by a generator that is independent of littoral's models (smooth background profiles plus a prescribed front "
+                + "with a wind shift, cooling and moistening of random size, sensor noise and missing flights), so the true "
+                + "passage times are known (" + dataDir.resolve("truth/passages.csv") + ").");
+        rep.bullets(List.of(
+                "1. Hypotheses: how do offshore, shore-parallel and onshore ambient winds change a breeze's timing, strength "
+                        + "and depth? A sweep of the model over the ambient wind.",
+                "2. The observations: what passages, responses and group differences does the analysis chain find in the "
+                        + "demo campaign, and how well do its detectors recover the known passage times?",
+                "3. Planning: where should two sites go on this coast, and is a denser cadence around the front worth it?"));
+    }
+
+    private static void sweepSection(HtmlReport rep, SweepCommand.Result sr) throws IOException {
+        rep.section("Hypotheses: the ambient flow (model sweep)");
+        rep.paragraph(sr.spec().description() + ". " + sr.outcome().members() + " members (" + sr.outcome().failed()
+                + " failed). Each member is one run of the model; the comparison table and the member runs are in sweep/.");
+        for (Path f : sr.figures()) {
+            rep.figurePng(Files.readAllBytes(f), 900, captionOf(f.getFileName().toString()));
+        }
+        rep.table("The sweep's comparison table (sweep/comparison.csv has every column).", sr.table().toTable());
+    }
+
+    static String captionOf(String file) {
+        String base = file.replace(".png", "").replace('-', ' ');
+        return switch (file) {
+            case "arrival-vs-ambient.png" -> "Onshore-flow arrival time at each site against the ambient wind speed, one line "
+                    + "per ambient direction (breeze type).";
+            case "penetration-vs-ambient.png" -> "Maximum inland penetration of the onshore flow against the ambient wind speed, "
+                    + "one line per ambient direction (breeze type).";
+            case "changes-by-type.png" -> "Changes after the onshore flow arrives at the sites, by breeze type.";
+            default -> "Sweep comparison: " + base + ".";
+        };
+    }
+
+    /** Hits and false detections against the campaign's answer key, per detector and for the combined passages. */
+    static void skillTable(HtmlReport rep, AnalysisResult ar, AnalysisSettings s, Coast coast, Path truthCsv) {
+        Map<String, double[]> truth = readTruth(truthCsv);
+        List<PassageDetector> dets = PassageFinder.detectors(s.detection);
+        DetectionScore[] per = new DetectionScore[dets.size() + 1];
+        java.util.Arrays.fill(per, new DetectionScore(0, 0, 0, 0));
+        for (SiteDayResult r : ar.siteDays()) {
+            double[] tr = truth.getOrDefault(r.siteDay().key(), new double[0]);
+            double[] t = r.siteDay().timeHours();
+            for (int k = 0; k < dets.size(); k++) {
+                double[] found = dets.get(k).detect(r.siteDay(), coast).stream().mapToDouble(ChangeCandidate::timeHours).toArray();
+                per[k] = per[k].plus(DetectionScore.score(tr, found, t));
+            }
+            double[] passages = r.passages().stream().mapToDouble(Passage::timeHours).toArray();
+            per[dets.size()] = per[dets.size()].plus(DetectionScore.score(tr, passages, t));
+        }
+        Table t = Table.of("detector", "true passages", "found within one flight interval", "hit rate %", "detections",
+                "false detections", "false %");
+        for (int k = 0; k <= dets.size(); k++) {
+            DetectionScore d = per[k];
+            t.row(k < dets.size() ? dets.get(k).name() : "passages (both detectors combined)", d.truths(), d.hits(),
+                    100 * d.hitRate(), d.detections(), d.falseDetections(), 100 * d.falseRate());
+        }
+        t.decimals("hit rate %", 0).decimals("false %", 0);
+        rep.table("Detection skill on the INVENTED campaign against its answer key (truth/passages.csv): a true passage is found "
+                + "when a detection lies within one local flight interval of it; every other detection is false.", t);
+    }
+
+    /** The answer key: true passage times (local hours) per "day/site". */
+    static Map<String, double[]> readTruth(Path csv) {
+        CsvTable t = CsvTable.read(csv);
+        Map<String, List<Double>> m = new LinkedHashMap<>();
+        int day = t.column("day");
+        int site = t.column("site");
+        int h = t.column("time_hours");
+        for (int r = 0; r < t.rowCount(); r++) {
+            m.computeIfAbsent(t.cell(r, day) + "/" + t.cell(r, site), k -> new ArrayList<>()).add(t.number(r, h));
+        }
+        Map<String, double[]> out = new LinkedHashMap<>();
+        m.forEach((k, v) -> out.put(k, v.stream().mapToDouble(Double::doubleValue).toArray()));
+        return out;
+    }
+
+    /** Step lines on the terminal: "[2/5] hypothesis sweep ... (12 s)". */
+    static final class Progress {
+        private final PrintStream err;
+        private final int total;
+        private final long t0 = System.nanoTime();
+        private int k;
+
+        Progress(PrintStream err, int total) {
+            this.err = err;
+            this.total = total;
+        }
+
+        void step(String what) {
+            k++;
+            err.printf(Locale.ROOT, "demo: [%d/%d] %s (%.0f s so far)%n", k, total, what, (System.nanoTime() - t0) / 1e9);
+        }
+
+        void done(String what) {
+            err.printf(Locale.ROOT, "demo: done in %.0f s: %s%n", (System.nanoTime() - t0) / 1e9, what);
+        }
+    }
+
+    static UserInputException missing(Path p, String what) {
+        return new UserInputException(p + ": " + what);
+    }
+}
