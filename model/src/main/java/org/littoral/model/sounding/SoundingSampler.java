@@ -6,6 +6,7 @@ import java.util.Random;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.field.Background;
 import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.FieldSampling;
 import org.littoral.model.field.Snapshot;
 import org.littoral.model.thermo.Thermo;
 
@@ -162,6 +163,26 @@ public final class SoundingSampler {
     }
 
     private void fillColumns(double t, double[][][] perSite) {
+        if (solution instanceof FieldSampling fast) {
+            // Column fast path (the linear model: O(harmonics x nz) per column once a position is cached) on the
+            // same two bracketing grid columns and weights as the snapshot path, so results agree to round-off.
+            double tt = inSpan(t);
+            for (int s = 0; s < siteColumn.length; s++) {
+                int i = siteColumn[s];
+                double w = siteColumnWeight[s];
+                Snapshot a = fast.columnAt(xM[i], tt);
+                Snapshot b = fast.columnAt(xM[i + 1], tt);
+                double[][] c = perSite[s];
+                for (int k = 0; k < nz; k++) {
+                    c[0][k] = (1 - w) * a.uMPerS()[k] + w * b.uMPerS()[k];
+                    c[1][k] = (1 - w) * a.vMPerS()[k] + w * b.vMPerS()[k];
+                    c[2][k] = (1 - w) * a.thetaK()[k] + w * b.thetaK()[k];
+                    c[3][k] = (1 - w) * a.mixingRatioKgPerKg()[k] + w * b.mixingRatioKgPerKg()[k];
+                    c[4][k] = (1 - w) * a.pressurePerturbationPa()[k] + w * b.pressurePerturbationPa()[k];
+                }
+            }
+            return;
+        }
         Snapshot snap = solution.snapshotAt(inSpan(t));
         for (int s = 0; s < siteColumn.length; s++) {
             int i = siteColumn[s];

@@ -1,0 +1,90 @@
+package org.littoral.model.sounding;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.littoral.model.coast.Coast;
+import org.littoral.model.coast.SurfaceMap;
+import org.littoral.model.field.Background;
+import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.FieldSampling;
+import org.littoral.model.field.Snapshot;
+import org.littoral.model.grid.HorizontalGrid;
+import org.littoral.model.grid.VerticalGrid;
+import org.littoral.model.linear.HeatingSpec;
+import org.littoral.model.linear.LinearBreezeModel;
+import org.littoral.model.linear.LinearConfig;
+
+/**
+ * Sites on a linear solution are sampled through its column fast path (FieldSampling.columnAt); the
+ * profiles must equal, to round-off, the ones sampled from whole snapshots.
+ */
+class SamplerFastPathTest {
+
+    /** The same solution without the fast path (forces the snapshot path). */
+    private record SnapshotsOnly(BreezeSolution s) implements BreezeSolution {
+        public double[] xM() {
+            return s.xM();
+        }
+
+        public double[] zM() {
+            return s.zM();
+        }
+
+        public Background background() {
+            return s.background();
+        }
+
+        public double startSec() {
+            return s.startSec();
+        }
+
+        public double endSec() {
+            return s.endSec();
+        }
+
+        public Snapshot snapshotAt(double t) {
+            return s.snapshotAt(t);
+        }
+
+        public String modelName() {
+            return s.modelName();
+        }
+    }
+
+    @Test
+    void fastPathProfilesEqualSnapshotProfiles() {
+        Coast coast = new Coast(40, 0, 0, 270, 180);
+        LinearConfig c = new LinearConfig(coast, SurfaceMap.simpleCoast(293, 0.2, 1, 0.1), HorizontalGrid.centred(256, 2000),
+                VerticalGrid.uniform(41, 4000), 0.01, 1e-5, 1e-5, -2.0, true, 4,
+                new HeatingSpec.ClassicShape(3e-4, 5e3, 800, 6.0), 300, 0.01, -3e-6, 101325);
+        BreezeSolution sol = LinearBreezeModel.solve(c);
+        assertTrue(sol instanceof FieldSampling);
+        List<VirtualSite> sites = List.of(new VirtualSite("A", 3.3e3), new VirtualSite("B", 25e3));
+        FlightSchedule f = FlightSchedule.regular(60, 9, 15);
+        SoundingSpec spec = SoundingSpec.of(600, "t");
+        List<Profile> fast = new SoundingSampler(sol, coast, sites, f, spec, true).sampleAll();
+        List<Profile> slow = new SoundingSampler(new SnapshotsOnly(sol), coast, sites, f, spec, true).sampleAll();
+        assertEquals(slow.size(), fast.size());
+        double maxDiff = 0;
+        for (int i = 0; i < fast.size(); i++) {
+            double[][] a = {fast.get(i).temperatureK(), fast.get(i).windEastMPerS(), fast.get(i).windNorthMPerS(),
+                fast.get(i).mixingRatioKgPerKg(), fast.get(i).pressurePa()};
+            double[][] b = {slow.get(i).temperatureK(), slow.get(i).windEastMPerS(), slow.get(i).windNorthMPerS(),
+                slow.get(i).mixingRatioKgPerKg(), slow.get(i).pressurePa()};
+            for (int v = 0; v < a.length; v++) {
+                for (int k = 0; k < a[v].length; k++) {
+                    maxDiff = Math.max(maxDiff, Math.abs(a[v][k] - b[v][k]) / Math.max(1.0, Math.abs(b[v][k])));
+                }
+            }
+        }
+        assertTrue(maxDiff < 1e-9, "largest relative difference " + maxDiff);
+        double spread = 0;
+        for (Profile p : fast) {
+            spread = Math.max(spread, Math.abs(p.windEastMPerS()[20] - fast.get(0).windEastMPerS()[20]));
+        }
+        assertTrue(spread > 0.1, "the profiles must actually vary (breeze present): " + spread);
+    }
+}
