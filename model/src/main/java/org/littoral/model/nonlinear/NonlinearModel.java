@@ -212,6 +212,16 @@ public final class NonlinearModel {
         hWork = new double[nx];
         kIface = new double[(nz + 1) * nx];
         cgFactor = new double[nx];
+        dragCol = new double[nx];
+        dragFace = new double[nx];
+        fluxCol = new double[nx];
+        cgCol = new double[nx];
+        triK = new double[(nz + 1) * nx];
+        triLo = new double[nc];
+        triHi = new double[nc];
+        triM = new double[nc];
+        triB = new double[nc];
+        triR = new double[nc];
         segment = new SurfaceSegment[nx];
         theta1 = new double[nx];
         q1 = new double[nx];
@@ -864,21 +874,150 @@ public final class NonlinearModel {
         for (int i = 0; i < nx; i++) {
             cgFactor[i] = kProfile(heatFluxKin[i], windSfc[i], cd[i], h[i], kIface, i, nx);
         }
+        // all columns at once: each level is a loop over columns, so the Thomas recurrences of
+        // different columns run side by side (same arithmetic per column as a column-by-column solve)
+        double kb = cfg.boundaryLayer().backgroundDiffusivityM2PerS();
         for (int i = 0; i < nx; i++) {
-            // theta with surface heat flux
-            loadColumnK(i, i, dt);
-            solveColumn(th, i, nx, dt, heatFluxKin[i], 0.0, cgFactor[i] * heatFluxKin[i]);
-            solveColumn(q, i, nx, dt, moistFluxKin[i], 0.0, cgFactor[i] * moistFluxKin[i]);
-            solveColumn(v, i, dt, 0.0, cd[i] * windSfc[i]);
-            // u at the west face of cell i: average K and drag of the two columns
-            loadColumnK(g.im1[i], i, dt);
-            int l = g.im1[i];
-            solveColumn(u, i, dt, 0.0, 0.5 * (cd[i] * windSfc[i] + cd[l] * windSfc[l]));
+            dragCol[i] = cd[i] * windSfc[i];
         }
+        // theta and r: K of the column itself, no drag; one factorisation for both
+        diffusionCoefficients(kIface, false, dt);
+        factorise(null, dt, triM, triB);
+        for (int i = 0; i < nx; i++) {
+            fluxCol[i] = heatFluxKin[i];
+            cgCol[i] = cgFactor[i] * heatFluxKin[i];
+        }
+        solveFactorised(th, triM, triB, dt, kb);
+        for (int i = 0; i < nx; i++) {
+            fluxCol[i] = moistFluxKin[i];
+            cgCol[i] = cgFactor[i] * moistFluxKin[i];
+        }
+        solveFactorised(q, triM, triB, dt, kb);
+        // v: same K, drag on the lowest layer
+        java.util.Arrays.fill(fluxCol, 0.0);
+        java.util.Arrays.fill(cgCol, 0.0);
+        factorise(dragCol, dt, triM, triB);
+        solveFactorised(v, triM, triB, dt, kb);
+        // u at the west face of cell i: average K and drag of the two columns
+        for (int i = 0; i < nx; i++) {
+            int l = g.im1[i];
+            dragFace[i] = 0.5 * (cd[i] * windSfc[i] + cd[l] * windSfc[l]);
+        }
+        diffusionCoefficients(kIface, true, dt);
+        factorise(dragFace, dt, triM, triB);
+        solveFactorised(u, triM, triB, dt, kb);
         for (int i = 0; i < nx; i++) {
             q[i] = Math.max(q[i], 0.0);
         }
     }
+
+    /**
+     * Interface diffusivities (column K, or the average of columns i-1 and i at u points) into triK and
+     * the backward-Euler couplings lo = dt K_k / (dz_k dzc_k), hi = dt K_(k+1) / (dz_k dzc_(k+1)) into
+     * triLo and triHi, all [k * nx + i].
+     */
+    private void diffusionCoefficients(double[] kI, boolean faces, double dt) {
+        int[] im = g.im1;
+        for (int k = 0; k <= nz; k++) {
+            int o = k * nx;
+            if (faces) {
+                for (int i = 0; i < nx; i++) {
+                    triK[o + i] = 0.5 * (kI[o + im[i]] + kI[o + i]);
+                }
+            } else {
+                System.arraycopy(kI, o, triK, o, nx);
+            }
+        }
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            double denLo = g.dzf[k] * g.dzc[k];
+            double denHi = g.dzf[k] * g.dzc[k + 1];
+            boolean hasLo = k > 0;
+            boolean hasHi = k < nz - 1;
+            for (int i = 0; i < nx; i++) {
+                triLo[o + i] = hasLo ? dt * triK[o + i] / denLo : 0.0;
+                triHi[o + i] = hasHi ? dt * triK[o + nx + i] / denHi : 0.0;
+            }
+        }
+    }
+
+    /**
+     * Thomas forward elimination of the matrices (-lo, 1 + lo + hi (+ dt drag / dz_0 at k = 0), -hi)
+     * of all columns: multipliers into m and pivots into b.
+     */
+    private void factorise(double[] dragMPerS, double dt, double[] m, double[] b) {
+        for (int i = 0; i < nx; i++) {
+            b[i] = 1.0 + triLo[i] + triHi[i];
+        }
+        if (dragMPerS != null) {
+            for (int i = 0; i < nx; i++) {
+                b[i] += dt * dragMPerS[i] / g.dzf[0];
+            }
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                double mk = -triLo[o + i] / b[o - nx + i];
+                m[o + i] = mk;
+                b[o + i] = 1.0 + triLo[o + i] + triHi[o + i] - mk * -triHi[o - nx + i];
+            }
+        }
+    }
+
+    /**
+     * Backward-Euler diffusion of s for all columns with the factorised matrices; surface flux fluxCol
+     * into the lowest layer and the explicit divergence of the non-local flux cgCol * max(0, K - K_bg).
+     */
+    private void solveFactorised(double[] s, double[] m, double[] b, double dt, double kb) {
+        double[] r = triR;
+        for (int k = 0; k < nz; k++) {
+            int o = k * nx;
+            boolean top = k + 1 < nz;
+            boolean bot = k > 0;
+            double dzk = g.dzf[k];
+            for (int i = 0; i < nx; i++) {
+                double rr = s[o + i];
+                double cg = cgCol[i];
+                if (cg != 0.0) {
+                    // explicit divergence of the non-local flux K gamma_c through the layer's interfaces
+                    double fTop = top ? Math.max(0.0, triK[o + nx + i] - kb) : 0.0;
+                    double fBot = bot ? Math.max(0.0, triK[o + i] - kb) : 0.0;
+                    rr -= dt * cg * (fTop - fBot) / dzk;
+                }
+                r[o + i] = rr;
+            }
+        }
+        for (int i = 0; i < nx; i++) {
+            r[i] += dt * fluxCol[i] / g.dzf[0];
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                r[o + i] -= m[o + i] * r[o - nx + i];
+            }
+        }
+        int top = (nz - 1) * nx;
+        for (int i = 0; i < nx; i++) {
+            s[top + i] = r[top + i] / b[top + i];
+        }
+        for (int k = nz - 2; k >= 0; k--) {
+            int o = k * nx;
+            for (int i = 0; i < nx; i++) {
+                s[o + i] = (r[o + i] - -triHi[o + i] * s[o + nx + i]) / b[o + i];
+            }
+        }
+    }
+
+    private final double[] dragCol;
+    private final double[] dragFace;
+    private final double[] fluxCol;
+    private final double[] cgCol;
+    private final double[] triK;
+    private final double[] triLo;
+    private final double[] triHi;
+    private final double[] triM;
+    private final double[] triB;
+    private final double[] triR;
 
     /** K at interfaces 0..nz of one column into out[offset + k * stride]. */
     private double kProfile(double heatFlux, double wind, double cdI, double hI, double[] out, int offset, int stride) {
@@ -899,21 +1038,11 @@ public final class NonlinearModel {
     static final double COUNTERGRADIENT_C = 6.5;
     private double[] cgFactor;
 
-    private void loadColumnK(int i1, int i2, double dt) {
-        for (int k = 0; k <= nz; k++) {
-            colK[k] = 0.5 * (kIface[k * nx + i1] + kIface[k * nx + i2]);
-        }
-    }
-
     /**
-     * Backward-Euler diffusion of column i of s with interface diffusivities colK; a surface flux
-     * (kinematic) into the lowest layer and a linear drag coefficient (m/s) on the lowest layer.
+     * Backward-Euler diffusion of the column s[offset + k * stride] with interface diffusivities colK; a
+     * surface flux (kinematic) into the lowest layer, a linear drag coefficient (m/s) on the lowest layer
+     * and the non-local (countergradient) flux term.
      */
-    private void solveColumn(double[] s, int i, double dt, double surfaceFlux, double dragMPerS) {
-        solveColumn(s, i, nx, dt, surfaceFlux, dragMPerS, 0.0);
-    }
-
-    /** As above for the column s[offset + k * stride]. */
     private void solveColumn(double[] s, int offset, int stride, double dt, double surfaceFlux, double dragMPerS,
                              double countergradient) {
         for (int k = 0; k < nz; k++) {
