@@ -81,6 +81,11 @@ public final class NonlinearModel {
     private final double[] phi;
     // row and column work buffers
     private final double[] fx;
+    /** Periodic row copies with two ghost cells each side: pad[i + 2] = row[i]. */
+    private final double[] padA;
+    private final double[] padB;
+    /** padSlope[i + 1] = limited slope of cell i; padSlope[0] = slope of cell nx - 1. */
+    private final double[] padSlope;
     private final double[] fzBot;
     private final double[] fzTop;
     private final double[] slopeA;
@@ -188,7 +193,10 @@ public final class NonlinearModel {
         tq = new double[nc];
         chi = new double[nc];
         phi = new double[nc];
-        fx = new double[nx];
+        fx = new double[nx + 1];
+        padA = new double[nx + 4];
+        padB = new double[nx + 4];
+        padSlope = new double[nx + 1];
         fzBot = new double[nx];
         fzTop = new double[nx];
         slopeA = new double[nx];
@@ -572,22 +580,35 @@ public final class NonlinearModel {
         return Math.abs(c) < lim ? c : Math.copySign(lim, c);
     }
 
+    /** Copies row o..o+nx-1 of s into pad[2..nx+1] with two periodic ghost cells at each end. */
+    private void padRow(double[] s, int o, double[] pad) {
+        System.arraycopy(s, o, pad, 2, nx);
+        pad[0] = s[o + nx - 2];
+        pad[1] = s[o + nx - 1];
+        pad[nx + 2] = s[o];
+        pad[nx + 3] = s[o + 1];
+    }
+
     private void advectCentreLimited(double[] s, double[] ts) {
-        int[] im = g.im1;
-        int[] ip = g.ip1;
+        double[] pr = padA;
+        double[] sl = padSlope;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
+            padRow(s, o, pr);
             for (int i = 0; i < nx; i++) {
-                slopeA[i] = mcSlope(s[o + i] - s[o + im[i]], s[o + ip[i]] - s[o + i]);
+                double c = pr[i + 2];
+                sl[i + 1] = mcSlope(c - pr[i + 1], pr[i + 3] - c);
             }
+            sl[0] = sl[nx];
+            // fx[i]: flux through the west face of cell i, upwind reconstruction
             for (int i = 0; i < nx; i++) {
                 double a = lin ? ug : u[o + i];
-                int l = im[i];
-                double face = a >= 0 ? s[o + l] + 0.5 * slopeA[l] : s[o + i] - 0.5 * slopeA[i];
+                double face = a >= 0 ? pr[i + 1] + 0.5 * sl[i] : pr[i + 2] - 0.5 * sl[i + 1];
                 fx[i] = a * face;
             }
+            fx[nx] = fx[0];
             for (int i = 0; i < nx; i++) {
-                ts[o + i] -= (fx[ip[i]] - fx[i]) * invDx;
+                ts[o + i] -= (fx[i + 1] - fx[i]) * invDx;
             }
         }
         if (lin) {
@@ -625,17 +646,18 @@ public final class NonlinearModel {
 
     /** Advection of a centred momentum component (v) with the third-order flux. */
     private void advectCentre3(double[] s, double[] ts) {
-        int[] im = g.im1;
-        int[] ip = g.ip1;
-        int[] im2 = g.im2;
+        double[] pr = padA;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
+            padRow(s, o, pr);
+            // fx[i]: flux through the west face of cell i
             for (int i = 0; i < nx; i++) {
                 double a = lin ? ug : u[o + i];
-                fx[i] = flux3(a, s[o + im2[i]], s[o + im[i]], s[o + i], s[o + ip[i]]);
+                fx[i] = flux3(a, pr[i], pr[i + 1], pr[i + 2], pr[i + 3]);
             }
+            fx[nx] = fx[0];
             for (int i = 0; i < nx; i++) {
-                ts[o + i] -= (fx[ip[i]] - fx[i]) * invDx;
+                ts[o + i] -= (fx[i + 1] - fx[i]) * invDx;
             }
         }
         if (lin) {
@@ -667,17 +689,18 @@ public final class NonlinearModel {
 
     private void advectU() {
         int[] im = g.im1;
-        int[] ip = g.ip1;
-        int[] ip2 = g.ip2;
+        double[] pr = padA;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
-            // flux through cell centre i, the east side of the u control volume around face i
+            padRow(u, o, pr);
+            // fx[i + 1]: flux through cell centre i, the east side of the u control volume around face i
             for (int i = 0; i < nx; i++) {
-                double a = lin ? ug : 0.5 * (u[o + i] + u[o + ip[i]]);
-                fx[i] = flux3(a, u[o + im[i]], u[o + i], u[o + ip[i]], u[o + ip2[i]]);
+                double a = lin ? ug : 0.5 * (pr[i + 2] + pr[i + 3]);
+                fx[i + 1] = flux3(a, pr[i + 1], pr[i + 2], pr[i + 3], pr[i + 4]);
             }
+            fx[0] = fx[nx];
             for (int i = 0; i < nx; i++) {
-                tu[o + i] -= (fx[i] - fx[im[i]]) * invDx;
+                tu[o + i] -= (fx[i + 1] - fx[i]) * invDx;
             }
         }
         if (lin) {
@@ -708,19 +731,27 @@ public final class NonlinearModel {
     }
 
     private void advectW() {
-        int[] im = g.im1;
-        int[] ip = g.ip1;
-        int[] ip2 = g.ip2;
+        double[] pr = padA;
+        double[] pl = padB;
+        double[] pu = padSlope; // u of the level above at i + 1, as pu[i]
         for (int k = 1; k < nz; k++) {
             int o = k * nx;
             double wl = g.wLo[k];
-            for (int i = 0; i < nx; i++) {
-                // flux through x_{i+1/2} at interface k
-                double a = lin ? ug : wl * u[o - nx + ip[i]] + (1.0 - wl) * u[o + ip[i]];
-                fx[i] = flux3(a, w[o + im[i]], w[o + i], w[o + ip[i]], w[o + ip2[i]]);
+            padRow(w, o, pr);
+            if (!lin) {
+                System.arraycopy(u, o - nx + 1, pl, 0, nx - 1);
+                pl[nx - 1] = u[o - nx];
+                System.arraycopy(u, o + 1, pu, 0, nx - 1);
+                pu[nx - 1] = u[o];
             }
             for (int i = 0; i < nx; i++) {
-                tw[o + i] -= (fx[i] - fx[im[i]]) * invDx;
+                // fx[i + 1]: flux through x_{i+1/2} at interface k
+                double a = lin ? ug : wl * pl[i] + (1.0 - wl) * pu[i];
+                fx[i + 1] = flux3(a, pr[i + 1], pr[i + 2], pr[i + 3], pr[i + 4]);
+            }
+            fx[0] = fx[nx];
+            for (int i = 0; i < nx; i++) {
+                tw[o + i] -= (fx[i + 1] - fx[i]) * invDx;
             }
         }
         if (lin) {
