@@ -164,13 +164,16 @@ public final class BulkFlux {
         if (k == 0) {
             return 0.0;
         }
+        // F_h of louisHeatFactor with its unstable-branch constant evaluated once for the whole search
+        // (the same arithmetic, so the same root to the last bit)
+        double cUnstable = 3.0 * LOUIS_B * LOUIS_C * neutralDragCoefficient(heightM, roughnessM) * Math.sqrt(heightM / roughnessM);
         if (k > 0) {
             // Unstable: g is increasing, g(0) = k > 0 and g(-k) <= 0 because F_h >= 1 there.
             double lo = -k;
             double hi = 0.0;
             for (int i = 0; i < 60; i++) {
                 double mid = 0.5 * (lo + hi);
-                if (mid + k / louisHeatFactor(mid, heightM, roughnessM) > 0) {
+                if (mid + k / louisHeatFactor(mid, cUnstable) > 0) {
                     hi = mid;
                 } else {
                     lo = mid;
@@ -183,13 +186,13 @@ public final class BulkFlux {
         double best = 0.0;
         double bestG = k;
         for (double ri = 1e-4; ri <= 10.0; ri *= 1.25) {
-            double g = ri + k / louisHeatFactor(ri, heightM, roughnessM);
+            double g = ri + k / louisHeatFactor(ri, cUnstable);
             if (g > 0) {
                 double lo = prev;
                 double hi = ri;
                 for (int i = 0; i < 60; i++) {
                     double mid = 0.5 * (lo + hi);
-                    if (mid + k / louisHeatFactor(mid, heightM, roughnessM) > 0) {
+                    if (mid + k / louisHeatFactor(mid, cUnstable) > 0) {
                         hi = mid;
                     } else {
                         lo = mid;
@@ -204,5 +207,13 @@ public final class BulkFlux {
             prev = ri;
         }
         return best;
+    }
+
+    /** {@link #louisHeatFactor(double, double, double)} given its unstable-branch constant c. */
+    private static double louisHeatFactor(double ri, double cUnstable) {
+        if (ri < 0) {
+            return 1.0 - 3.0 * LOUIS_B * ri / (1.0 + cUnstable * Math.sqrt(-ri));
+        }
+        return 1.0 / (1.0 + 3.0 * LOUIS_B * ri * Math.sqrt(1.0 + LOUIS_D * ri));
     }
 }

@@ -65,6 +65,9 @@ public final class ColumnSurfaceFluxes {
         if (windSpeedMs.length != n || thetaAirK.length != n || mixingRatioAir.length != n) {
             throw new IllegalArgumentException("air arrays must have one value per column (" + n + ")");
         }
+        // the sun is the same for every column at one time
+        double sinAlpha = SolarGeometry.sinElevationAt(coast, modelTimeS);
+        double kDown = ClearSkyRadiation.globalWm2(sinAlpha, cloudFraction);
         for (int i = 0; i < n; i++) {
             SurfaceSegment s = segmentOfColumn[i];
             if (s instanceof SurfaceSegment.Water w) {
@@ -80,7 +83,7 @@ public final class ColumnSurfaceFluxes {
             } else {
                 SurfaceSegment.Land l = (SurfaceSegment.Land) s;
                 double tAir = Thermo.temperatureFromPotentialK(thetaAirK[i], surfacePressurePa);
-                EnergyBalance eb = SurfaceEnergyBalance.land(coast, l, modelTimeS, cloudFraction, tAir, surfacePressurePa,
+                EnergyBalance eb = SurfaceEnergyBalance.land(l, sinAlpha, kDown, cloudFraction, tAir, surfacePressurePa,
                         partition);
                 double rho = Thermo.densityKgM3(surfacePressurePa, tAir, mixingRatioAir[i]);
                 sensibleWm2[i] = eb.sensibleHeatFluxWm2();

@@ -85,6 +85,18 @@ public final class SurfaceEnergyBalance {
                                      double airTemperatureK, double pressurePa, Partition partition) {
         double sinAlpha = SolarGeometry.sinElevationAt(coast, modelTimeS);
         double kDown = ClearSkyRadiation.globalWm2(sinAlpha, cloudFraction);
+        return land(land, sinAlpha, kDown, cloudFraction, airTemperatureK, pressurePa, partition);
+    }
+
+    /**
+     * {@link #land(Coast, SurfaceSegment.Land, double, double, double, double, Partition)} with the sun
+     * already evaluated (for many columns at one time: the solar geometry is the same for all of them).
+     *
+     * @param sinAlpha sine of the solar elevation ({@link SolarGeometry#sinElevationAt})
+     * @param kDown global irradiance ({@link ClearSkyRadiation#globalWm2}) for that sun and cloud
+     */
+    public static EnergyBalance land(SurfaceSegment.Land land, double sinAlpha, double kDown, double cloudFraction,
+                                     double airTemperatureK, double pressurePa, Partition partition) {
         double qStar = NetRadiation.netRadiationWm2(land.albedo(), kDown, airTemperatureK, cloudFraction);
         double g = NetRadiation.groundHeatFluxWm2(qStar, sinAlpha > 0);
         return switch (partition) {
