@@ -17,6 +17,13 @@ import org.littoral.model.field.Snapshot;
  * which u' first changes sign above the near-surface level, in the column of peak onshore breeze at the
  * peak time, and the <b>circulation depth</b> the top of the return flow above it (where u' comes
  * back above -10 % of the return-flow peak).
+ *
+ * <p>For a nonlinear run the searches keep to the interior clear of the far-field sponges
+ * ({@link FieldSections#interiorFromM}), and arrival at a site inland only counts once the breeze's
+ * onshore reach from the coast has come near it ({@link #onshoreAfterFront}), because resolved
+ * convection over land makes brief onshore gusts ahead of the front. The <b>front</b> at each time is
+ * where the near-surface convergence of the total wind peaks within {@link #FRONT_WINDOW_M} of the
+ * onshore reach.
  */
 public final class BreezeDiagnostics {
     private BreezeDiagnostics() {
@@ -35,10 +42,21 @@ public final class BreezeDiagnostics {
                               double returnFlowMPerS, double returnFlowHeightM) {
     }
 
+    /**
+     * @param reachM per output time, the onshore reach of the breeze wind from the coast, m (NaN where the
+     *        coast is not onshore)
+     * @param frontXM per output time, the front: where the near-surface convergence -du/dx of the total wind
+     *        peaks within {@link #FRONT_WINDOW_M} of the reach, m (NaN without a reach)
+     * @param frontConvergencePerS that peak convergence, 1/s (NaN without a reach)
+     */
     public record Result(double thresholdMPerS, double peakBreezeMPerS, double peakTotalMPerS, double peakClockH, double peakXM,
                          int peakTimeIndex, Double onsetClockH, boolean onshoreAtOutputStart, double maxPenetrationM,
-                         Double penetrationClockH, List<SiteTiming> sites, List<ImpliedSpeed> speeds) {
+                         Double penetrationClockH, List<SiteTiming> sites, List<ImpliedSpeed> speeds, double[] reachM,
+                         double[] frontXM, double[] frontConvergencePerS) {
     }
+
+    /** Half-width of the search for the front's convergence maximum around the onshore reach, m. */
+    public static final double FRONT_WINDOW_M = 10_000.0;
 
     public static Result compute(FieldSections fs, List<String> siteNames, double[] siteXM, double threshold) {
         int nt = fs.clockH.length;
@@ -46,11 +64,19 @@ public final class BreezeDiagnostics {
             throw new IllegalArgumentException("no output times inside the solution's span; widen output.start_h..end_h");
         }
         int nx = fs.xM.length;
+        int iLo = 0;
+        while (iLo < nx - 1 && fs.xM[iLo] < fs.interiorFromM) {
+            iLo++;
+        }
+        int iHi = nx - 1;
+        while (iHi > 0 && fs.xM[iHi] > fs.interiorToM) {
+            iHi--;
+        }
         double best = Double.NEGATIVE_INFINITY;
         int bn = 0;
-        int bi = 0;
+        int bi = iLo;
         for (int n = 0; n < nt; n++) {
-            for (int i = 0; i < nx; i++) {
+            for (int i = iLo; i <= iHi; i++) {
                 if (fs.nearSurfaceU[n][i] > best) {
                     best = fs.nearSurfaceU[n][i];
                     bn = n;
@@ -68,14 +94,34 @@ public final class BreezeDiagnostics {
         int i0 = FieldSections.bracket(fs.xM, 0.0);
         double pen = 0;
         Double penTime = null;
+        double[] reachM = new double[nt];
+        double[] frontX = new double[nt];
+        double[] frontC = new double[nt];
         for (int n = 0; n < nt; n++) {
             double reach = Double.NaN;
-            for (int i = i0; i < nx; i++) {
+            for (int i = i0; i <= iHi; i++) {
                 if (fs.nearSurfaceU[n][i] >= threshold) {
                     reach = fs.xM[i];
                 } else if (fs.xM[i] >= 0) {
                     break;
                 }
+            }
+            reachM[n] = reach;
+            frontX[n] = Double.NaN;
+            frontC[n] = Double.NaN;
+            if (!Double.isNaN(reach)) {
+                double c = Double.NEGATIVE_INFINITY;
+                for (int i = Math.max(1, iLo); i <= Math.min(nx - 2, iHi); i++) {
+                    if (Math.abs(fs.xM[i] - reach) > FRONT_WINDOW_M) {
+                        continue;
+                    }
+                    double conv = -(fs.nearSurfaceTotalU[n][i + 1] - fs.nearSurfaceTotalU[n][i - 1]) / (fs.xM[i + 1] - fs.xM[i - 1]);
+                    if (conv > c) {
+                        c = conv;
+                        frontX[n] = fs.xM[i];
+                    }
+                }
+                frontC[n] = c;
             }
             if (!Double.isNaN(reach) && reach > pen) {
                 pen = reach;
@@ -94,7 +140,10 @@ public final class BreezeDiagnostics {
                     pk = n;
                 }
             }
-            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], firstOnshore(fs.clockH, total, along, threshold), series[pk], fs.clockH[pk]));
+            Double arrival = fs.arrivalFollowsFront && siteXM[s] > 0
+                    ? onshoreAfterFront(fs.clockH, total, along, threshold, reachM, siteXM[s])
+                    : firstOnshore(fs.clockH, total, along, threshold);
+            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], arrival, series[pk], fs.clockH[pk]));
         }
         List<SiteTiming> byX = new ArrayList<>(sites);
         byX.sort((a, b) -> Double.compare(a.xM(), b.xM()));
@@ -107,7 +156,39 @@ public final class BreezeDiagnostics {
             }
         }
         return new Result(threshold, best, fs.nearSurfaceTotalU[bn][bi], fs.clockH[bn], fs.xM[bi], bn, onset, onshoreAtStart, pen,
-                penTime, sites, speeds);
+                penTime, sites, speeds, reachM, frontX, frontC);
+    }
+
+    /**
+     * Arrival at an inland site of a nonlinear run: as {@link #firstOnshore}, but only once the breeze's
+     * onshore reach from the coast has come within {@link #FRONT_WINDOW_M} of the site, so that a gust of
+     * resolved convection ahead of the front does not count. If the total wind is already in the onshore
+     * sector when the front comes near (a gust that stayed), the arrival is that time. Null when the reach
+     * never comes near, or the wind never turns onshore after it has.
+     */
+    static Double onshoreAfterFront(double[] t, double[] cross, double[] along, double threshold, double[] reachM, double x) {
+        int n0 = -1;
+        for (int n = 0; n < t.length; n++) {
+            if (!Double.isNaN(reachM[n]) && reachM[n] >= x - FRONT_WINDOW_M) {
+                n0 = n;
+                break;
+            }
+        }
+        if (n0 < 0) {
+            return null;
+        }
+        double tan = Math.tan(Math.toRadians(ONSHORE_HALF_WIDTH_DEG));
+        int from = Math.max(0, n0 - 1);
+        if (from > 0 && inSector(cross[from], along[from], threshold, tan)) {
+            if (inSector(cross[from - 1], along[from - 1], threshold, tan)) {
+                return t[from];
+            }
+            from--;
+        }
+        double[] tt = java.util.Arrays.copyOfRange(t, from, t.length);
+        double[] cc = java.util.Arrays.copyOfRange(cross, from, t.length);
+        double[] aa = java.util.Arrays.copyOfRange(along, from, t.length);
+        return firstOnshore(tt, cc, aa, threshold);
     }
 
     /** u' along the output times at position x (linear in x). */

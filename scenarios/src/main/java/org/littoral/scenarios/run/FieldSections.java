@@ -11,7 +11,9 @@ import org.littoral.model.field.Snapshot;
  * The solution evaluated at the output times and reduced to what the diagnostics and plots need:
  * the near-surface cross-shore breeze wind u' = u - U_ambient along x (a time-distance section) and,
  * at each site, time-height sections of u', the alongshore breeze v' and theta'. The "breeze" is the
- * model wind minus the ambient wind, so an onshore perturbation shows even against offshore flow.
+ * model wind minus the ambient wind, so an onshore perturbation shows even against offshore flow. For a
+ * nonlinear run ({@link FarFieldSolution}) the ambient wind is its far-field reference at the same time
+ * and height, which has the same drag, turning and spin-up but no coast.
  * Each output time costs one snapshot, which is not kept.
  */
 public final class FieldSections {
@@ -33,6 +35,17 @@ public final class FieldSections {
     public final double[][][] siteTheta;
     /** Times (clock hours) dropped because they lie outside the solution's span. */
     public final List<Double> dropped;
+    /**
+     * The part of the domain the diagnostics search (peak, penetration, plot range): the whole domain for
+     * the linear model, the interior clear of the far-field sponges for a nonlinear run.
+     */
+    public double interiorFromM;
+    public double interiorToM;
+    /**
+     * True for a nonlinear run: arrival inland is when the onshore flow connected to the coast reaches the
+     * site (the front), not the first gust above the threshold (resolved convection over land makes those).
+     */
+    public boolean arrivalFollowsFront;
 
     private FieldSections(double[] clockH, double[] modelSec, double[] xM, double[] zM, double nearSurfaceM, int sites,
                           List<Double> dropped) {
@@ -49,6 +62,8 @@ public final class FieldSections {
         siteV = new double[sites][nt][zM.length];
         siteTheta = new double[sites][nt][zM.length];
         this.dropped = dropped;
+        this.interiorFromM = xM[0];
+        this.interiorToM = xM[xM.length - 1];
     }
 
     /**
@@ -101,7 +116,19 @@ public final class FieldSections {
             thBg[k] = Background.interpolate(bg.zM(), bg.thetaK(), zM[k]);
         }
         int nt = fs.clockH.length;
+        FarFieldSolution far = sol instanceof FarFieldSolution ff ? ff : null;
+        if (far != null) {
+            fs.interiorFromM = far.interiorFromM();
+            fs.interiorToM = far.interiorToM();
+            fs.arrivalFollowsFront = true;
+        }
         for (int n = 0; n < nt; n++) {
+            if (far != null) {
+                double[][] ref = far.farFieldWindAt(fs.modelSec[n]);
+                System.arraycopy(ref[0], 0, uBg, 0, nz);
+                System.arraycopy(ref[1], 0, vBg, 0, nz);
+                ambientNear = (1 - wz) * uBg[k0] + wz * uBg[k0 + 1];
+            }
             Snapshot s = sol.snapshotAt(fs.modelSec[n]);
             double[] u = s.uMPerS();
             double[] v = s.vMPerS();

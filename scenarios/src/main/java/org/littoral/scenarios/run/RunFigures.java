@@ -7,7 +7,7 @@ final class RunFigures {
 
     /**
      * Cross-shore range worth plotting: where the near-surface breeze ever exceeds 5 % of its peak
-     * magnitude, padded by 10 %, clamped to the domain.
+     * magnitude inside the interior the diagnostics search, padded by 10 %, clamped to the domain.
      */
     static double[] plotRangeM(FieldSections fs) {
         int nx = fs.xM.length;
@@ -15,6 +15,9 @@ final class RunFigures {
         double peak = 0;
         for (double[] row : fs.nearSurfaceU) {
             for (int i = 0; i < nx; i++) {
+                if (fs.xM[i] < fs.interiorFromM || fs.xM[i] > fs.interiorToM) {
+                    continue;
+                }
                 amp[i] = Math.max(amp[i], Math.abs(row[i]));
                 peak = Math.max(peak, amp[i]);
             }

@@ -74,8 +74,10 @@ public final class ScenarioRun {
         FieldSections fs = FieldSections.evaluate(sol, coast, out.clockHours(), out.nearSurfaceM(), siteX, periodic, null);
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, siteX, out.onshoreThresholdMPerS());
         Snapshot peak = sol.snapshotAt(fs.modelSec[d.peakTimeIndex()]);
-        BreezeDiagnostics.Circulation circ = BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, sol.background(), d.peakClockH(),
-                d.peakXM(), out.nearSurfaceM());
+        BreezeDiagnostics.Circulation circ = sol instanceof FarFieldSolution far
+                ? BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, far.farFieldWindAt(fs.modelSec[d.peakTimeIndex()])[0], d.peakClockH(),
+                        d.peakXM(), out.nearSurfaceM())
+                : BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, sol.background(), d.peakClockH(), d.peakXM(), out.nearSurfaceM());
 
         List<Path> files = new ArrayList<>();
         Path soundings = outDir.resolve("soundings.csv");
@@ -188,6 +190,22 @@ public final class ScenarioRun {
         ObjectNode pen = dg.putObject("max_inland_penetration");
         pen.put("km", round(d.maxPenetrationM() / 1000.0, 3));
         putTime(pen, d.penetrationClockH());
+        if (fs.arrivalFollowsFront && d.penetrationClockH() != null) {
+            for (int n = 0; n < fs.clockH.length; n++) {
+                if (fs.clockH[n] == d.penetrationClockH() && !Double.isNaN(d.frontXM()[n])) {
+                    pen.put("front_x_km", round(d.frontXM()[n] / 1000.0, 3));
+                    pen.put("front_convergence_per_s", d.frontConvergencePerS()[n]);
+                    pen.put("front_note", "front = strongest near-surface convergence within "
+                            + round(BreezeDiagnostics.FRONT_WINDOW_M / 1000.0, 1) + " km of the onshore reach");
+                }
+            }
+            ObjectNode area = dg.putObject("searched_interior");
+            area.put("from_km", round(fs.interiorFromM / 1000.0, 3));
+            area.put("to_km", round(fs.interiorToM / 1000.0, 3));
+            area.put("note", "peak, penetration and front are searched here, clear of the far-field sponges; the breeze wind is the run "
+                    + "minus its far-field reference (the same model over the inland surface without a coast); arrival inland is when "
+                    + "the onshore flow connected to the coast reaches the site");
+        }
         ArrayNode sites = dg.putArray("sites");
         for (BreezeDiagnostics.SiteTiming s : d.sites()) {
             ObjectNode o = sites.addObject();

@@ -1,7 +1,6 @@
 package org.littoral.scenarios.run;
 
 import org.littoral.model.field.BreezeSolution;
-import org.littoral.scenarios.cli.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 
 /** Turns a scenario into a model solution. */
@@ -9,12 +8,14 @@ import org.littoral.scenarios.scenario.Scenario;
 public interface Solver {
     BreezeSolution solve(Scenario scenario);
 
-    /** The solver littoral uses: the model named by the scenario's {@code kind}. */
+    /**
+     * The solver littoral uses: the model named by the scenario's {@code kind}. A nonlinear blow-up
+     * surfaces as a {@link org.littoral.scenarios.cli.UserInputException} (one line, exit code 2).
+     */
     static Solver standard() {
         return scenario -> {
             if (scenario.kind() == Scenario.Kind.NONLINEAR) {
-                throw new UserInputException(scenario.source() + ": kind = nonlinear: the nonlinear model is not yet available in this "
-                        + "version of littoral; use kind: linear");
+                return NonlinearSolver.solve(scenario);
             }
             return LinearSolver.solve(scenario);
         };

@@ -8,6 +8,11 @@ import org.littoral.model.grid.HorizontalGrid;
 import org.littoral.model.grid.VerticalGrid;
 import org.littoral.model.linear.HeatingSpec;
 import org.littoral.model.linear.LinearConfig;
+import org.littoral.model.nonlinear.CanonicalFlows;
+import org.littoral.model.nonlinear.Forcing;
+import org.littoral.model.nonlinear.NonlinearConfig;
+import org.littoral.model.nonlinear.ThetaProfile;
+import org.littoral.model.surface.SurfaceEnergyBalance;
 import org.littoral.model.sounding.FlightSchedule;
 import org.littoral.model.sounding.SoundingSpec;
 import org.littoral.model.sounding.VirtualSite;
@@ -15,11 +20,24 @@ import org.littoral.model.sounding.VirtualSite;
 /**
  * A validated scenario, in SI units and model types. Built by {@link ScenarioFile}; {@link #inputs()}
  * is the file as read with every default filled in (echoed into run summaries).
+ *
+ * @param heating the classic or slab heating; null when the land is heated by the surface energy balance
+ *        ({@code energyBalance} is then given; kind nonlinear only)
+ * @param energyBalance cloud and partition of {@code heating: shape: energy_balance}, else null
  */
 public record Scenario(String name, String description, Kind kind, String source, Coast coast, SurfaceMap surface,
                        HorizontalGrid xGrid, VerticalGrid zGrid, Atmosphere atmosphere, AmbientWind ambientWind,
-                       HeatingSpec heating, Physics physics, List<VirtualSite> sites, Flights flights, Output output,
-                       ObjectNode inputs) {
+                       HeatingSpec heating, EnergyBalance energyBalance, Physics physics, List<VirtualSite> sites,
+                       Flights flights, Output output, ObjectNode inputs) {
+
+    /** Width of the far-field sponge at each end of the nonlinear model's periodic domain, m. */
+    public static final double NONLINEAR_SPONGE_M = 50_000.0;
+    /** Longest interval between the nonlinear model's stored snapshots, s (output times between are interpolated). */
+    public static final double NONLINEAR_STORE_MAX_S = 600.0;
+
+    /** Land heated by the surface energy balance (nonlinear model). */
+    public record EnergyBalance(double cloudFraction, SurfaceEnergyBalance.Partition partition) {
+    }
 
     /** Which model runs the scenario. */
     public enum Kind { LINEAR, NONLINEAR }
@@ -53,6 +71,86 @@ public record Scenario(String name, String description, Kind kind, String source
             }
             return t;
         }
+    }
+
+    /**
+     * Span of a nonlinear run, local solar hours: from the earlier of the first output time and the first
+     * launch to the later of the last output time and the end of the last ascent.
+     */
+    public double[] nonlinearSolarSpanHours() {
+        List<Double> launches = flights.schedule().launchTimesClockHours();
+        double startClock = output.startClockH();
+        double endClock = output.endClockH();
+        if (!launches.isEmpty()) {
+            double ascentH = flights.sounding().ceilingM() / flights.sounding().ascentRateMPerS() / 3600.0;
+            startClock = Math.min(startClock, launches.get(0));
+            endClock = Math.max(endClock, launches.get(launches.size() - 1) + ascentH);
+        }
+        return new double[] {coast.solarHoursFromClock(startClock), coast.solarHoursFromClock(endClock)};
+    }
+
+    /**
+     * The nonlinear model's configuration for this scenario: the grid's levels are the layer interfaces,
+     * the ambient wind is the geostrophic wind, friction and cooling are the Rayleigh and Newtonian
+     * damping, and the heating becomes the model's forcing (energy balance, a prescribed half-sine land
+     * flux for slab, the same heating rate for classic). Far-field sponges of {@link #NONLINEAR_SPONGE_M}
+     * at each end; snapshots stored at the output step or {@link #NONLINEAR_STORE_MAX_S}, whichever is shorter.
+     */
+    public NonlinearConfig toNonlinearConfig() {
+        return nonlinearBuilder(surface, xGrid, NONLINEAR_SPONGE_M, false).build();
+    }
+
+    /**
+     * The far-field reference of a nonlinear run: the same model and forcing over a few columns of the
+     * inland-most surface only (no coast, no sponges), so it has no breeze but the same boundary layer,
+     * surface drag, turning and spin-up from rest. The run pipeline measures the breeze against it.
+     */
+    public NonlinearConfig toNonlinearFarFieldConfig() {
+        var segs = surface.segments();
+        var last = segs.get(segs.size() - 1);
+        var ref = last instanceof org.littoral.model.coast.SurfaceSegment.Land l
+                ? new org.littoral.model.coast.SurfaceSegment.Land(l.name(), Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
+                        l.albedo(), l.bowenRatio(), l.roughnessM(), l.soilMoistureFraction())
+                : new org.littoral.model.coast.SurfaceSegment.Water(last.name(), Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
+                        ((org.littoral.model.coast.SurfaceSegment.Water) last).seaSurfaceTemperatureK(), last.roughnessM());
+        return nonlinearBuilder(new SurfaceMap(List.of(ref)), HorizontalGrid.centred(4, xGrid.dxM()), 0.0, true).build();
+    }
+
+    private NonlinearConfig.Builder nonlinearBuilder(SurfaceMap map, HorizontalGrid xg, double spongeM, boolean farField) {
+        double[] span = nonlinearSolarSpanHours();
+        NonlinearConfig.Damping std = NonlinearConfig.Damping.standard();
+        NonlinearConfig.BoundaryLayer bl = NonlinearConfig.BoundaryLayer.standard();
+        Forcing forcing;
+        if (energyBalance != null) {
+            forcing = new Forcing.SurfaceEnergyBalance(energyBalance.cloudFraction(), energyBalance.partition());
+        } else if (heating instanceof HeatingSpec.SlabMixedLayer slab) {
+            forcing = new Forcing.PrescribedSurfaceFlux(slab.peakFluxDifferenceWm2(), slab.sunriseSolarHours(), slab.sunsetSolarHours(), 0.0);
+            bl = new NonlinearConfig.BoundaryLayer(slab.entrainmentRatio(), Math.max(10.0, slab.initialDepthM()), bl.nightDepthM(),
+                    bl.marineDepthM(), bl.backgroundDiffusivityM2PerS());
+        } else {
+            HeatingSpec.ClassicShape c = (HeatingSpec.ClassicShape) heating;
+            if (!farField) {
+                forcing = new Forcing.PrescribedHeating(CanonicalFlows.classicPeriodicHeating(c.amplitudeKPerS(), c.halfWidthM(),
+                        c.depthM(), c.sunriseSolarHours(), xg));
+            } else {
+                // far inland the classic shape tends to pi Q0 exp(-z/H) sin(omega (t - t_r)); over water it is 0
+                double q = map.segments().get(0).isLand() ? Math.PI * c.amplitudeKPerS() : 0.0;
+                double omega = 2 * Math.PI / 86400.0;
+                forcing = new Forcing.PrescribedHeating((x, z, t) -> q * Math.exp(-z / c.depthM())
+                        * Math.sin(omega * (t - c.sunriseSolarHours() * 3600.0)));
+            }
+        }
+        return NonlinearConfig.builder(coast, map, xg, zGrid)
+                .theta(new ThetaProfile.ConstantN(atmosphere.surfaceThetaK(), atmosphere.buoyancyFrequencyPerS()))
+                .moisture(atmosphere.surfaceMixingRatio(), atmosphere.mixingRatioGradientPerM())
+                .surfacePressurePa(atmosphere.surfacePressurePa())
+                .geostrophicWind(ambientWind.speedMPerS(), ambientWind.fromDeg())
+                .solarHours(span[0], span[1])
+                .outputIntervalS(Math.min(NONLINEAR_STORE_MAX_S, output.stepMin() * 60.0))
+                .forcing(forcing)
+                .damping(new NonlinearConfig.Damping(physics.frictionPerS(), physics.coolingPerS(), std.topLayerFraction(),
+                        std.topTimescaleS(), spongeM, std.lateralTimescaleS()))
+                .boundaryLayer(bl);
     }
 
     /** The linear model's configuration for this scenario. */

@@ -31,6 +31,7 @@ import org.littoral.model.sounding.InstrumentNoise;
 import org.littoral.model.sounding.SoundingSpec;
 import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.surface.SolarGeometry;
+import org.littoral.model.surface.SurfaceEnergyBalance;
 import org.littoral.model.thermo.Thermo;
 import org.littoral.scenarios.cli.UserInputException;
 
@@ -82,6 +83,10 @@ public final class ScenarioFile {
         }
         if (tree == null || tree.isMissingNode() || tree.isNull()) {
             throw new UserInputException(displayName + ": the scenario file is empty; start from a built-in one (littoral scenarios --show classic-45N)");
+        }
+        if (tree instanceof ObjectNode o && o.path("kind").asText("").equals("nonlinear") && o.get("heating") == null) {
+            // the heating default depends on the kind: the nonlinear model heats the land by the energy balance
+            o.putObject("heating").put("shape", "energy_balance");
         }
         SchemaValidator v = new SchemaValidator(displayName, locations);
         ObjectNode n = v.validate(ScenarioSchema.ROOT, tree);
@@ -145,17 +150,29 @@ public final class ScenarioFile {
         }
 
         Scenario build(String source) {
+            Scenario.Kind kind = n.get("kind").asText().equals("nonlinear") ? Scenario.Kind.NONLINEAR : Scenario.Kind.LINEAR;
+            boolean nonlinear = kind == Scenario.Kind.NONLINEAR;
             JsonNode c = n.get("coast");
             Coast coast = new Coast(d(c, "latitude_deg"), d(c, "longitude_deg"), d(c, "utc_offset_h"),
                     d(c, "bearing_land_to_sea_deg"), c.get("day_of_year").intValue());
 
             JsonNode g = n.get("grid");
             int nx = g.get("points").intValue();
-            if (Integer.bitCount(nx) != 1) {
-                problem("grid.points", "grid.points = " + nx + " is not a power of two (the FFT needs one); use "
+            if (!nonlinear && Integer.bitCount(nx) != 1) {
+                problem("grid.points", "grid.points = " + nx + " is not a power of two (the linear model's FFT needs one); use "
                         + Integer.highestOneBit(nx) + " or " + Integer.highestOneBit(nx) * 2);
             }
+            if (nonlinear && !smallFactors(nx)) {
+                problem("grid.points", "grid.points = " + nx + " has a prime factor above 5 (kind nonlinear needs a product of 2, 3 and 5 "
+                        + "for its FFT); use e.g. " + nearestSmooth(nx));
+            }
             double dx = d(g, "spacing_km") * 1000.0;
+            double minLengthKm = 4 * Scenario.NONLINEAR_SPONGE_M / 1000.0;
+            if (nonlinear && nx * dx / 1000.0 <= minLengthKm) {
+                problem("grid.points", "grid: the domain points x spacing_km = " + Schema.fmt(nx * dx / 1000.0) + " km is too narrow for "
+                        + "kind nonlinear, which keeps " + Schema.fmt(Scenario.NONLINEAR_SPONGE_M / 1000.0) + " km of far-field sponge at each "
+                        + "end; make it more than " + Schema.fmt(minLengthKm) + " km (e.g. 400 points x 1 km)");
+            }
             HorizontalGrid xg = HorizontalGrid.centred(Math.max(nx, 4), dx);
             int nz = g.get("levels").intValue();
             double top = d(g, "top_m");
@@ -181,7 +198,19 @@ public final class ScenarioFile {
             Scenario.AmbientWind wind = new Scenario.AmbientWind(d(w, "speed_m_per_s"), d(w, "from_deg"),
                     clean(coast.crossShore(en[0], en[1])), clean(coast.alongshore(en[0], en[1])));
 
-            HeatingSpec heating = heating(n.get("heating"), coast, atm);
+            JsonNode hn = n.get("heating");
+            HeatingSpec heating = null;
+            Scenario.EnergyBalance eb = null;
+            if (hn.get("shape").asText().equals("energy_balance")) {
+                if (!nonlinear) {
+                    problem("heating.shape", "heating.shape = 'energy_balance' needs kind: nonlinear (the linear model is forced by a "
+                            + "prescribed heating); set kind: nonlinear or use shape: classic or slab");
+                }
+                eb = new Scenario.EnergyBalance(d(hn, "cloud_fraction"), hn.get("partition").asText().equals("priestley_taylor")
+                        ? SurfaceEnergyBalance.Partition.PRIESTLEY_TAYLOR : SurfaceEnergyBalance.Partition.BOWEN_RATIO);
+            } else {
+                heating = heating(hn, coast, atm);
+            }
 
             JsonNode ph = n.get("physics");
             Double cooling = opt(ph, "cooling_per_s");
@@ -191,9 +220,26 @@ public final class ScenarioFile {
             List<VirtualSite> sites = sites(n.get("sites"), xg);
             Scenario.Flights flights = flights(n.get("flights"), top, n.get("name").asText());
             Scenario.Output output = output(n.get("output"), top);
-            Scenario.Kind kind = n.get("kind").asText().equals("nonlinear") ? Scenario.Kind.NONLINEAR : Scenario.Kind.LINEAR;
             return new Scenario(n.get("name").asText(), n.get("description").asText(), kind, source, coast, surface, xg, zg,
-                    atm, wind, heating, physics, sites, flights, output, n);
+                    atm, wind, heating, eb, physics, sites, flights, output, n);
+        }
+
+        static boolean smallFactors(int n) {
+            for (int p : new int[] {2, 3, 5}) {
+                while (n > 1 && n % p == 0) {
+                    n /= p;
+                }
+            }
+            return n == 1;
+        }
+
+        /** The nearest whole number at or above n with only the factors 2, 3 and 5. */
+        static int nearestSmooth(int n) {
+            int m = Math.max(1, n);
+            while (!smallFactors(m)) {
+                m++;
+            }
+            return m;
         }
 
         /** Components of exactly cross- or alongshore winds come out as 1e-16 from trigonometry: round them to 0. */

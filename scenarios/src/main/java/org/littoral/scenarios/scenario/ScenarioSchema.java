@@ -54,9 +54,12 @@ public final class ScenarioSchema {
                     + "The linear model heats where the surface is land (smoothed over the heating's half-width).");
 
     static final Field GRID = section("grid", Presence.DEFAULTED, "Model grid. The cross-shore domain is periodic and centred on the coast.",
-            integer("points", 16, 16384, 512L, "Number of cross-shore points; must be a power of two (FFT)."),
-            pos("spacing_km", "km", 0, 100, 2.0, "Cross-shore grid spacing. Domain length = points x spacing_km; make it several times the breeze scale."),
-            integer("levels", 2, 1024, 64L, "Number of output levels from the ground to top_m."),
+            integer("points", 16, 16384, 512L, "Number of cross-shore points. kind linear: a power of two (FFT). "
+                    + "kind nonlinear: a product of the factors 2, 3 and 5 (e.g. 200, 400, 512)."),
+            pos("spacing_km", "km", 0, 100, 2.0, "Cross-shore grid spacing. Domain length = points x spacing_km; make it several times the breeze scale. "
+                    + "kind nonlinear: the outer 50 km at each end are far-field sponges, so the domain must exceed 200 km."),
+            integer("levels", 2, 1024, 64L, "Number of output levels from the ground to top_m. kind nonlinear: the layer interfaces "
+                    + "from the ground to the rigid lid at top_m, so the model has levels - 1 layers and gives values at their centres."),
             pos("top_m", "m", 100, 50000, 4000.0, "Height of the top level."),
             optional(pos("first_level_spacing_m", "m", 0, 1000, null,
                     "Spacing of the lowest layer; the spacing then grows geometrically to reach top_m. Omitted: uniform levels.")));
@@ -70,7 +73,9 @@ public final class ScenarioSchema {
 
     static final Field AMBIENT = section("ambient_wind", Presence.DEFAULTED,
             "The large-scale wind, uniform in height, in meteorological convention. The linear model uses its cross-shore "
-                    + "component as the uniform basic-state flow U (Doppler shift); an alongshore component is added to v unchanged.",
+                    + "component as the uniform basic-state flow U (Doppler shift); an alongshore component is added to v unchanged. "
+                    + "The nonlinear model takes it as the geostrophic wind: it holds above the boundary layer, while surface drag "
+                    + "slows and turns the wind near the ground (more over rough land than over water).",
             num("speed_m_per_s", "m/s", 0, 40, 0.0, "Wind speed."),
             new Field("from_deg", new Schema.Num("deg", 0, 360, false, true), Presence.DEFAULTED, 0.0,
                     "Direction the wind blows FROM, clockwise from north (onshore on a coast with bearing_land_to_sea_deg B is from B)."));
@@ -91,15 +96,29 @@ public final class ScenarioSchema {
                                     "Potential-temperature gradient above the mixed layer. Omitted: N^2 theta_s / g from the atmosphere section.")),
                             num("entrainment_ratio", "", 0, 1, 0.2, "A in the zero-order-jump growth (0.2 usual; 0 is encroachment)."),
                             pos("initial_depth_m", "m", 0, 3000, 100.0, "Mixed-layer depth at sunrise."),
-                            pos("transition_half_width_km", "km", 0, 500, 5.0, "Half-width of the smoothed land-water step.")))),
-            Presence.DEFAULTED, null, "How the land is heated relative to the water: `shape: classic` (the analytic shape of linear theory) "
-                    + "or `shape: slab` (surface heat flux spread through a growing mixed layer). Omitted: classic with its defaults.");
+                            pos("transition_half_width_km", "km", 0, 500, 5.0, "Half-width of the smoothed land-water step.")),
+                    "energy_balance", List.of(
+                            num("cloud_fraction", "", 0, 1, 0.0, "Total cloud cover, 0 (clear) to 1 (overcast); reduces the sunshine "
+                                    + "(Kasten & Czeplak 1980) and changes the longwave balance."),
+                            choice("partition", List.of("bowen_ratio", "priestley_taylor"), "bowen_ratio",
+                                    "How the land's available energy splits into sensible and latent heat: by each land segment's "
+                                    + "bowen_ratio, or by the modified Priestley-Taylor form (de Bruin & Holtslag 1982) scaled by its "
+                                    + "soil_moisture_fraction.")))),
+            Presence.DEFAULTED, null, "How the land is heated relative to the water: `shape: classic` (the analytic shape of linear theory), "
+                    + "`shape: slab` (surface heat flux spread through a growing mixed layer) or `shape: energy_balance` (kind nonlinear "
+                    + "only: each segment's fluxes from sun, cloud, albedo and Bowen ratio; water from its sst_K). "
+                    + "kind nonlinear with classic: the same heating rate added to theta, no surface heat flux; with slab: the land "
+                    + "sensible heat flux is a half-sine of peak peak_flux_difference_W_per_m2 between sunrise and sunset (latent heat "
+                    + "from each segment's bowen_ratio, water from bulk formulas), entrainment_ratio and initial_depth_m set the "
+                    + "model's slab mixed layer, and lapse_above_K_per_km and transition_half_width_km are not used. "
+                    + "Omitted: classic with its defaults for kind linear, energy_balance for kind nonlinear.");
 
     static final Field PHYSICS = section("physics", Presence.DEFAULTED, "Switches and damping of the model equations.",
-            num("friction_per_s", "1/s", 0, 1e-2, 0.0, "Rayleigh friction alpha (0: inviscid). A few 1e-5 1/s keeps the response finite near 30 degrees latitude."),
+            num("friction_per_s", "1/s", 0, 1e-2, 0.0, "Rayleigh friction alpha (0: inviscid). A few 1e-5 1/s keeps the response finite near 30 degrees latitude. "
+                    + "kind nonlinear: applied to the departure from the geostrophic wind, on top of the model's turbulent mixing and surface drag."),
             optional(num("cooling_per_s", "1/s", 0, 1e-2, null, "Newtonian cooling rate. Omitted: equal to friction_per_s.")),
-            flag("hydrostatic", true, "true: hydrostatic equations; false: keep the non-hydrostatic term."),
-            integer("harmonics", 1, 128, 24L, "Number of diurnal time harmonics kept (1 is a pure sinusoid)."));
+            flag("hydrostatic", true, "true: hydrostatic equations; false: keep the non-hydrostatic term. kind linear only (the nonlinear model is always non-hydrostatic)."),
+            integer("harmonics", 1, 128, 24L, "Number of diurnal time harmonics kept (1 is a pure sinusoid). kind linear only."));
 
     static final Field SITES = new Field("sites", new ListOf(new Section(List.of(
             text("name", null, "Site label (unique)."),
@@ -127,8 +146,10 @@ public final class ScenarioSchema {
             NOISE);
 
     static final Field OUTPUT = section("output", Presence.DEFAULTED, "Times and levels used for the diagnostics, plots and summary.",
-            num("start_h", "h", 0, 48, 0.0, "First output time, local clock hours."),
-            num("end_h", "h", 0, 48, 24.0, "Last output time, local clock hours (more than 24 reaches into the next day)."),
+            num("start_h", "h", 0, 48, 0.0, "First output time, local clock hours. kind nonlinear: the model starts from rest at the "
+                    + "earlier of output.start_h and flights.start_h (a later start is a cheaper run)."),
+            num("end_h", "h", 0, 48, 24.0, "Last output time, local clock hours (more than 24 reaches into the next day). kind nonlinear: "
+                    + "the model runs to the later of output.end_h and the end of the last ascent."),
             pos("step_min", "min", 0, 360, 15.0, "Output interval."),
             num("near_surface_m", "m", 0, 1000, 10.0, "Height of the near-surface wind used for onset, arrival and the time-distance section."),
             pos("onshore_threshold_m_per_s", "m/s", 0, 20, 0.5,
@@ -138,6 +159,7 @@ public final class ScenarioSchema {
     public static final Section ROOT = new Section(List.of(
             text("name", null, "Short identifier of the scenario (used in file names and tables)."),
             text("description", null, "What the scenario shows or which hypothesis it tests."),
-            choice("kind", List.of("linear", "nonlinear"), "linear", "Which model runs it. Only linear runs in this version."),
+            choice("kind", List.of("linear", "nonlinear"), "linear", "Which model runs it: linear (the spectral linear model, periodic in time, seconds) or nonlinear (the 2D "
+                    + "non-hydrostatic model with boundary-layer physics, run forward from rest, tens of seconds to minutes)."),
             COAST, SURFACE, GRID, ATMOSPHERE, AMBIENT, HEATING, PHYSICS, SITES, FLIGHTS, OUTPUT));
 }

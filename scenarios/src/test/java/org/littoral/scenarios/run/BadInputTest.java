@@ -122,8 +122,17 @@ class BadInputTest {
     }
 
     @Test
-    void aNonlinearScenarioSaysTheModelIsNotYetAvailable() throws Exception {
-        assertOneLineError(runWith(GOOD + "kind: nonlinear\n"), "nonlinear model is not yet available", "use kind: linear");
+    void aNonlinearScenarioWithABadAmbientKeyGetsOneLine() throws Exception {
+        String yaml = GOOD.replace("points: 256", "points: 400\n  spacing_km: 1") + "kind: nonlinear\nambient_wind:\n  speed_m_per_s: 3\n"
+                + "  direction_from_deg: 90\n";
+        assertOneLineError(runWith(yaml), "case.yaml:14:3: unknown key 'ambient_wind.direction_from_deg'",
+                "valid keys in 'ambient_wind': speed_m_per_s, from_deg");
+    }
+
+    @Test
+    void aNonlinearScenarioWithAnAmbientSpeedOutOfRangeGetsOneLine() throws Exception {
+        String yaml = GOOD.replace("points: 256", "points: 400\n  spacing_km: 1") + "kind: nonlinear\nambient_wind:\n  speed_m_per_s: 45\n";
+        assertOneLineError(runWith(yaml), "case.yaml:13:18: ambient_wind.speed_m_per_s = 45 is out of range", "0 to 40 m/s");
     }
 
     @Test

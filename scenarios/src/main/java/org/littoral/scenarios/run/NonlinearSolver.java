@@ -1,0 +1,52 @@
+package org.littoral.scenarios.run;
+
+import java.util.Locale;
+import org.littoral.model.nonlinear.ModelBlowUpException;
+import org.littoral.model.nonlinear.NonlinearConfig;
+import org.littoral.model.nonlinear.NonlinearModel;
+import org.littoral.model.nonlinear.NonlinearSolution;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.scenario.Scenario;
+
+/**
+ * Runs the nonlinear 2D model on a scenario ({@link Scenario#toNonlinearConfig()}), together with its
+ * far-field reference ({@link Scenario#toNonlinearFarFieldConfig()}: a few columns of the inland surface,
+ * a few per cent of the cost), against which the run pipeline measures the breeze. A blow-up becomes one
+ * line naming the local time, the place and what to change in the scenario.
+ */
+final class NonlinearSolver {
+    private NonlinearSolver() {
+    }
+
+    static FarFieldSolution solve(Scenario scenario) {
+        NonlinearConfig main;
+        NonlinearConfig far;
+        try {
+            main = scenario.toNonlinearConfig();
+            far = scenario.toNonlinearFarFieldConfig();
+        } catch (IllegalArgumentException e) {
+            throw new UserInputException(scenario.source() + ": kind nonlinear: " + e.getMessage(), e);
+        }
+        NonlinearSolution ref;
+        NonlinearSolution sol;
+        try {
+            ref = NonlinearModel.run(far);
+            sol = NonlinearModel.run(main);
+        } catch (ModelBlowUpException e) {
+            throw blowUp(scenario, e);
+        }
+        return new FarFieldSolution(sol, ref, main.damping().lateralSpongeWidthM());
+    }
+
+    /** The one-line message of a blown-up run, in the scenario's terms (keys, local clock time). */
+    static UserInputException blowUp(Scenario scenario, ModelBlowUpException e) {
+        double clock = scenario.coast().clockHoursFromSolar(e.solarHours());
+        String msg = String.format(Locale.ROOT,
+                "%s: the nonlinear model became unstable at %s local time (%.2f solar h), x = %.1f km from the coast, z = %.0f m "
+                        + "(%s = %.4g); nothing of this run was written and files already in the output folder are kept; "
+                        + "try a finer grid.spacing_km or more grid.levels, a weaker heating (heating.*), a weaker ambient_wind.speed_m_per_s "
+                        + "or some physics.friction_per_s (e.g. 1e-5)",
+                scenario.source(), ScenarioRun.clock(clock), e.solarHours(), e.xKm(), e.zM(), e.variable(), e.value());
+        return new UserInputException(msg, e);
+    }
+}
