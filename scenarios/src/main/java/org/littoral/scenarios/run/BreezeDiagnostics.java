@@ -255,6 +255,16 @@ public final class BreezeDiagnostics {
     /** The vertical structure of the breeze in the column of the peak, from a snapshot at the peak time. */
     public static Circulation circulation(Snapshot s, double[] xM, double[] zM, Background bg, double clockH, double peakXM,
                                           double nearSurfaceM) {
+        double[] ambient = new double[zM.length];
+        for (int k = 0; k < zM.length; k++) {
+            ambient[k] = Background.interpolate(bg.zM(), bg.ambientUMPerS(), zM[k]);
+        }
+        return circulation(s, xM, zM, ambient, clockH, peakXM, nearSurfaceM);
+    }
+
+    /** As above, with the ambient cross-shore wind given at each level (a nonlinear run's far-field reference). */
+    public static Circulation circulation(Snapshot s, double[] xM, double[] zM, double[] ambientU, double clockH, double peakXM,
+                                          double nearSurfaceM) {
         int nx = xM.length;
         int i = FieldSections.bracket(xM, peakXM);
         if (Math.abs(xM[i + 1] - peakXM) < Math.abs(xM[i] - peakXM)) {
@@ -263,7 +273,7 @@ public final class BreezeDiagnostics {
         int nz = zM.length;
         double[] u = new double[nz];
         for (int k = 0; k < nz; k++) {
-            u[k] = s.uMPerS()[k * nx + i] - Background.interpolate(bg.zM(), bg.ambientUMPerS(), zM[k]);
+            u[k] = s.uMPerS()[k * nx + i] - ambientU[k];
         }
         int kStart = FieldSections.bracket(zM, nearSurfaceM);
         double depth = Double.NaN;
