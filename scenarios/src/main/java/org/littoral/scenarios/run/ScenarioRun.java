@@ -203,8 +203,9 @@ public final class ScenarioRun {
             area.put("from_km", round(fs.interiorFromM / 1000.0, 3));
             area.put("to_km", round(fs.interiorToM / 1000.0, 3));
             area.put("note", "peak, penetration and front are searched here, clear of the far-field sponges; the breeze wind is the run "
-                    + "minus its far-field reference (the same model over the inland surface without a coast); arrival inland is when "
-                    + "the onshore flow connected to the coast reaches the site");
+                    + "minus its far-field reference (the same model over the inland surface without a coast); arrival at an inland site "
+                    + "counts only once the onshore breeze connected to the coast has come within "
+                    + round(BreezeDiagnostics.FRONT_WINDOW_M / 1000.0, 1) + " km of it (convective gusts ahead of the front do not)");
         }
         ArrayNode sites = dg.putArray("sites");
         for (BreezeDiagnostics.SiteTiming s : d.sites()) {
