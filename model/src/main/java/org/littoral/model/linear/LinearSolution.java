@@ -22,7 +22,7 @@ import org.littoral.model.thermo.Thermo;
  * <p>Fast paths ({@link FieldSampling}):
  * <ul>
  * <li>{@link #columnAt(double, double)}: the first call at a given x sums the Fourier series at that x
- *   once for every harmonic (O(harmonics x nx x nz)) and caches the column harmonics (the last 32
+ *   once for every harmonic (O(harmonics x nx x nz)) and caches the column harmonics (the last 32 to 1024
  *   positions are kept); every later call at that x costs O(harmonics x nz). This is the path for
  *   virtual sites: sample a site at as many times as wanted for the price of one series sum.</li>
  * <li>{@link #crossShoreWindAtLevel(int, double)}: one level, one inverse FFT.</li>
@@ -34,7 +34,8 @@ import org.littoral.model.thermo.Thermo;
 public final class LinearSolution implements BreezeSolution, FieldSampling {
     private static final int FIELDS = 6;
     private static final int U = 0, V = 1, W = 2, B = 3, Q = 4, P = 5;
-    private static final int CACHE = 32;
+    /** Column cache bound: at least 32 positions, at most 1024, and about 64 MB of cached harmonics. */
+    private static final long CACHE_BYTES = 64L << 20;
 
     private final int nh, nx, nz;
     private final double[] x;
@@ -50,10 +51,11 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
     private final double[] p0R, p0I;
     private final double[][] qR, qI, qIntR, qIntI;
     private final double[] shiftR, shiftI;
+    private final int cachePositions;
     private final Map<Double, double[][]> columns = new LinkedHashMap<>(64, 0.75f, true) {
         @Override
         protected boolean removeEldestEntry(Map.Entry<Double, double[][]> e) {
-            return size() > CACHE;
+            return size() > cachePositions;
         }
     };
 
@@ -61,6 +63,8 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
         nh = b.nh;
         nx = b.nx;
         nz = b.nz;
+        long bytesPerPosition = 8L * nh * 2 * FIELDS * nz;
+        cachePositions = (int) Math.max(32, Math.min(1024, CACHE_BYTES / Math.max(1, bytesPerPosition)));
         x = b.cfg.xGrid().pointsM();
         z = b.z.clone();
         lengthM = b.cfg.xGrid().lengthM();

@@ -15,12 +15,8 @@ import org.littoral.model.coast.Coast;
 import org.littoral.scenarios.analysis.AnalysisChain;
 import org.littoral.scenarios.analysis.AnalysisResult;
 import org.littoral.scenarios.analysis.AnalysisSettings;
-import org.littoral.scenarios.analysis.SiteDayResult;
-import org.littoral.scenarios.analysis.detect.ChangeCandidate;
+import org.littoral.scenarios.analysis.detect.CampaignSkill;
 import org.littoral.scenarios.analysis.detect.DetectionScore;
-import org.littoral.scenarios.analysis.detect.Passage;
-import org.littoral.scenarios.analysis.detect.PassageDetector;
-import org.littoral.scenarios.analysis.detect.PassageFinder;
 import org.littoral.scenarios.analysis.ingest.CsvTable;
 import org.littoral.scenarios.analysis.ingest.DayTableReader;
 import org.littoral.scenarios.cli.UserInputException;
@@ -124,7 +120,7 @@ public final class DemoCommand implements Callable<Integer> {
     }
 
     /** The campaign folder to read: the given one when it holds the files, else a fresh copy from the generator. */
-    static Path ensureData(Path given, Path fallback) throws IOException {
+    public static Path ensureData(Path given, Path fallback) throws IOException {
         if (Files.isRegularFile(given.resolve("coast.yaml")) && Files.isRegularFile(given.resolve("binned/profiles-binned.csv.gz"))
                 && Files.isRegularFile(given.resolve("truth/passages.csv")) && Files.isRegularFile(given.resolve("days.csv"))) {
             return given;
@@ -174,33 +170,19 @@ public final class DemoCommand implements Callable<Integer> {
     /** Hits and false detections against the campaign's answer key, per detector and for the combined passages. */
     static void skillTable(HtmlReport rep, AnalysisResult ar, AnalysisSettings s, Coast coast, Path truthCsv) {
         Map<String, double[]> truth = readTruth(truthCsv);
-        List<PassageDetector> dets = PassageFinder.detectors(s.detection);
-        DetectionScore[] per = new DetectionScore[dets.size() + 1];
-        java.util.Arrays.fill(per, new DetectionScore(0, 0, 0, 0));
-        for (SiteDayResult r : ar.siteDays()) {
-            double[] tr = truth.getOrDefault(r.siteDay().key(), new double[0]);
-            double[] t = r.siteDay().timeHours();
-            for (int k = 0; k < dets.size(); k++) {
-                double[] found = dets.get(k).detect(r.siteDay(), coast).stream().mapToDouble(ChangeCandidate::timeHours).toArray();
-                per[k] = per[k].plus(DetectionScore.score(tr, found, t));
-            }
-            double[] passages = r.passages().stream().mapToDouble(Passage::timeHours).toArray();
-            per[dets.size()] = per[dets.size()].plus(DetectionScore.score(tr, passages, t));
-        }
-        Table t = Table.of("detector", "true passages", "found within one flight interval", "hit rate %", "detections",
+        Table t = Table.of("detections scored", "true passages", "found within one flight interval", "hit rate %", "detections",
                 "false detections", "false %");
-        for (int k = 0; k <= dets.size(); k++) {
-            DetectionScore d = per[k];
-            t.row(k < dets.size() ? dets.get(k).name() : "passages (both detectors combined)", d.truths(), d.hits(),
-                    100 * d.hitRate(), d.detections(), d.falseDetections(), 100 * d.falseRate());
+        for (CampaignSkill.Row row : CampaignSkill.score(ar, s.detection, coast, truth)) {
+            DetectionScore d = row.score();
+            t.row(row.what(), d.truths(), d.hits(), 100 * d.hitRate(), d.detections(), d.falseDetections(), 100 * d.falseRate());
         }
         t.decimals("hit rate %", 0).decimals("false %", 0);
         rep.table("Detection skill on the INVENTED campaign against its answer key (truth/passages.csv): a true passage is found "
-                + "when a detection lies within one local flight interval of it; every other detection is false.", t);
+                + "when a detection lies within one local flight interval of it; every other detection is false. The true passages are breeze fronts, so the last row (passages that turn the wind onshore) is the one to judge by; the detectors' other change points (a veer, a speed change) are not claimed as breeze passages.", t);
     }
 
     /** The answer key: true passage times (local hours) per "day/site". */
-    static Map<String, double[]> readTruth(Path csv) {
+    public static Map<String, double[]> readTruth(Path csv) {
         CsvTable t = CsvTable.read(csv);
         Map<String, List<Double>> m = new LinkedHashMap<>();
         int day = t.column("day");
