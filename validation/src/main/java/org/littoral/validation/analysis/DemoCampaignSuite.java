@@ -65,10 +65,10 @@ public final class DemoCampaignSuite implements ValidationSuite {
                             "a detection that matches no true passage within one flight interval"));
                 } else {
                     // reported per detector (issue: figures per detector); judged only on the breeze passages
-                    out.add(new ValidationCase(id, SOURCE, "per detector: found %, false % (all change points; reported)",
-                            "reported", "-", String.format(Locale.ROOT, "%.0f %% found, %.0f %% false (%s)", 100 * d.hitRate(),
-                                    100 * d.falseRate(), counts), true, false,
-                            "change points that are not onshore turns (veers, speed changes) are not claimed as breeze passages"));
+                    out.add(new ValidationCase(id, SOURCE, "per detector: true passages found by any change point, % "
+                            + "(false % reported)", ">= 80 found", "-", String.format(Locale.ROOT, "%.0f %% found, %.0f %% false (%s)",
+                                    100 * d.hitRate(), 100 * d.falseRate(), counts), d.hitRate() >= 0.80, false,
+                            "each detector alone must find most fronts; its change points that are not onshore turns (veers, speed changes) are not claimed as breeze passages, so its false % is reported, not judged"));
                 }
             }
             return out;
