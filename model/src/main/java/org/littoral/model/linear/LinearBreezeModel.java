@@ -33,6 +33,8 @@ public final class LinearBreezeModel {
     private static final double NEGLIGIBLE_MODE = 1e-13;
     /** Nodes per afternoon mixed-layer depth when the slab forcing is resolved for the vertical solve. */
     private static final int SLAB_NODES_PER_DEPTH = 96;
+    /** Modes gathered before their levels are written out (at most; fewer when nx is smaller). */
+    private static final int MODE_BLOCK = 16;
 
     private LinearBreezeModel() {
     }
@@ -99,6 +101,14 @@ public final class LinearBreezeModel {
         double[] pzr = new double[nn];
         double[] pzi = new double[nn];
         double[] ex = new double[4];
+        // modes are solved one at a time but stored level-major (a[l * nx + kk]): results of MODE_BLOCK
+        // consecutive modes are gathered here and written out as contiguous runs (cache-friendly)
+        int mb = Math.min(MODE_BLOCK, nx); // both powers of two, so mb divides nx
+        double[] tpR = new double[mb * nz];
+        double[] tpI = new double[mb * nz];
+        double[] tuR = new double[mb * nz];
+        double[] tuI = new double[mb * nz];
+        boolean[] blockDone = new boolean[mb];
 
         LinearSolution.Builder b = new LinearSolution.Builder(cfg, nh, nx, nz, zOut);
         double[] q = new double[2];
@@ -115,6 +125,9 @@ public final class LinearBreezeModel {
             double w = heat.omega(h);
             double[] psR = b.psiR[h], psI = b.psiI[h], uR = b.uR[h], uI = b.uI[h];
             for (int kk = 0; kk < nx; kk++) {
+                if (kk % mb == 0 && kk > 0) {
+                    flushBlock(kk - mb, blockDone, nx, nz, tpR, tpI, tuR, tuI, psR, psI, uR, uI);
+                }
                 if (kk == nx / 2) {
                     continue;
                 }
@@ -198,30 +211,50 @@ public final class LinearBreezeModel {
                     // source amplitude at z = 0 times c
                     double sR = cR * qr - cI * qi;
                     double sI = cR * qi + cI * qr;
+                    int off = (kk % mb) * nz;
                     for (int l = 0; l < nz; l++) {
                         VerticalGreenSolver.exponentialSource(a, mr, mi, zOut[l], ex);
-                        int idx = l * nx + kk;
-                        psR[idx] = sR * ex[0] - sI * ex[1];
-                        psI[idx] = sR * ex[1] + sI * ex[0];
-                        uR[idx] = sR * ex[2] - sI * ex[3];
-                        uI[idx] = sR * ex[3] + sI * ex[2];
+                        tpR[off + l] = sR * ex[0] - sI * ex[1];
+                        tpI[off + l] = sR * ex[1] + sI * ex[0];
+                        tuR[off + l] = sR * ex[2] - sI * ex[3];
+                        tuI[off + l] = sR * ex[3] + sI * ex[2];
                     }
                 } else {
                     solver.solve(mr, mi, nodeFr[h], nodeFi[h], pr, pi, pzr, pzi);
+                    int off = (kk % mb) * nz;
                     for (int l = 0; l < nz; l++) {
                         int j = outNode[l];
-                        int idx = l * nx + kk;
-                        psR[idx] = cR * pr[j] - cI * pi[j];
-                        psI[idx] = cR * pi[j] + cI * pr[j];
-                        uR[idx] = cR * pzr[j] - cI * pzi[j];
-                        uI[idx] = cR * pzi[j] + cI * pzr[j];
+                        tpR[off + l] = cR * pr[j] - cI * pi[j];
+                        tpI[off + l] = cR * pi[j] + cI * pr[j];
+                        tuR[off + l] = cR * pzr[j] - cI * pzi[j];
+                        tuI[off + l] = cR * pzi[j] + cI * pzr[j];
                     }
                 }
+                blockDone[kk % mb] = true;
             }
+            flushBlock(nx - mb, blockDone, nx, nz, tpR, tpI, tuR, tuI, psR, psI, uR, uI);
         }
         Background bg = Background.constantN(zOut, cfg.surfaceThetaK(), cfg.buoyancyFrequencyPerS(), cfg.surfaceMixingRatio(),
                 gammaQ, cfg.surfacePressurePa(), uAmb, 0.0);
         return b.build(bg);
+    }
+
+    /** Writes the solved modes first .. first + done.length - 1 (those marked done) to the level-major arrays and clears the marks. */
+    private static void flushBlock(int first, boolean[] done, int nx, int nz, double[] tpR, double[] tpI, double[] tuR,
+                                   double[] tuI, double[] psR, double[] psI, double[] uR, double[] uI) {
+        for (int l = 0; l < nz; l++) {
+            int row = l * nx + first;
+            for (int bk = 0; bk < done.length; bk++) {
+                if (done[bk]) {
+                    int t = bk * nz + l;
+                    psR[row + bk] = tpR[t];
+                    psI[row + bk] = tpI[t];
+                    uR[row + bk] = tuR[t];
+                    uI[row + bk] = tuI[t];
+                }
+            }
+        }
+        java.util.Arrays.fill(done, false);
     }
 
     /**

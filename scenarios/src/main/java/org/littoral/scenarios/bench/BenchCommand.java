@@ -18,6 +18,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("analysis", new AnalysisBenchmark());
         m.put("sweep", new org.littoral.scenarios.sweep.SweepBenchmark());
         m.put("nonlinear", new NonlinearBenchmark());
+        m.put("linear", new LinearBenchmark());
         return m;
     }
 
