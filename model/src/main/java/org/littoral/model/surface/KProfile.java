@@ -27,6 +27,7 @@ public final class KProfile {
     private final double obukhovLengthM;
     private final double minimumM2s;
     private final boolean convective;
+    private final double mixedVelocityMs;
 
     private KProfile(double depthM, double frictionVelocityMs, double convectiveVelocityMs, double obukhovLengthM,
                      double minimumM2s, boolean convective) {
@@ -36,6 +37,8 @@ public final class KProfile {
         this.obukhovLengthM = obukhovLengthM;
         this.minimumM2s = minimumM2s;
         this.convective = convective;
+        // the convective velocity scale is height-independent: evaluated once (cube root) per profile
+        this.mixedVelocityMs = convective ? mixedLayerVelocityScaleMs(frictionVelocityMs, convectiveVelocityMs) : 0.0;
     }
 
     /**
@@ -85,7 +88,7 @@ public final class KProfile {
     /** Velocity scale w_s at height z. */
     public double velocityScaleMs(double zM) {
         if (convective) {
-            return mixedLayerVelocityScaleMs(frictionVelocityMs, convectiveVelocityMs);
+            return mixedVelocityMs;
         }
         double phi = 1.0 + STABLE_SLOPE * zM / obukhovLengthM; // L > 0 or infinite here
         return frictionVelocityMs / phi;
