@@ -164,6 +164,37 @@ final class ComplexFft {
                 }
             }
             case 4 -> {
+                if (lPrev == 1) {
+                    // first pass: every twiddle factor is 1, so the butterflies need no multiplications
+                    for (int q = 0; q < r; q++) {
+                        int out = q * 4;
+                        double x0r = aRe[q];
+                        double x0i = aIm[q];
+                        double x1r = aRe[q + r];
+                        double x1i = aIm[q + r];
+                        double x2r = aRe[q + 2 * r];
+                        double x2i = aIm[q + 2 * r];
+                        double x3r = aRe[q + 3 * r];
+                        double x3i = aIm[q + 3 * r];
+                        double s02r = x0r + x2r;
+                        double s02i = x0i + x2i;
+                        double d02r = x0r - x2r;
+                        double d02i = x0i - x2i;
+                        double s13r = x1r + x3r;
+                        double s13i = x1i + x3i;
+                        double d13r = x1r - x3r;
+                        double d13i = x1i - x3i;
+                        bRe[out] = s02r + s13r;
+                        bIm[out] = s02i + s13i;
+                        bRe[out + 1] = d02r + d13i;
+                        bIm[out + 1] = d02i - d13r;
+                        bRe[out + 2] = s02r - s13r;
+                        bIm[out + 2] = s02i - s13i;
+                        bRe[out + 3] = d02r - d13i;
+                        bIm[out + 3] = d02i + d13r;
+                    }
+                    return;
+                }
                 for (int q = 0; q < r; q++) {
                     int out = q * l;
                     for (int j = 0; j < lPrev; j++) {

@@ -78,7 +78,8 @@ public final class NonlinearModel {
     private final double[] tth;
     private final double[] tq;
     private final double[] chi;
-    private final double[] phi;
+    /** Kinematic pressure p' / rho_0 of the last projection is chi * phiScale (0 before the first step). */
+    private double phiScale;
     // row and column work buffers
     private final double[] fx;
     /** Periodic row copies with two ghost cells each side: pad[i + 2] = row[i]. */
@@ -192,7 +193,6 @@ public final class NonlinearModel {
         tth = new double[nc];
         tq = new double[nc];
         chi = new double[nc];
-        phi = new double[nc];
         fx = new double[nx + 1];
         padA = new double[nx + 4];
         padB = new double[nx + 4];
@@ -401,7 +401,7 @@ public final class NonlinearModel {
             }
         }
         project(1.0);
-        java.util.Arrays.fill(phi, 0.0);
+        phiScale = 0.0; // no pressure before the first step
     }
 
     // ---------------------------------------------------------------- step control
@@ -478,20 +478,23 @@ public final class NonlinearModel {
         }
     }
 
-    /** Removes the divergence of (u, w); phi = chi / dtEff is the kinematic pressure p' / rho_0. */
+    /** Removes the divergence of (u, w); chi / dtEff is the kinematic pressure p' / rho_0. */
     private void project(double dtEff) {
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             double idz = 1.0 / g.dzf[k];
-            for (int i = 0; i < nx; i++) {
-                chi[o + i] = (u[o + g.ip1[i]] - u[o + i]) * invDx + (w[o + nx + i] - w[o + i]) * idz;
+            for (int i = 0; i < nx - 1; i++) {
+                chi[o + i] = (u[o + i + 1] - u[o + i]) * invDx + (w[o + nx + i] - w[o + i]) * idz;
             }
+            int e = o + nx - 1;
+            chi[e] = (u[o] - u[e]) * invDx + (w[e + nx] - w[e]) * idz;
         }
         poisson.solve(chi, chi);
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
-            for (int i = 0; i < nx; i++) {
-                u[o + i] -= (chi[o + i] - chi[o + g.im1[i]]) * invDx;
+            u[o] -= (chi[o] - chi[o + nx - 1]) * invDx;
+            for (int i = 1; i < nx; i++) {
+                u[o + i] -= (chi[o + i] - chi[o + i - 1]) * invDx;
             }
         }
         for (int k = 1; k < nz; k++) {
@@ -501,10 +504,8 @@ public final class NonlinearModel {
                 w[o + i] -= (chi[o + i] - chi[o - nx + i]) * idz;
             }
         }
-        double inv = 1.0 / dtEff;
-        for (int n = 0; n < chi.length; n++) {
-            phi[n] = chi[n] * inv;
-        }
+        // phi = chi / dtEff is only read when a snapshot is stored: keep chi and the factor
+        phiScale = 1.0 / dtEff;
     }
 
     // ---------------------------------------------------------------- explicit tendencies
@@ -1298,7 +1299,7 @@ public final class NonlinearModel {
                 fw[n] = (float) (0.5 * (w[n] + w[n + nx]));
                 ft[n] = (float) th[n];
                 fq[n] = (float) q[n];
-                fp[n] = (float) (rho0[k] * phi[n]);
+                fp[n] = phiScale == 0.0 ? 0.0f : (float) (rho0[k] * (chi[n] * phiScale));
             }
         }
         for (int i = 0; i < nx; i++) {

@@ -21,6 +21,9 @@ final class PoissonSolver {
     private final double[] cPrime;
     private final double[] invPivot;
     private final double[] sub;
+    /** The same factors as [k * nh + m]. */
+    private final double[] ipT;
+    private final double[] cpT;
     private final double[] sRe;
     private final double[] sIm;
     private final double[] rowRe;
@@ -62,6 +65,14 @@ final class PoissonSolver {
                 cPrime[m * nz + k] = c[k] / piv;
             }
         }
+        this.ipT = new double[nz * nh];
+        this.cpT = new double[nz * nh];
+        for (int m = 0; m < nh; m++) {
+            for (int k = 0; k < nz; k++) {
+                ipT[k * nh + m] = invPivot[m * nz + k];
+                cpT[k * nh + m] = cPrime[m * nz + k];
+            }
+        }
         this.sRe = new double[nz * nh];
         this.sIm = new double[nz * nh];
         this.rowRe = new double[nx];
@@ -98,52 +109,53 @@ final class PoissonSolver {
                 }
             }
         }
-        // tridiagonal solve in z for each wavenumber
+        // tridiagonal solve in z for each wavenumber; level loops over wavenumbers (contiguous, and the
+        // recurrences of different wavenumbers run side by side)
         for (int m = 0; m < nh; m++) {
-            int base = m * nz;
-            double yr = (m == 0 ? 0.0 : sRe[m]) * invPivot[base];
-            double yi = (m == 0 ? 0.0 : sIm[m]) * invPivot[base];
-            sRe[m] = yr;
-            sIm[m] = yi;
-            for (int k = 1; k < nz; k++) {
-                double a = sub[k];
-                yr = (sRe[k * nh + m] - a * yr) * invPivot[base + k];
-                yi = (sIm[k * nh + m] - a * yi) * invPivot[base + k];
-                sRe[k * nh + m] = yr;
-                sIm[k * nh + m] = yi;
+            sRe[m] = (m == 0 ? 0.0 : sRe[m]) * ipT[m];
+            sIm[m] = (m == 0 ? 0.0 : sIm[m]) * ipT[m];
+        }
+        for (int k = 1; k < nz; k++) {
+            int o = k * nh;
+            double a = sub[k];
+            for (int m = 0; m < nh; m++) {
+                sRe[o + m] = (sRe[o + m] - a * sRe[o - nh + m]) * ipT[o + m];
+                sIm[o + m] = (sIm[o + m] - a * sIm[o - nh + m]) * ipT[o + m];
             }
-            for (int k = nz - 2; k >= 0; k--) {
-                sRe[k * nh + m] -= cPrime[base + k] * sRe[(k + 1) * nh + m];
-                sIm[k * nh + m] -= cPrime[base + k] * sIm[(k + 1) * nh + m];
+        }
+        for (int k = nz - 2; k >= 0; k--) {
+            int o = k * nh;
+            for (int m = 0; m < nh; m++) {
+                sRe[o + m] -= cpT[o + m] * sRe[o + nh + m];
+                sIm[o + m] -= cpT[o + m] * sIm[o + nh + m];
             }
         }
         // inverse transforms, two levels at a time: Z = A + i B with Hermitian A, B
         double inv = 1.0 / nx;
         for (int k = 0; k < nz; k += 2) {
             boolean pair = k + 1 < nz;
-            for (int m = 0; m < nx; m++) {
-                double ar;
-                double ai;
-                double br = 0;
-                double bi = 0;
-                if (m < nh) {
-                    ar = sRe[k * nh + m];
-                    ai = sIm[k * nh + m];
-                    if (pair) {
-                        br = sRe[(k + 1) * nh + m];
-                        bi = sIm[(k + 1) * nh + m];
-                    }
-                } else {
-                    int mm = nx - m;
-                    ar = sRe[k * nh + mm];
-                    ai = -sIm[k * nh + mm];
-                    if (pair) {
-                        br = sRe[(k + 1) * nh + mm];
-                        bi = -sIm[(k + 1) * nh + mm];
-                    }
+            int oa = k * nh;
+            int ob = (k + 1) * nh;
+            if (pair) {
+                for (int m = 0; m < nh; m++) {
+                    rowRe[m] = sRe[oa + m] - sIm[ob + m];
+                    rowIm[m] = sIm[oa + m] + sRe[ob + m];
                 }
-                rowRe[m] = ar - bi;
-                rowIm[m] = ai + br;
+                for (int m = nh; m < nx; m++) {
+                    int mm = nx - m;
+                    rowRe[m] = sRe[oa + mm] - -sIm[ob + mm];
+                    rowIm[m] = -sIm[oa + mm] + sRe[ob + mm];
+                }
+            } else {
+                for (int m = 0; m < nh; m++) {
+                    rowRe[m] = sRe[oa + m] - 0.0;
+                    rowIm[m] = sIm[oa + m] + 0.0;
+                }
+                for (int m = nh; m < nx; m++) {
+                    int mm = nx - m;
+                    rowRe[m] = sRe[oa + mm] - 0.0;
+                    rowIm[m] = -sIm[oa + mm] + 0.0;
+                }
             }
             fft.inverse(rowRe, rowIm);
             for (int i = 0; i < nx; i++) {
