@@ -84,6 +84,12 @@ public final class NonlinearModel {
     private final double[] fx;
     /** Periodic row copies with two ghost cells each side: pad[i + 2] = row[i]. */
     private final double[] padA;
+    /** Row copies shifted in x (see {@link #shift}) and the shifted flux row. */
+    private final double[] sh1;
+    private final double[] sh2;
+    private final double[] sh3;
+    private final double[] sh4;
+    private final double[] fxs;
     private final double[] padB;
     /** padSlope[i + 1] = limited slope of cell i; padSlope[0] = slope of cell nx - 1. */
     private final double[] padSlope;
@@ -195,6 +201,11 @@ public final class NonlinearModel {
         chi = new double[nc];
         fx = new double[nx + 1];
         padA = new double[nx + 4];
+        sh1 = new double[nx];
+        sh2 = new double[nx];
+        sh3 = new double[nx];
+        sh4 = new double[nx];
+        fxs = new double[nx];
         padB = new double[nx + 4];
         padSlope = new double[nx + 1];
         fzBot = new double[nx];
@@ -645,20 +656,44 @@ public final class NonlinearModel {
         }
     }
 
+    /*
+     * The momentum advection loops below read every neighbour from a row copy at the same index
+     * (sh1..sh4, fxs): loops of that form are compiled to vector instructions, loops with shifted
+     * indices into one array are not.
+     */
+
+    /** out[i] = s[o + (i + d) mod nx] for one row and a shift |d| &lt;= 2. */
+    private void shift(double[] s, int o, int d, double[] out) {
+        if (d > 0) {
+            System.arraycopy(s, o + d, out, 0, nx - d);
+            System.arraycopy(s, o, out, nx - d, d);
+        } else {
+            int e = -d;
+            System.arraycopy(s, o + nx - e, out, 0, e);
+            System.arraycopy(s, o, out, e, nx - e);
+        }
+    }
+
     /** Advection of a centred momentum component (v) with the third-order flux. */
     private void advectCentre3(double[] s, double[] ts) {
-        double[] pr = padA;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
-            padRow(s, o, pr);
+            shift(s, o, -2, sh1);
+            shift(s, o, -1, sh2);
+            shift(s, o, 1, sh3);
             // fx[i]: flux through the west face of cell i
-            for (int i = 0; i < nx; i++) {
-                double a = lin ? ug : u[o + i];
-                fx[i] = flux3(a, pr[i], pr[i + 1], pr[i + 2], pr[i + 3]);
+            if (lin) {
+                for (int i = 0; i < nx; i++) {
+                    fx[i] = flux3(ug, sh1[i], sh2[i], s[o + i], sh3[i]);
+                }
+            } else {
+                for (int i = 0; i < nx; i++) {
+                    fx[i] = flux3(u[o + i], sh1[i], sh2[i], s[o + i], sh3[i]);
+                }
             }
-            fx[nx] = fx[0];
+            shift(fx, 0, 1, fxs);
             for (int i = 0; i < nx; i++) {
-                ts[o + i] -= (fx[i + 1] - fx[i]) * invDx;
+                ts[o + i] -= (fxs[i] - fx[i]) * invDx;
             }
         }
         if (lin) {
@@ -668,14 +703,17 @@ public final class NonlinearModel {
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             int kf = k + 1; // top interface of layer k
-            if (kf < nz) {
-                boolean full = kf >= 2 && kf <= nz - 2;
+            int of = kf * nx;
+            if (kf >= 2 && kf <= nz - 2) {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    fzTop[i] = flux3(w[of + i], s[n - nx], s[n], s[n + nx], s[n + 2 * nx]);
+                }
+            } else if (kf < nz) {
                 double wl = g.wLo[kf];
                 for (int i = 0; i < nx; i++) {
-                    double a = w[kf * nx + i];
                     int n = o + i;
-                    fzTop[i] = full ? flux3(a, s[n - nx], s[n], s[n + nx], s[n + 2 * nx])
-                            : a * (wl * s[n] + (1.0 - wl) * s[n + nx]);
+                    fzTop[i] = w[of + i] * (wl * s[n] + (1.0 - wl) * s[n + nx]);
                 }
             } else {
                 java.util.Arrays.fill(fzTop, 0.0);
@@ -689,19 +727,25 @@ public final class NonlinearModel {
     }
 
     private void advectU() {
-        int[] im = g.im1;
-        double[] pr = padA;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
-            padRow(u, o, pr);
-            // fx[i + 1]: flux through cell centre i, the east side of the u control volume around face i
-            for (int i = 0; i < nx; i++) {
-                double a = lin ? ug : 0.5 * (pr[i + 2] + pr[i + 3]);
-                fx[i + 1] = flux3(a, pr[i + 1], pr[i + 2], pr[i + 3], pr[i + 4]);
+            shift(u, o, -1, sh1);
+            shift(u, o, 1, sh2);
+            shift(u, o, 2, sh3);
+            // fx[i]: flux through cell centre i, the east side of the u control volume around face i
+            if (lin) {
+                for (int i = 0; i < nx; i++) {
+                    fx[i] = flux3(ug, sh1[i], u[o + i], sh2[i], sh3[i]);
+                }
+            } else {
+                for (int i = 0; i < nx; i++) {
+                    double a = 0.5 * (u[o + i] + sh2[i]);
+                    fx[i] = flux3(a, sh1[i], u[o + i], sh2[i], sh3[i]);
+                }
             }
-            fx[0] = fx[nx];
+            shift(fx, 0, -1, fxs);
             for (int i = 0; i < nx; i++) {
-                tu[o + i] -= (fx[i + 1] - fx[i]) * invDx;
+                tu[o + i] -= (fx[i] - fxs[i]) * invDx;
             }
         }
         if (lin) {
@@ -711,14 +755,22 @@ public final class NonlinearModel {
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             int kf = k + 1;
+            int of = kf * nx;
             if (kf < nz) {
-                boolean full = kf >= 2 && kf <= nz - 2;
+                shift(w, of, -1, sh1);
+            }
+            if (kf >= 2 && kf <= nz - 2) {
+                for (int i = 0; i < nx; i++) {
+                    double a = 0.5 * (sh1[i] + w[of + i]);
+                    int n = o + i;
+                    fzTop[i] = flux3(a, u[n - nx], u[n], u[n + nx], u[n + 2 * nx]);
+                }
+            } else if (kf < nz) {
                 double wl = g.wLo[kf];
                 for (int i = 0; i < nx; i++) {
-                    double a = 0.5 * (w[kf * nx + im[i]] + w[kf * nx + i]);
+                    double a = 0.5 * (sh1[i] + w[of + i]);
                     int n = o + i;
-                    fzTop[i] = full ? flux3(a, u[n - nx], u[n], u[n + nx], u[n + 2 * nx])
-                            : a * (wl * u[n] + (1.0 - wl) * u[n + nx]);
+                    fzTop[i] = a * (wl * u[n] + (1.0 - wl) * u[n + nx]);
                 }
             } else {
                 java.util.Arrays.fill(fzTop, 0.0);
@@ -732,27 +784,28 @@ public final class NonlinearModel {
     }
 
     private void advectW() {
-        double[] pr = padA;
-        double[] pl = padB;
-        double[] pu = padSlope; // u of the level above at i + 1, as pu[i]
         for (int k = 1; k < nz; k++) {
             int o = k * nx;
             double wl = g.wLo[k];
-            padRow(w, o, pr);
-            if (!lin) {
-                System.arraycopy(u, o - nx + 1, pl, 0, nx - 1);
-                pl[nx - 1] = u[o - nx];
-                System.arraycopy(u, o + 1, pu, 0, nx - 1);
-                pu[nx - 1] = u[o];
+            shift(w, o, -1, sh1);
+            shift(w, o, 1, sh2);
+            shift(w, o, 2, sh3);
+            // fx[i]: flux through x_{i+1/2} at interface k
+            if (lin) {
+                for (int i = 0; i < nx; i++) {
+                    fx[i] = flux3(ug, sh1[i], w[o + i], sh2[i], sh3[i]);
+                }
+            } else {
+                shift(u, o - nx, 1, sh4);
+                shift(u, o, 1, fxs);
+                for (int i = 0; i < nx; i++) {
+                    double a = wl * sh4[i] + (1.0 - wl) * fxs[i];
+                    fx[i] = flux3(a, sh1[i], w[o + i], sh2[i], sh3[i]);
+                }
             }
+            shift(fx, 0, -1, fxs);
             for (int i = 0; i < nx; i++) {
-                // fx[i + 1]: flux through x_{i+1/2} at interface k
-                double a = lin ? ug : wl * pl[i] + (1.0 - wl) * pu[i];
-                fx[i + 1] = flux3(a, pr[i + 1], pr[i + 2], pr[i + 3], pr[i + 4]);
-            }
-            fx[0] = fx[nx];
-            for (int i = 0; i < nx; i++) {
-                tw[o + i] -= (fx[i + 1] - fx[i]) * invDx;
+                tw[o + i] -= (fx[i] - fxs[i]) * invDx;
             }
         }
         if (lin) {
@@ -765,11 +818,18 @@ public final class NonlinearModel {
         }
         for (int k = 1; k < nz; k++) {
             int o = k * nx;
-            boolean full = k + 2 <= nz;
-            for (int i = 0; i < nx; i++) {
-                int n = o + i;
-                double a = 0.5 * (w[n] + w[n + nx]);
-                fzTop[i] = full ? flux3(a, w[n - nx], w[n], w[n + nx], w[n + 2 * nx]) : a * a;
+            if (k + 2 <= nz) {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    double a = 0.5 * (w[n] + w[n + nx]);
+                    fzTop[i] = flux3(a, w[n - nx], w[n], w[n + nx], w[n + 2 * nx]);
+                }
+            } else {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    double a = 0.5 * (w[n] + w[n + nx]);
+                    fzTop[i] = a * a;
+                }
             }
             double idz = 1.0 / g.dzc[k];
             for (int i = 0; i < nx; i++) {
