@@ -535,14 +535,33 @@ public final class NonlinearModel {
         double alpha = cfg.damping().rayleighFrictionPerS();
         double alphaN = cfg.damping().newtonianCoolingPerS();
         boolean moist = cfg.switches().moistureBuoyancy();
+        // Coriolis and damping; a zero damping rate adds nothing, so its terms are skipped
+        boolean damped = alpha != 0.0;
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
-            for (int i = 0; i < nx; i++) {
-                int n = o + i;
-                tu[n] += f * (0.5 * (v[o + g.im1[i]] + v[n]) - vg) - alpha * (u[n] - ug);
-                tv[n] += -f * (0.5 * (u[n] + u[o + g.ip1[i]]) - ug) - alpha * (v[n] - vg);
-                tth[n] -= alphaN * (th[n] - th0[k]);
-                tq[n] -= alphaN * (q[n] - q0[k]);
+            shift(v, o, -1, sh1); // v of cell i - 1
+            shift(u, o, 1, sh2);  // u at the east face of cell i
+            if (damped) {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    tu[n] += f * (0.5 * (sh1[i] + v[n]) - vg) - alpha * (u[n] - ug);
+                    tv[n] += -f * (0.5 * (u[n] + sh2[i]) - ug) - alpha * (v[n] - vg);
+                }
+            } else {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    tu[n] += f * (0.5 * (sh1[i] + v[n]) - vg);
+                    tv[n] += -f * (0.5 * (u[n] + sh2[i]) - ug);
+                }
+            }
+            if (alphaN != 0.0) {
+                double t0k = th0[k];
+                double q0k = q0[k];
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    tth[n] -= alphaN * (th[n] - t0k);
+                    tq[n] -= alphaN * (q[n] - q0k);
+                }
             }
             if (lin) {
                 // linearised vertical advection of the basic state: -w d(theta_0)/dz, -w d(r_0)/dz
@@ -558,13 +577,25 @@ public final class NonlinearModel {
             double wl = g.wLo[k];
             double bl = Thermo.G * wl / th0[k - 1];
             double bh = Thermo.G * (1.0 - wl) / th0[k];
-            for (int i = 0; i < nx; i++) {
-                int n = o + i;
-                double b = bl * (th[n - nx] - th0[k - 1]) + bh * (th[n] - th0[k]);
-                if (moist) {
-                    b += Thermo.G * VIRTUAL_FACTOR * (wl * (q[n - nx] - q0[k - 1]) + (1.0 - wl) * (q[n] - q0[k]));
+            double tLo = th0[k - 1];
+            double tHi = th0[k];
+            if (moist) {
+                double qLo = q0[k - 1];
+                double qHi = q0[k];
+                double gv = Thermo.G * VIRTUAL_FACTOR;
+                double wh = 1.0 - wl;
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    double b = bl * (th[n - nx] - tLo) + bh * (th[n] - tHi);
+                    b += gv * (wl * (q[n - nx] - qLo) + wh * (q[n] - qHi));
+                    tw[n] += damped ? b - alpha * w[n] : b;
                 }
-                tw[n] += b - alpha * w[n];
+            } else {
+                for (int i = 0; i < nx; i++) {
+                    int n = o + i;
+                    double b = bl * (th[n - nx] - tLo) + bh * (th[n] - tHi);
+                    tw[n] += damped ? b - alpha * w[n] : b;
+                }
             }
         }
         if (cfg.forcing() instanceof Forcing.PrescribedHeating ph) {
@@ -577,9 +608,9 @@ public final class NonlinearModel {
         }
     }
 
-    /** Third-order upwind-biased flux, Wicker &amp; Skamarock (2002) eq. 4: 4th-order centred plus |a| dissipation. */
     private static final double ONE_TWELFTH = 1.0 / 12.0;
 
+    /** Third-order upwind-biased flux, Wicker &amp; Skamarock (2002) eq. 4: 4th-order centred plus |a| dissipation. */
     private static double flux3(double a, double fm1, double f0, double fp1, double fp2) {
         // one multiplication by 1/12 rather than two divisions by 12: a round-off-level difference that
         // lets the flux loops run as vector instructions
