@@ -101,7 +101,7 @@ public final class DemoCommand implements Callable<Integer> {
                 + "passage detectors (PELT change points on the wind and a multivariate change point over several levels and "
                 + "variables), response metrics, composites and group statistics. Full tables: observe/.");
         skillTable(rep, ar, settings, coast, dataDir.resolve("truth").resolve("passages.csv"));
-        AnalysisReport.addSections(rep, ar, o.qc(), figs);
+        AnalysisReport.addSections(rep, ar, o.qc(), figs, true);
 
         p.step("site and cadence plan for the invented coast (" + PLAN + ")");
         PlanSpec plan = PlanFile.load(PLAN);
@@ -150,9 +150,15 @@ public final class DemoCommand implements Callable<Integer> {
         rep.paragraph(sr.spec().description() + ". " + sr.outcome().members() + " members (" + sr.outcome().failed()
                 + " failed). Each member is one run of the model; the comparison table and the member runs are in sweep/.");
         for (Path f : sr.figures()) {
-            rep.figurePng(Files.readAllBytes(f), 900, captionOf(f.getFileName().toString()));
+            byte[] png = Files.readAllBytes(f);
+            rep.figurePng(png, pngWidth(png), captionOf(f.getFileName().toString()));
         }
         rep.table("The sweep's comparison table (sweep/comparison.csv has every column).", sr.table().toTable());
+    }
+
+    /** Width in pixels from a PNG's IHDR chunk (bytes 16-19, big-endian). */
+    static int pngWidth(byte[] png) {
+        return ((png[16] & 0xff) << 24) | ((png[17] & 0xff) << 16) | ((png[18] & 0xff) << 8) | (png[19] & 0xff);
     }
 
     static String captionOf(String file) {
@@ -162,7 +168,8 @@ public final class DemoCommand implements Callable<Integer> {
                     + "per ambient direction (breeze type).";
             case "penetration-vs-ambient.png" -> "Maximum inland penetration of the onshore flow against the ambient wind speed, "
                     + "one line per ambient direction (breeze type).";
-            case "changes-by-type.png" -> "Changes after the onshore flow arrives at the sites, by breeze type.";
+            case "post-passage-by-type.png" -> "Changes at the sites in the two hours after the onshore flow arrives, by breeze type "
+                    + "(members grouped by the ambient wind relative to the coast).";
             default -> "Sweep comparison: " + base + ".";
         };
     }

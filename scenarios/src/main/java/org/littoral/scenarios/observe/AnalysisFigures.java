@@ -86,7 +86,8 @@ public final class AnalysisFigures {
                         .color(Palette.qualitative(colour));
                 b.series(panels.size() % DAYS_PER_GRID == 0 ? line : line.hideInLegend());
                 for (Passage p : d.passages()) {
-                    b.event(p.timeHours(), shortName(d.siteDay().site()) + (p.turnsOnshore() ? " on" : ""));
+                    // label only the breeze passages (onshore turns); other changes are unlabelled dashed lines
+                    b.event(p.timeHours(), p.turnsOnshore() ? shortName(d.siteDay().site()) : "");
                 }
             }
             panels.add(b.build());
@@ -101,8 +102,8 @@ public final class AnalysisFigures {
             out.add(new Captioned("wind-direction-days" + (panels.size() > DAYS_PER_GRID ? "-" + part : "") + ".png",
                     FigureGrid.of("Wind direction " + layer.label() + " by day" + suffix, chunk, DAY_COLUMNS),
                     String.format(Locale.ROOT, "Wind direction (where the wind blows from) averaged over %s above ground against "
-                            + "local time, one panel per day%s, one colour per site (%s). Dashed vertical lines: detected passages, "
-                            + "labelled by site and 'on' when the passage turns the wind into the onshore sector. Dashed horizontal "
+                            + "local time, one panel per day%s, one colour per site (%s). Dashed vertical lines: detected passages; "
+                            + "those that turn the wind into the onshore sector (breeze fronts) are labelled by site. Dashed horizontal "
                             + "line: the onshore direction (from the sea, %.0f deg). Panel titles give the day's breeze type.",
                             layer.label(), suffix, String.join(", ", sites), onshoreFrom)));
         }
@@ -167,7 +168,7 @@ public final class AnalysisFigures {
                 .x("local time", "h").binWidth(0.5);
         int n = 0;
         for (Map.Entry<String, List<Double>> e : bySite.entrySet()) {
-            b.data(e.getKey() + " (n = " + e.getValue().size() + ")", toArray(e.getValue()));
+            b.data(e.getKey(), toArray(e.getValue()));
             n += e.getValue().size();
         }
         return java.util.Optional.of(new Captioned("passage-times.png", b.build(), "Distribution of the first passage that "

@@ -40,7 +40,7 @@ public final class AnalysisReport {
         rep.meta("analysed", what);
         rep.meta("coast", String.format(Locale.ROOT, "latitude %.2f deg, land-to-sea bearing %.0f deg", coast.latitudeDeg(),
                 coast.bearingLandToSeaDeg()));
-        addSections(rep, r, qc, figs);
+        addSections(rep, r, qc, figs, false);
         rep.cautions();
         Path html = out.resolve("report.html");
         rep.write(html);
@@ -49,7 +49,12 @@ public final class AnalysisReport {
     }
 
     /** Adds the analysis sections (summary, passages, figures, comparisons) to {@code rep}. */
-    public static void addSections(HtmlReport rep, AnalysisResult r, QcLog qc, List<AnalysisFigures.Captioned> figs) {
+    /**
+     * @param compact true for a larger report (the demo): only the onshore-turning passages and the comparisons
+     *                that stay significant after the Holm correction are tabled (the CSV files hold everything)
+     */
+    public static void addSections(HtmlReport rep, AnalysisResult r, QcLog qc, List<AnalysisFigures.Captioned> figs,
+                                   boolean compact) {
         long onshore = r.passages().stream().filter(Passage::turnsOnshore).count();
         rep.section("Passages found");
         rep.paragraph(String.format(Locale.ROOT, "%d site-days analysed; %d passages detected, %d of them turning the wind into "
@@ -60,6 +65,7 @@ public final class AnalysisReport {
         for (SiteDayResult d : r.siteDays()) {
             types.merge(d.breezeType().name().toLowerCase(Locale.ROOT), 1, Integer::sum);
         }
+        rep.paragraph("Site-days by breeze type (from the morning ambient wind above the breeze layer relative to the coast):");
         rep.keyValues(types);
         for (AnalysisFigures.Captioned c : figs) {
             if (c.fileName().startsWith("wind-direction")) {
@@ -69,14 +75,18 @@ public final class AnalysisReport {
         Table t = Table.of("day", "site", "#", "time (local)", "+/- h", "confidence", "onshore", "detectors", "breeze type");
         for (SiteDayResult d : r.siteDays()) {
             for (Passage p : d.passages()) {
+                if (compact && !p.turnsOnshore()) {
+                    continue;
+                }
                 t.row(p.day(), p.site(), p.ordinal(), clock(p.timeHours()), p.uncertaintyHours(), p.confidence(),
                         p.turnsOnshore() ? "yes" : "no", String.join(" ", p.detectors()),
                         d.breezeType().name().toLowerCase(Locale.ROOT));
             }
         }
         t.decimals("+/- h", 2).decimals("confidence", 2);
-        rep.table("Detected passages per site and day (passages.csv has every column). Timing uncertainty is at least half "
-                + "the local flight interval; confidence is the detectors' agreement.", t);
+        rep.table((compact ? "Detected passages that turn the wind onshore, per site and day (passages.csv has every passage and "
+                + "column)." : "Detected passages per site and day (passages.csv has every column).") + " Timing uncertainty is at "
+                + "least half the local flight interval; confidence is the detectors' agreement.", t);
         rep.section("Responses, distributions and composites");
         for (AnalysisFigures.Captioned c : figs) {
             if (!c.fileName().startsWith("wind-direction")) {
@@ -88,12 +98,22 @@ public final class AnalysisReport {
             rep.paragraph(r.comparisonNote());
         }
         Table c = Table.of("metric", "by", "A", "B", "n A", "n B", "mean A", "mean B", "difference", "test", "p", "p (Holm)");
-        for (ComparisonRow row : r.comparisons()) {
+        List<ComparisonRow> rows = new ArrayList<>(r.comparisons());
+        if (compact) {
+            rows.removeIf(x -> !(x.pHolm() < 0.05));
+            rows.sort(java.util.Comparator.comparingDouble(ComparisonRow::pHolm));
+            if (rows.size() > 15) {
+                rows = rows.subList(0, 15);
+            }
+        }
+        for (ComparisonRow row : rows) {
             c.row(row.metric(), row.attribute(), row.groupA(), row.groupB(), row.nA(), row.nB(), row.meanA(), row.meanB(),
                     row.meanA() - row.meanB(), row.test().name(), row.pValue(), row.pHolm());
         }
         c.decimals("mean A", 3).decimals("mean B", 3).decimals("difference", 3).decimals("p", 4).decimals("p (Holm)", 4);
-        rep.table("Comparisons between groups: the test is chosen from the samples' size and normality diagnostics "
+        rep.table((compact ? "The group differences that stay significant after the Holm correction (p (Holm) < 0.05, at most "
+                + "15, smallest p first; comparisons.csv has all " + r.comparisons().size() + "). " : "")
+                + "Comparisons between groups: the test is chosen from the samples' size and normality diagnostics "
                 + "(comparisons.csv has them); p (Holm) corrects for the number of comparisons made.", c);
     }
 

@@ -133,26 +133,16 @@ public final class ComparisonFigures {
 
     /** Drops the "diagnostics." prefix and trailing unit-less bookkeeping for panel titles. */
     static String shortName(String column) {
-        return column.replaceFirst("^diagnostics\\.", "").replace(".time_local_h", "");
+        String s = column.replaceFirst("^diagnostics\\.", "").replace(".time_local_h", "").replaceFirst("^sites\\.", "site ");
+        s = s.replaceFirst("\\.km$", "").replaceFirst("\\.onshore_arrival$", ": onshore arrival");
+        return s.replace('_', ' ').replace('.', ' ');
     }
 
     private static void figure(List<Path> written, Path file, List<Figure> panels) throws IOException {
         if (panels.isEmpty()) {
             return;
         }
-        int cols = Math.min(3, panels.size());
-        int rows = (panels.size() + cols - 1) / cols;
-        BufferedImage img = new BufferedImage(cols * PANEL_W, rows * PANEL_H, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = img.createGraphics();
-        g.setColor(Color.WHITE);
-        g.fillRect(0, 0, img.getWidth(), img.getHeight());
-        for (int k = 0; k < panels.size(); k++) {
-            g.drawImage(panels.get(k).toImage(), (k % cols) * PANEL_W, (k / cols) * PANEL_H, null);
-        }
-        g.dispose();
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        ImageIO.write(img, "png", bytes);
-        AtomicFiles.write(file, bytes.toByteArray());
+        org.littoral.scenarios.report.FigureGrid.of("", panels, Math.min(3, panels.size())).writePng(file);
         written.add(file);
     }
 }
