@@ -59,11 +59,13 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
+    @Option(names = "--sweep", paramLabel = "SWEEP", defaultValue = "quillmarsh-ambient",
+            description = "Hypothesis sweep to run (built-in name or file; default: ${DEFAULT-VALUE}).")
+    String sweepRef;
+
     @Option(names = "--resume", description = "Keep sweep and plan members already computed in DIR.")
     boolean resume;
 
-    /** Sweep of ambient flows run by the demo. */
-    static final String HYPOTHESIS_SWEEP = "ambient-flow";
     /** Plan run by the demo (the invented coast). */
     static final String PLAN = "quillmarsh-plan";
 
@@ -81,8 +83,8 @@ public final class DemoCommand implements Callable<Integer> {
         Coast coast = CoastFile.load(dataDir.resolve("coast.yaml").toString());
         intro(rep, dataDir);
 
-        p.step("hypothesis sweep of ambient flows (" + HYPOTHESIS_SWEEP + ")");
-        SweepSpec sweep = SweepFile.load(HYPOTHESIS_SWEEP, ScenarioMemberRunner.scenarioSource());
+        p.step("hypothesis sweep of ambient flows (" + sweepRef + ")");
+        SweepSpec sweep = SweepFile.load(sweepRef, ScenarioMemberRunner.scenarioSource());
         SweepCommand.Result sr = SweepCommand.run(sweep, out.resolve("sweep"), n, resume, false, false);
         sweepSection(rep, sr);
 
@@ -153,7 +155,42 @@ public final class DemoCommand implements Callable<Integer> {
             byte[] png = Files.readAllBytes(f);
             rep.figurePng(png, pngWidth(png), captionOf(f.getFileName().toString()));
         }
-        rep.table("The sweep's comparison table (sweep/comparison.csv has every column).", sr.table().toTable());
+        rep.table("The sweep's main results per member (sweep/comparison.csv has every column). Arrival: the first time the "
+                + "total near-surface wind turns into the onshore sector at the site; empty where it never does (onshore all day, "
+                + "or the breeze never overcomes the ambient wind).", compactSweepTable(sr.table()));
+    }
+
+    /** Member, ambient wind, breeze type, peak breeze, depth, penetration and the arrival at each site. */
+    static Table compactSweepTable(org.littoral.scenarios.sweep.ComparisonTable t) {
+        List<String> siteCols = new ArrayList<>();
+        for (String c : t.columns()) {
+            if (c.startsWith("diagnostics.sites.") && c.endsWith(".onshore_arrival.time_local")) {
+                siteCols.add(c);
+            }
+        }
+        List<String> head = new ArrayList<>(List.of("member", "ambient from (deg)", "speed (m/s)", "breeze type",
+                "peak breeze (m/s)", "peak time", "onshore layer (m)", "penetration (km)"));
+        for (String c : siteCols) {
+            head.add("arrival " + c.substring("diagnostics.sites.".length(), c.length() - ".onshore_arrival.time_local".length()));
+        }
+        Table out = Table.of(head);
+        for (java.util.Map<String, Object> r : t.rows()) {
+            List<Object> row = new ArrayList<>();
+            row.add(r.get("member"));
+            row.add(r.get("ambient_from_deg"));
+            row.add(r.get("ambient_speed_m_per_s"));
+            row.add(r.get("breeze_type"));
+            row.add(r.get("diagnostics.peak_onshore_wind.breeze_m_per_s"));
+            row.add(r.get("diagnostics.peak_onshore_wind.time_local"));
+            row.add(r.get("diagnostics.circulation_at_peak.onshore_layer_depth_m"));
+            row.add(r.get("diagnostics.max_inland_penetration.km"));
+            for (String c : siteCols) {
+                row.add(r.get(c));
+            }
+            out.row(row.toArray());
+        }
+        return out.decimals("peak breeze (m/s)", 1).decimals("onshore layer (m)", 0).decimals("penetration (km)", 0)
+                .decimals("ambient from (deg)", 0).decimals("speed (m/s)", 1);
     }
 
     /** Width in pixels from a PNG's IHDR chunk (bytes 16-19, big-endian). */
