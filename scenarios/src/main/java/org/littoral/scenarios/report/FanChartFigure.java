@@ -115,6 +115,13 @@ public final class FanChartFigure extends Figure {
             return this;
         }
 
+        /** Observed values drawn with a chosen marker and colour (e.g. flagged points highlighted). */
+        public Builder observed(String name, double[] ox, double[] oy, double[] yHalfWidth, Marker marker, Color c) {
+            observedCount++;
+            lb.series(Series.of(name, ox, oy).noLine().marker(marker).color(c).errorBars(null, yHalfWidth));
+            return this;
+        }
+
         public Builder observed(String name, double[] ox, double[] oy) {
             return observed(name, ox, oy, null);
         }

@@ -65,7 +65,13 @@ public final class TimingCheck {
                 never = fractionNaN(env);
                 double lo = quantile(env, settings.envelopeLowPercentile);
                 double hi = quantile(env, settings.envelopeHighPercentile);
-                if (p.timeHours() + p.uncertaintyHours() < lo || p.timeHours() - p.uncertaintyHours() > hi) {
+                if (Double.isInfinite(lo)) {
+                    int arrived = (int) Math.round(env.length * (1.0 - never));
+                    flags.add(new TimingFlag(Kind.OUTSIDE_ENVELOPE, p.day(), p.site(), p.label(), p.timeHours(), pct, "",
+                            Double.NaN, String.format(Locale.ROOT, "a front passed at %s, but only %d of %d ensemble members' "
+                                    + "fronts reach this site at all (the rest never arrive), so even the %.0f %% point of the envelope "
+                                    + "is 'never'", clock(p.timeHours()), arrived, env.length, settings.envelopeLowPercentile)));
+                } else if (p.timeHours() + p.uncertaintyHours() < lo || p.timeHours() - p.uncertaintyHours() > hi) {
                     flags.add(new TimingFlag(Kind.OUTSIDE_ENVELOPE, p.day(), p.site(), p.label(), p.timeHours(), pct, "",
                             Double.NaN, String.format(Locale.ROOT, "%s +/- %.0f min is at the %.1f percentile of %d ensemble "
                                     + "members; the %.0f-%.0f %% envelope is %s-%s", clock(p.timeHours()),
@@ -191,6 +197,9 @@ public final class TimingCheck {
         } else {
             // The time lies between two flights (e.g. their midpoint): shift by one flight either way.
             int j = p.timeHours() > f[k] ? k : k - 1;
+            if (j < 0 || j + 1 >= f.length) {
+                return null; // before the first or after the last flight: no neighbouring flight to move to
+            }
             double offset = (p.timeHours() - f[j]) / (f[j + 1] - f[j]);
             earlier = j > 0 ? f[j - 1] + offset * (f[j] - f[j - 1]) : Double.NaN;
             later = j + 2 < f.length ? f[j + 1] + offset * (f[j + 2] - f[j + 1]) : Double.NaN;

@@ -158,6 +158,14 @@ class TimingCheckTest {
         assertEquals("later", f.favoured());
     }
 
+    @Test
+    void aPassageBeforeTheFirstFlightBetweenFlightsIsNotCalledOneFlightOff() {
+        // 06:40 lies before the first flight (07:00) and not at it: there is no earlier flight to move to.
+        TimingCheck.Result r = run(6.0 + 40.0 / 60.0, inlandTime(11.0), 11.0, inlandTime(11.0), 0.04);
+        assertFalse(r.flagged(Kind.ONE_CADENCE_OFF, "coast"), r.flags().toString());
+        assertTrue(r.flagged(Kind.OUTSIDE_ENVELOPE, "coast"));
+    }
+
     /** Every true passage pair of the invented demo campaign is consistent with its own day's density current. */
     @Test
     void theDemoCampaignsTruePassagesAreNotFlagged() {

@@ -1,0 +1,188 @@
+package org.littoral.scenarios.timing;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.sweep.Member;
+import org.littoral.scenarios.sweep.MemberExpander;
+import org.littoral.scenarios.sweep.MemberStore;
+import org.littoral.scenarios.sweep.SweepExecutor;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code littoral check-timing PASSAGES --day DAYFILE --out DIR}: are the observed passage times plausible? */
+@Command(name = "check-timing", description = {"Sanity-check observed front passage times for one day.",
+        "Compares each site's passage with an ensemble envelope of model arrivals for the day (its percentile), the implied "
+                + "speed between sites with a density-current speed (Benjamin 1968; Simpson & Britter 1980), and the flight "
+                + "times; flags with reasons (earlier than any plausible onset, inland before coast, implausible speed, one "
+                + "flight interval off and which neighbouring flight the evidence favours). A flag is advice: the data are "
+                + "never changed. PASSAGES is the passages.csv of littoral observe or a CSV with site, date, passage_time_local. "
+                + "Day file format: docs/timing-checks.md.",
+        "Idealised model, not a forecast."})
+public final class CheckTimingCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "PASSAGES", description = "Passage table (littoral observe passages.csv, or site,date,passage_time_local).")
+    Path passages;
+
+    @Option(names = "--day", required = true, paramLabel = "DAYFILE", description = "Day file (YAML): coast, date, ambient wind, front, flights, ensemble.")
+    Path day;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/check-timing/<date>).")
+    Path out;
+
+    @Option(names = "--model", paramLabel = "MODEL", description = "Override the day file's ensemble model: linear (quick look) or nonlinear.")
+    String model;
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads for the ensemble (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--resume", description = "Keep ensemble members already computed in DIR from the same inputs.")
+    boolean resume;
+
+    @Override
+    public Integer call() throws Exception {
+        DaySpec spec = DayFile.read(day);
+        Path dir = out != null ? out : Path.of("out", "check-timing", spec.date());
+        int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null),
+                Solver.standard());
+        PrintStream o = System.out;
+        o.printf("littoral: %s: %d passage(s) checked against %d ensemble member(s) (%s model): %d flag(s)%n", spec.date(),
+                r.check().passages().size(), r.members(), r.model(), r.check().flags().size());
+        for (TimingFlag f : r.check().flags()) {
+            o.println("  " + f.site() + " " + f.label() + " " + TimingCheck.clock(f.observedHours()) + ": " + f.kind() + ": "
+                    + f.reason());
+        }
+        o.println("littoral: wrote " + r.flagsCsv() + ", " + r.envelopeCsv() + ", " + r.summaryJson() + ", " + r.figurePng()
+                + ", " + r.reportHtml());
+        return 0;
+    }
+
+    /**
+     * @param model "linear", "nonlinear" or null (the day file's choice)
+     * @param progressBar draw a progress bar (a terminal); otherwise a line at most every 15 s
+     */
+    public record Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar) {
+        public Options {
+            if (threads < 1) {
+                throw new UserInputException("--threads must be at least 1; got " + threads);
+            }
+            if (model != null && !List.of("linear", "nonlinear").contains(model)) {
+                throw new UserInputException("--model " + model + " is not one of [linear, nonlinear]");
+            }
+        }
+
+        /** Quiet defaults for callers such as {@code littoral demo}: all cores, no bar, the day file's model. */
+        public static Options quiet(PrintStream log) {
+            return new Options(null, Runtime.getRuntime().availableProcessors(), false, log, false);
+        }
+    }
+
+    /** Entry point for other commands (e.g. {@code littoral demo}): reads the files, runs, writes, returns the paths. */
+    public static CheckTimingResult run(Path passagesFile, Path dayFile, Path dir, Options opt) throws IOException {
+        return run(DayFile.read(dayFile), passagesFile, dir, opt, Solver.standard());
+    }
+
+    /** As {@link #run(Path, Path, Path, Options)} with a parsed day and a given solver (tests, validation). */
+    public static CheckTimingResult run(DaySpec spec, Path passagesFile, Path dir, Options opt, Solver solver) throws IOException {
+        long t0 = System.nanoTime();
+        String model = opt.model() != null ? opt.model() : spec.model();
+        spec.ensemble().base().put("kind", model);
+        PassageTable.Read obs = PassageTable.read(passagesFile, spec);
+
+        double[] xM = distances(spec);
+        List<Member> members = MemberExpander.expand(spec.ensemble());
+        ArrivalMemberRunner runner = new ArrivalMemberRunner(spec.source(), solver, xM);
+        for (Member m : members) {
+            runner.scenarioOf(m);
+        }
+        Files.createDirectories(dir);
+        opt.log().println("check-timing: " + members.size() + " ensemble member(s), " + model + " model, " + opt.threads()
+                + " thread(s)");
+        SweepExecutor.Outcome so = SweepExecutor.run(spec.ensemble(), members, dir, runner,
+                new SweepExecutor.Options(opt.threads(), opt.resume(), opt.log(), opt.progressBar(), 15_000));
+
+        MemberStore store = new MemberStore(dir);
+        List<double[]> arrivals = new ArrayList<>();
+        List<Double> onsets = new ArrayList<>();
+        String firstError = null;
+        String modelName = model;
+        for (Member m : members) {
+            ObjectNode rec = store.read(m.id());
+            if (!MemberStore.STATUS_OK.equals(rec.path("status").asText())) {
+                if (firstError == null) {
+                    firstError = m.id() + ": " + rec.path("error").asText();
+                }
+                continue;
+            }
+            JsonNode res = rec.get("result");
+            double[] a = new double[xM.length];
+            for (int i = 0; i < a.length; i++) {
+                JsonNode v = res.path("arrival_h").path(i);
+                a[i] = v.isNumber() ? v.asDouble() : Double.NaN;
+            }
+            arrivals.add(a);
+            onsets.add(res.path("onset_h").isNumber() ? res.get("onset_h").asDouble() : Double.NaN);
+            modelName = res.path("model").asText(model);
+        }
+        if (arrivals.isEmpty()) {
+            throw new UserInputException("check-timing " + spec.source() + ": every one of the " + members.size()
+                    + " ensemble members failed (first: " + firstError + "); fix the cause and run again with --resume");
+        }
+
+        int ns = spec.sites().size();
+        List<TimingInputs.ArrivalEnvelope> envelopes = new ArrayList<>();
+        Map<String, double[]> flights = new HashMap<>();
+        for (int s = 0; s < ns; s++) {
+            double[] e = new double[arrivals.size()];
+            for (int k = 0; k < e.length; k++) {
+                e[k] = arrivals.get(k)[s];
+            }
+            DaySpec.Site site = spec.sites().get(s);
+            envelopes.add(new TimingInputs.ArrivalEnvelope(site.name(), "sea_breeze", e));
+            flights.put(site.name(), site.flightHours());
+        }
+        TimingCheck.Result check = new TimingCheck(spec.settings()).check(spec.conditions(), obs.passages(), flights, envelopes);
+        double[] speed = DensityCurrent.plausibleSpeedRangeMPerS(spec.conditions().thetaVContrastK(),
+                spec.conditions().contrastUncertaintyK(), spec.conditions().thetaVK(), spec.conditions().breezeDepthM(),
+                spec.conditions().depthUncertaintyM(), spec.conditions().totalDepthM(), spec.conditions().crossShoreWindMPerS(),
+                spec.settings().retardationMin);
+        List<String> notes = new ArrayList<>(obs.notes());
+        if (so.failed() > 0) {
+            notes.add(so.failed() + " ensemble member(s) failed (first: " + firstError + "); they are left out of the envelope");
+        }
+        double wall = (System.nanoTime() - t0) / 1e9;
+        CheckTimingOutputs.Inputs in = new CheckTimingOutputs.Inputs(spec, passagesFile, obs, modelName, xM, arrivals, onsets,
+                envelopes, check, speed, notes, so, wall);
+        return CheckTimingOutputs.write(dir, in);
+    }
+
+    /** Site distances first, then a row of distances for the fan chart from the coast to beyond the farthest site. */
+    static double[] distances(DaySpec spec) {
+        int ns = spec.sites().size();
+        double farKm = spec.sites().get(ns - 1).inlandKm();
+        double lastKm = spec.base().xGrid().lastM() / 1000.0;
+        double toKm = Math.min(Math.max(farKm * 1.25, farKm + 2.0), 0.9 * lastKm);
+        int nf = 25;
+        double[] x = new double[ns + nf];
+        for (int s = 0; s < ns; s++) {
+            x[s] = spec.sites().get(s).inlandKm() * 1000.0;
+        }
+        double fromKm = Math.min(0.5, 0.5 * Math.max(0.1, spec.sites().get(0).inlandKm()));
+        for (int i = 0; i < nf; i++) {
+            x[ns + i] = 1000.0 * (fromKm + (toKm - fromKm) * i / (nf - 1));
+        }
+        return x;
+    }
+}
