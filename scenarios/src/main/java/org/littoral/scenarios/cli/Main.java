@@ -22,6 +22,7 @@ import picocli.CommandLine.ScopeType;
             org.littoral.scenarios.observe.ObserveCommand.class,
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
+            org.littoral.scenarios.compare.CompareCommand.class,
             org.littoral.scenarios.demo.MakeDemoDataCommand.class,
             org.littoral.scenarios.demo.DemoCommand.class,
         })

@@ -1,0 +1,102 @@
+package org.littoral.scenarios.compare;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.littoral.model.coast.Coast;
+import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.analysis.ingest.DayTableReader;
+import org.littoral.scenarios.observe.CoastFile;
+import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.run.ScenarioRun;
+import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.scenario.BuiltinScenarios;
+import org.littoral.scenarios.scenario.Scenario;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code littoral compare SCENARIO OBS [--coast COAST] --out DIR}: runs the scenario, puts its synthetic
+ * soundings and the observed profiles through the same analysis chain, and reports per site and layer
+ * the bias and RMSE of temperature, mixing ratio, wind speed and direction, the passage-time errors,
+ * and observed | model time-height sections.
+ */
+@Command(name = "compare", description = {"Compare a scenario with observed profiles: the same analysis chain on both; "
+        + "bias and RMSE per site and layer, passage-time errors, observed | model time-height sections, report.html.",
+        "The scenario's sites must carry the observed site names. Design: docs/compare.md."})
+public final class CompareCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Built-in scenario name or scenario file.")
+    String scenario;
+
+    @Parameters(index = "1", paramLabel = "OBS", description = "Observed profile CSV (.csv or .csv.gz) or a folder of them.")
+    Path obs;
+
+    @Option(names = "--coast", paramLabel = "COAST", description = "Coast of the observations (coast file, scenario file or "
+            + "built-in name); default: the scenario's coast. A sites: list there is checked against the scenario's sites.")
+    String coastRef;
+
+    @Option(names = "--days", paramLabel = "DAYS.csv", description = "Per-day attribute table (breeze_type, ...), as for observe.")
+    Path days;
+
+    @Option(names = "--breeze-type", paramLabel = "TYPE", defaultValue = "scenario",
+            description = "Observed days to compare: 'scenario' (days of the scenario's own breeze type, default), 'all', "
+                    + "or pure, corkscrew, backdoor, synoptic.")
+    String breezeType;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/compare", description = "Output folder (default: ${DEFAULT-VALUE}).")
+    Path out;
+
+    /** What {@link #run} produced. */
+    public record Outcome(Comparison.Result result, ScenarioRun.Outcome model, CompareOutputs.Written written) {
+        public List<Path> figures() {
+            return written.figures();
+        }
+
+        public Path report() {
+            return written.report();
+        }
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        Outcome o = run(scenario, obs, coastRef, days, breezeType, out, System.console() != null ? System.err : null);
+        Comparison.Result r = o.result();
+        System.out.println("littoral: compared " + r.scenarioName() + " with " + r.days().size() + " observed day(s) at "
+                + r.sites().size() + " site(s) (" + r.pairs() + " paired profiles); wrote " + o.written().files().size()
+                + " files to " + out + " (open report.html)");
+        return 0;
+    }
+
+    /**
+     * The whole comparison as a Java call (for {@code littoral demo} and tests): runs the scenario through
+     * {@link Solver#standard()} (its model outputs go to {@code out/model}), ingests the observations as
+     * {@code littoral observe} does, compares and writes everything to {@code out}.
+     *
+     * @param coastRef   coast of the observations, or null for the scenario's coast
+     * @param days       per-day attribute table, or null
+     * @param breezeType "scenario", "all" or a breeze type name
+     * @param progress   where progress lines go, or null
+     */
+    public static Outcome run(String scenarioRef, Path obs, String coastRef, Path days, String breezeType, Path out,
+                              PrintStream progress) throws IOException {
+        Scenario sc = BuiltinScenarios.resolve(scenarioRef);
+        Coast coast = coastRef == null ? sc.coast() : CoastFile.load(coastRef);
+        AnalysisSettings settings = new AnalysisSettings();
+        ObserveCommand.Observed o = ObserveCommand.ingest(obs, settings);
+        if (days != null) {
+            settings.dayAttributes.putAll(DayTableReader.read(days));
+        }
+        Files.createDirectories(out);
+        o.qc().writeCsv(out.resolve("qc-log.csv"));
+        ScenarioRun.Outcome model = new ScenarioRun(sc, Solver.standard(), progress).run(out.resolve("model"));
+        Comparison.Result r = Comparison.compute(new Comparison.Inputs(sc, model, o.profiles(), coast, settings, breezeType,
+                obs.toString(), ObservedSites.inlandM(coastRef)));
+        CompareOutputs.Written w = CompareOutputs.write(out, r, sc.source(), obs.toString());
+        return new Outcome(r, model, w);
+    }
+}

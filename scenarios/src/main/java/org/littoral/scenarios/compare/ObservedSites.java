@@ -1,0 +1,60 @@
+package org.littoral.scenarios.compare;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.littoral.model.sounding.VirtualSite;
+import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.scenario.BuiltinScenarios;
+
+/**
+ * The observed sites' inland distances, when the coast reference lists them (a {@code sites:} list
+ * of {name, inland_km} in a coast or scenario file, or a built-in scenario's sites); empty otherwise.
+ */
+public final class ObservedSites {
+    private ObservedSites() {
+    }
+
+    /** Site name to inland distance, m. */
+    public static Map<String, Double> inlandM(String coastRef) {
+        Map<String, Double> out = new LinkedHashMap<>();
+        if (coastRef == null) {
+            return out;
+        }
+        Path p = Path.of(coastRef);
+        if (!Files.isRegularFile(p)) {
+            if (BuiltinScenarios.names().contains(coastRef)) {
+                for (VirtualSite v : BuiltinScenarios.resolve(coastRef).sites()) {
+                    out.put(v.name(), v.inlandDistanceM());
+                }
+            }
+            return out;
+        }
+        JsonNode root;
+        try {
+            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readString(p));
+        } catch (IOException e) {
+            throw new UserInputException("coast file " + p + ": cannot be read as YAML/JSON: " + e.getMessage(), e);
+        }
+        JsonNode sites = root == null ? null : root.get("sites");
+        if (sites == null || !sites.isArray()) {
+            return out;
+        }
+        for (int k = 0; k < sites.size(); k++) {
+            JsonNode s = sites.get(k);
+            JsonNode name = s.get("name");
+            JsonNode km = s.get("inland_km");
+            if (name == null || !name.isTextual() || km == null || !km.isNumber()) {
+                throw new UserInputException("coast file " + p + ": sites[" + k + "] = " + s
+                        + ": give {name: TEXT, inland_km: NUMBER}");
+            }
+            out.put(name.asText(), km.asDouble() * 1000.0);
+        }
+        return out;
+    }
+}
