@@ -82,17 +82,14 @@ public final class NonlinearModel {
     private double phiScale;
     // row and column work buffers
     private final double[] fx;
-    /** Periodic row copies with two ghost cells each side: pad[i + 2] = row[i]. */
-    private final double[] padA;
+    /** Limited slopes in x of one row. */
+    private final double[] hSlope;
     /** Row copies shifted in x (see {@link #shift}) and the shifted flux row. */
     private final double[] sh1;
     private final double[] sh2;
     private final double[] sh3;
     private final double[] sh4;
     private final double[] fxs;
-    private final double[] padB;
-    /** padSlope[i + 1] = limited slope of cell i; padSlope[0] = slope of cell nx - 1. */
-    private final double[] padSlope;
     private final double[] fzBot;
     private final double[] fzTop;
     private final double[] slopeA;
@@ -200,14 +197,12 @@ public final class NonlinearModel {
         tq = new double[nc];
         chi = new double[nc];
         fx = new double[nx + 1];
-        padA = new double[nx + 4];
         sh1 = new double[nx];
         sh2 = new double[nx];
         sh3 = new double[nx];
         sh4 = new double[nx];
         fxs = new double[nx];
-        padB = new double[nx + 4];
-        padSlope = new double[nx + 1];
+        hSlope = new double[nx];
         fzBot = new double[nx];
         fzTop = new double[nx];
         slopeA = new double[nx];
@@ -627,17 +622,13 @@ public final class NonlinearModel {
         return Math.abs(c) < lim ? c : Math.copySign(lim, c);
     }
 
-    /** Copies row o..o+nx-1 of s into pad[2..nx+1] with two periodic ghost cells at each end. */
-    private void padRow(double[] s, int o, double[] pad) {
-        System.arraycopy(s, o, pad, 2, nx);
-        pad[0] = s[o + nx - 2];
-        pad[1] = s[o + nx - 1];
-        pad[nx + 2] = s[o];
-        pad[nx + 3] = s[o + 1];
-    }
-
     private void advectCentreLimited(double[] s, double[] ts) {
-        double[] sl = slopeA;
+        // one sweep up the levels: x fluxes of level k, then the z flux through its top, so each row of
+        // ts is updated once while rows k..k+2 of s are still in cache (same operations in the same order
+        // per point as an x pass followed by a z pass)
+        double[] sl = hSlope;
+        java.util.Arrays.fill(fzBot, 0.0);
+        java.util.Arrays.fill(slopeA, 0.0); // z slope of layer k: zero next to ground and lid (first order there)
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             shift(s, o, -1, sh1);
@@ -662,18 +653,12 @@ public final class NonlinearModel {
                 }
             }
             shift(fx, 0, 1, fxs);
-            for (int i = 0; i < nx; i++) {
-                ts[o + i] -= (fxs[i] - fx[i]) * invDx;
+            if (lin) {
+                for (int i = 0; i < nx; i++) {
+                    ts[o + i] -= (fxs[i] - fx[i]) * invDx;
+                }
+                continue;
             }
-        }
-        if (lin) {
-            return;
-        }
-        // vertical: slopes of the boundary layers are zero (first order next to ground and lid)
-        java.util.Arrays.fill(fzBot, 0.0);
-        java.util.Arrays.fill(slopeA, 0.0); // slope of layer k
-        for (int k = 0; k < nz; k++) {
-            int o = k * nx;
             if (k + 1 < nz) {
                 if (k + 1 < nz - 1) {
                     for (int i = 0; i < nx; i++) {
@@ -692,7 +677,8 @@ public final class NonlinearModel {
             }
             double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
-                ts[o + i] -= (fzTop[i] - fzBot[i]) * idz;
+                double t = ts[o + i] - (fxs[i] - fx[i]) * invDx;
+                ts[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
                 fzBot[i] = fzTop[i];
                 slopeA[i] = slopeB[i];
             }
