@@ -269,6 +269,12 @@ final class CheckTimingOutputs {
                     + "ONE_CADENCE_OFF, envelope percentile for OUTSIDE_ENVELOPE).", flags);
         }
         h.section("Ensemble envelope");
+        if (in.model().startsWith("linear")) {
+            h.caution("Linear model: a quick look.", "The envelope comes from the linear model, whose onshore flow follows the "
+                    + "heating closely and has no front dynamics; on the invented demo campaign its arrival near the coast is "
+                    + "often hours earlier than the prescribed fronts (docs/timing-checks.md). An OUTSIDE_ENVELOPE flag from a "
+                    + "linear ensemble alone is weak evidence; run the ensemble with --model nonlinear for the real answer.");
+        }
         h.figure(fig, caption);
         h.table("Ensemble arrival percentiles per site (local clock hours; a member whose front never arrives counts as later "
                 + "than any time, and a percentile that falls among those is left empty) with the observed sea-breeze passage "

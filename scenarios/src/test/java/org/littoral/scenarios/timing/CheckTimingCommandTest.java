@@ -174,6 +174,23 @@ class CheckTimingCommandTest {
     }
 
     @Test
+    void modelNonlinearReachesTheSolverThroughTheScenarioKind() throws IOException {
+        java.util.Set<org.littoral.scenarios.scenario.Scenario.Kind> kinds = java.util.concurrent.ConcurrentHashMap.newKeySet();
+        // A recording solver: it notes the kind each member asks for, then solves with the linear model.
+        Solver recording = s -> {
+            kinds.add(s.kind());
+            return org.littoral.model.linear.LinearBreezeModel.solve(s.toLinearConfig());
+        };
+        CheckTimingResult r = CheckTimingCommand.run(DayFile.read(day(contrastK, firstFlightH)),
+                passages("shore,2031-07-04,11:00\n"), tmp.resolve("nonlinear"),
+                new CheckTimingCommand.Options("nonlinear", 2, false, new PrintStream(java.io.OutputStream.nullOutputStream()), false),
+                recording);
+        assertEquals(java.util.Set.of(org.littoral.scenarios.scenario.Scenario.Kind.NONLINEAR), kinds);
+        assertEquals(5, r.members());
+        assertTrue(Files.readString(tmp.resolve("nonlinear/members/m0000.json")).contains("\"kind\" : \"nonlinear\""));
+    }
+
+    @Test
     void theOutputsAreWrittenAndTheFlagIsAdviceOnly() throws IOException {
         Path obs = passages("shore,2031-07-04," + hhmmss(shoreMedian) + "\nfarm,2031-07-04," + hhmmss(shoreMedian - 0.5) + "\n");
         byte[] before = Files.readAllBytes(obs);
