@@ -19,6 +19,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("sweep", new org.littoral.scenarios.sweep.SweepBenchmark());
         m.put("nonlinear", new NonlinearBenchmark());
         m.put("linear", new LinearBenchmark());
+        m.put("plan", new org.littoral.scenarios.plan.PlanBenchmark());
         return m;
     }
 

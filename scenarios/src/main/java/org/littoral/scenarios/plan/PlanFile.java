@@ -44,6 +44,18 @@ public final class PlanFile {
         this.source = source;
     }
 
+    /** The YAML text of a built-in plan. */
+    public static String builtinText(String name) {
+        try (InputStream in = PlanFile.class.getResourceAsStream(BUILTIN_FOLDER + name + ".yaml")) {
+            if (in == null) {
+                throw new UserInputException("no built-in plan '" + name + "'; built-in plans: " + BUILTINS);
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UserInputException("built-in plan '" + name + "' cannot be read: " + e.getMessage(), e);
+        }
+    }
+
     /** A built-in plan name or a file path. */
     public static PlanSpec load(String ref) {
         Path p = Path.of(ref);
