@@ -2,8 +2,6 @@ package org.littoral.scenarios.bench;
 
 import java.io.PrintStream;
 import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -53,7 +51,7 @@ public final class AnalysisBenchmark implements Benchmark {
         double genS = 0;
         java.util.Map<String, double[]> truth = new java.util.HashMap<>();
         AnalysisResult last = null;
-        resetPeaks();
+        HeapPeaks.reset(true);
         for (int rep = 0; rep < reps; rep++) {
             Random r = new Random(4242);
             List<Profile> all = new ArrayList<>();
@@ -94,7 +92,7 @@ public final class AnalysisBenchmark implements Benchmark {
             profiles = all.size();
             last = res;
         }
-        double peakMb = peakHeapMb();
+        double peakMb = HeapPeaks.peakMb();
         double[] sorted = times.clone();
         Arrays.sort(sorted);
         double median = sorted[reps / 2];
@@ -139,23 +137,6 @@ public final class AnalysisBenchmark implements Benchmark {
         }
     }
 
-    private static void resetPeaks() {
-        System.gc();
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                p.resetPeakUsage();
-            }
-        }
-    }
 
     /** Sum of the heap pools' peak usage since the reset (an upper bound of the simultaneous peak). */
-    private static double peakHeapMb() {
-        long sum = 0;
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                sum += p.getPeakUsage().getUsed();
-            }
-        }
-        return sum / 1048576.0;
-    }
 }

@@ -2,8 +2,6 @@ package org.littoral.scenarios.bench;
 
 import java.io.PrintStream;
 import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.lang.management.ThreadMXBean;
 import java.util.Arrays;
 import java.util.List;
@@ -68,7 +66,7 @@ public final class LinearBenchmark implements Benchmark {
         // warm-up (JIT), not timed
         sample(LinearBreezeModel.solve(cfg), cfg.coast());
         System.gc();
-        resetPeaks();
+        HeapPeaks.reset(false);
         double[] wall = new double[reps];
         double[] cpu = new double[reps];
         double[] solveCpu = new double[reps];
@@ -87,7 +85,7 @@ public final class LinearBenchmark implements Benchmark {
             profiles = ps.size();
             last = s;
         }
-        double peakMb = peakHeapMb();
+        double peakMb = HeapPeaks.peakMb();
         // live footprint: what one solution (plus its column cache) keeps after garbage collection
         System.gc();
         Runtime rt = Runtime.getRuntime();
@@ -133,21 +131,5 @@ public final class LinearBenchmark implements Benchmark {
         return s[lo] + (h - lo) * (s[hi] - s[lo]);
     }
 
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                p.resetPeakUsage();
-            }
-        }
-    }
 
-    private static double peakHeapMb() {
-        long peak = 0;
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                peak += p.getPeakUsage().getUsed();
-            }
-        }
-        return peak / 1048576.0;
-    }
 }

@@ -2,8 +2,6 @@ package org.littoral.scenarios.plan;
 
 import java.io.PrintStream;
 import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -69,19 +67,19 @@ public final class PlanBenchmark implements Benchmark {
         PlanSpec plan = PlanFile.parse("bench:" + label, planText(members, model), null, "bench-" + model);
         Path dir = Files.createTempDirectory("littoral-bench-plan");
         try {
-            resetPeaks();
+            org.littoral.scenarios.bench.HeapPeaks.reset(true);
             long cpu0 = processCpuNanos();
             long t0 = System.nanoTime();
             PlanCommand.PlanOutcome o = PlanCommand.run(plan, model, dir, threads, false, new PrintStream(
                     java.io.OutputStream.nullOutputStream(), false, StandardCharsets.UTF_8));
             double wall = (System.nanoTime() - t0) / 1e9;
             double cpu = (processCpuNanos() - cpu0) / 1e9;
-            long peak = peakHeapBytes();
+            double peakMb = org.littoral.scenarios.bench.HeapPeaks.peakMb();
             double scaled = wall * targetMembers / members;
             out.printf(Locale.ROOT, "  %-18s %d members x %d candidates x %d cadences: wall %.1f s, CPU %.1f s (%.2f cores), "
                     + "%.2f s wall and %.2f s CPU per member, peak heap %.0f MB, %d failed%n", label, members,
                     plan.candidatesKm().length, plan.cadences().size(), wall, cpu, cpu / wall, wall / members, cpu / members,
-                    peak / 1048576.0, o.result().failedMembers);
+                    peakMb, o.result().failedMembers);
             boolean met = scaled < targetS && o.result().failedMembers == 0;
             out.printf(Locale.ROOT, "  %-18s %s%d members: %.0f s, target < %.0f s: %s%n", "", members == targetMembers ? ""
                     : "extrapolated to ", targetMembers, scaled, targetS, met ? "met" : "NOT met");
@@ -101,22 +99,5 @@ public final class PlanBenchmark implements Benchmark {
         return 0L;
     }
 
-    private static void resetPeaks() {
-        System.gc();
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                p.resetPeakUsage();
-            }
-        }
-    }
 
-    private static long peakHeapBytes() {
-        long peak = 0;
-        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == MemoryType.HEAP) {
-                peak += p.getPeakUsage().getUsed();
-            }
-        }
-        return peak;
-    }
 }
