@@ -240,6 +240,32 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
         return ri[0];
     }
 
+    @Override
+    public double[] alongshoreWindAtLevel(int levelIndex, double timeSec) {
+        if (levelIndex < 0 || levelIndex >= nz) {
+            throw new IllegalArgumentException("level index " + levelIndex + " outside 0.." + (nz - 1));
+        }
+        double[] sr = new double[nx];
+        double[] si = new double[nx];
+        int off = levelIndex * nx;
+        for (int h = 0; h < nh; h++) {
+            double er = Math.cos(omega[h] * timeSec);
+            double ei = Math.sin(omega[h] * timeSec);
+            double[] vR = uR[h], vI = uI[h], mR = cvR[h], mI = cvI[h];
+            for (int kk = 0; kk < nx; kk++) {
+                // a = mult_V(k) e^{i w t}, then a times the mode's u structure, as in snapshotAt
+                double ar = mR[kk] * er - mI[kk] * ei;
+                double ai = mR[kk] * ei + mI[kk] * er;
+                double yr = vR[off + kk], yi = vI[off + kk];
+                sr[kk] += ar * yr - ai * yi;
+                si[kk] += ar * yi + ai * yr;
+            }
+        }
+        double[][] ri = new double[2][nx];
+        inverse(new FastFourierTransformer(DftNormalization.STANDARD), sr, si, 0, ri);
+        return ri[0];
+    }
+
     /** {@link #columnAt(double, double)} at grid column i. */
     public Snapshot columnAtIndex(int i, double timeSec) {
         if (i < 0 || i >= nx) {

@@ -54,13 +54,41 @@ class SamplerFastPathTest {
         }
     }
 
-    @Test
-    void fastPathProfilesEqualSnapshotProfiles() {
-        Coast coast = new Coast(40, 0, 0, 270, 180);
-        LinearConfig c = new LinearConfig(coast, SurfaceMap.simpleCoast(293, 0.2, 1, 0.1), HorizontalGrid.centred(256, 2000),
+    private static final Coast COAST = new Coast(40, 0, 0, 270, 180);
+
+    private static BreezeSolution solution() {
+        LinearConfig c = new LinearConfig(COAST, SurfaceMap.simpleCoast(293, 0.2, 1, 0.1), HorizontalGrid.centred(256, 2000),
                 VerticalGrid.uniform(41, 4000), 0.01, 1e-5, 1e-5, -2.0, true, 4,
                 new HeatingSpec.ClassicShape(3e-4, 5e3, 800, 6.0), 300, 0.01, -3e-6, 101325);
-        BreezeSolution sol = LinearBreezeModel.solve(c);
+        return LinearBreezeModel.solve(c);
+    }
+
+    @Test
+    void oneLevelSynthesesEqualThatLevelOfTheSnapshot() {
+        BreezeSolution sol = solution();
+        FieldSampling f = (FieldSampling) sol;
+        double t = 13.5 * 3600;
+        Snapshot s = sol.snapshotAt(t);
+        int nx = sol.xM().length;
+        for (int level : new int[] {0, 3, 20}) {
+            double[] u = f.crossShoreWindAtLevel(level, t);
+            double[] v = f.alongshoreWindAtLevel(level, t);
+            for (int i = 0; i < nx; i++) {
+                assertEquals(s.uMPerS()[level * nx + i], u[i], 1e-9);
+                assertEquals(s.vMPerS()[level * nx + i], v[i], 1e-9);
+            }
+        }
+        double vmax = 0;
+        for (double x : s.vMPerS()) {
+            vmax = Math.max(vmax, Math.abs(x));
+        }
+        assertTrue(vmax > 0.05, "Coriolis turns the breeze: v must be non-zero, got " + vmax);
+    }
+
+    @Test
+    void fastPathProfilesEqualSnapshotProfiles() {
+        Coast coast = COAST;
+        BreezeSolution sol = solution();
         assertTrue(sol instanceof FieldSampling);
         List<VirtualSite> sites = List.of(new VirtualSite("A", 3.3e3), new VirtualSite("B", 25e3));
         FlightSchedule f = FlightSchedule.regular(60, 9, 15);

@@ -5,6 +5,7 @@ import java.util.List;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.field.Background;
 import org.littoral.model.field.BreezeSolution;
+import org.littoral.model.field.FieldSampling;
 import org.littoral.model.field.Snapshot;
 
 /**
@@ -121,6 +122,37 @@ public final class FieldSections {
             fs.interiorFromM = far.interiorFromM();
             fs.interiorToM = far.interiorToM();
             fs.arrivalFollowsFront = true;
+        }
+        if (far == null && sol instanceof FieldSampling fast) {
+            // Fast path (the linear model): four one-level syntheses for the near-surface section and two cached
+            // columns per site instead of a whole snapshot per time; same levels, columns and weights.
+            for (int n = 0; n < nt; n++) {
+                double t = fs.modelSec[n];
+                double[] u0 = fast.crossShoreWindAtLevel(k0, t);
+                double[] u1 = fast.crossShoreWindAtLevel(k0 + 1, t);
+                double[] v0 = fast.alongshoreWindAtLevel(k0, t);
+                double[] v1 = fast.alongshoreWindAtLevel(k0 + 1, t);
+                for (int i = 0; i < nx; i++) {
+                    double total = (1 - wz) * u0[i] + wz * u1[i];
+                    fs.nearSurfaceTotalU[n][i] = total;
+                    fs.nearSurfaceTotalV[n][i] = (1 - wz) * v0[i] + wz * v1[i];
+                    fs.nearSurfaceU[n][i] = total - ambientNear;
+                }
+                for (int site = 0; site < col.length; site++) {
+                    Snapshot a = fast.columnAt(xM[col[site]], t);
+                    Snapshot b = fast.columnAt(xM[col[site] + 1], t);
+                    double w = wx[site];
+                    for (int k = 0; k < nz; k++) {
+                        fs.siteU[site][n][k] = (1 - w) * a.uMPerS()[k] + w * b.uMPerS()[k] - uBg[k];
+                        fs.siteV[site][n][k] = (1 - w) * a.vMPerS()[k] + w * b.vMPerS()[k] - vBg[k];
+                        fs.siteTheta[site][n][k] = (1 - w) * a.thetaK()[k] + w * b.thetaK()[k] - thBg[k];
+                    }
+                }
+                if (progress != null) {
+                    progress.accept(n + 1, nt);
+                }
+            }
+            return fs;
         }
         for (int n = 0; n < nt; n++) {
             if (far != null) {
