@@ -171,7 +171,7 @@ public final class SoundingSampler {
                 int i = siteColumn[s];
                 double w = siteColumnWeight[s];
                 Snapshot a = fast.columnAt(xM[i], tt);
-                Snapshot b = fast.columnAt(xM[i + 1], tt);
+                Snapshot b = w == 0 ? a : fast.columnAt(xM[i + 1], tt);
                 double[][] c = perSite[s];
                 for (int k = 0; k < nz; k++) {
                     c[0][k] = (1 - w) * a.uMPerS()[k] + w * b.uMPerS()[k];

@@ -140,7 +140,7 @@ public final class FieldSections {
                 }
                 for (int site = 0; site < col.length; site++) {
                     Snapshot a = fast.columnAt(xM[col[site]], t);
-                    Snapshot b = fast.columnAt(xM[col[site] + 1], t);
+                    Snapshot b = wx[site] == 0 ? a : fast.columnAt(xM[col[site] + 1], t);
                     double w = wx[site];
                     for (int k = 0; k < nz; k++) {
                         fs.siteU[site][n][k] = (1 - w) * a.uMPerS()[k] + w * b.uMPerS()[k] - uBg[k];
