@@ -57,6 +57,8 @@ public final class BreezeDiagnostics {
 
     /** Half-width of the search for the front's convergence maximum around the onshore reach, m. */
     public static final double FRONT_WINDOW_M = 10_000.0;
+    /** A nonlinear run's arrival at a site counts once the onshore reach from the coast is this close, m. */
+    public static final double ARRIVAL_WINDOW_M = 5_000.0;
 
     public static Result compute(FieldSections fs, List<String> siteNames, double[] siteXM, double threshold) {
         int nt = fs.clockH.length;
@@ -161,7 +163,7 @@ public final class BreezeDiagnostics {
 
     /**
      * Arrival at an inland site of a nonlinear run: as {@link #firstOnshore}, but only once the breeze's
-     * onshore reach from the coast has come within {@link #FRONT_WINDOW_M} of the site, so that a gust of
+     * onshore reach from the coast has come within {@link #ARRIVAL_WINDOW_M} of the site, so that a gust of
      * resolved convection ahead of the front does not count. If the total wind is already in the onshore
      * sector when the front comes near (a gust that stayed), the arrival is that time. Null when the reach
      * never comes near, or the wind never turns onshore after it has.
@@ -169,7 +171,7 @@ public final class BreezeDiagnostics {
     static Double onshoreAfterFront(double[] t, double[] cross, double[] along, double threshold, double[] reachM, double x) {
         int n0 = -1;
         for (int n = 0; n < t.length; n++) {
-            if (!Double.isNaN(reachM[n]) && reachM[n] >= x - FRONT_WINDOW_M) {
+            if (!Double.isNaN(reachM[n]) && reachM[n] >= x - ARRIVAL_WINDOW_M) {
                 n0 = n;
                 break;
             }

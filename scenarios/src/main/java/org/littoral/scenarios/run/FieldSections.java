@@ -14,7 +14,7 @@ import org.littoral.model.field.Snapshot;
  * at each site, time-height sections of u', the alongshore breeze v' and theta'. The "breeze" is the
  * model wind minus the ambient wind, so an onshore perturbation shows even against offshore flow. For a
  * nonlinear run ({@link FarFieldSolution}) the ambient wind is its far-field reference at the same time
- * and height, which has the same drag, turning and spin-up but no coast.
+ * and height: the run's own median wind far inland, which has the same drag, turning and spin-up.
  * Each output time costs one snapshot, which is not kept.
  */
 public final class FieldSections {
@@ -120,7 +120,8 @@ public final class FieldSections {
         FarFieldSolution far = sol instanceof FarFieldSolution ff ? ff : null;
         if (far != null) {
             fs.interiorFromM = far.interiorFromM();
-            fs.interiorToM = far.interiorToM();
+            // the landward end of the search is where the reference band begins
+            fs.interiorToM = Math.min(far.interiorToM(), far.referenceBandM()[0]);
             fs.arrivalFollowsFront = true;
         }
         if (far == null && sol instanceof FieldSampling fast) {
@@ -155,13 +156,13 @@ public final class FieldSections {
             return fs;
         }
         for (int n = 0; n < nt; n++) {
+            Snapshot s = sol.snapshotAt(fs.modelSec[n]);
             if (far != null) {
-                double[][] ref = far.farFieldWindAt(fs.modelSec[n]);
+                double[][] ref = far.farFieldWind(s);
                 System.arraycopy(ref[0], 0, uBg, 0, nz);
                 System.arraycopy(ref[1], 0, vBg, 0, nz);
                 ambientNear = (1 - wz) * uBg[k0] + wz * uBg[k0 + 1];
             }
-            Snapshot s = sol.snapshotAt(fs.modelSec[n]);
             double[] u = s.uMPerS();
             double[] v = s.vMPerS();
             for (int i = 0; i < nx; i++) {

@@ -9,10 +9,9 @@ import org.littoral.scenarios.cli.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**
- * Runs the nonlinear 2D model on a scenario ({@link Scenario#toNonlinearConfig()}), together with its
- * far-field reference ({@link Scenario#toNonlinearFarFieldConfig()}: a few columns of the inland surface,
- * a few per cent of the cost), against which the run pipeline measures the breeze. A blow-up becomes one
- * line naming the local time, the place and what to change in the scenario.
+ * Runs the nonlinear 2D model on a scenario ({@link Scenario#toNonlinearConfig()}) and wraps it with the
+ * far-field reference the run pipeline measures the breeze against ({@link FarFieldSolution}). A blow-up
+ * becomes one line naming the local time, the place and what to change in the scenario.
  */
 final class NonlinearSolver {
     private NonlinearSolver() {
@@ -20,22 +19,18 @@ final class NonlinearSolver {
 
     static FarFieldSolution solve(Scenario scenario) {
         NonlinearConfig main;
-        NonlinearConfig far;
         try {
             main = scenario.toNonlinearConfig();
-            far = scenario.toNonlinearFarFieldConfig();
         } catch (IllegalArgumentException e) {
             throw new UserInputException(scenario.source() + ": kind nonlinear: " + e.getMessage(), e);
         }
-        NonlinearSolution ref;
         NonlinearSolution sol;
         try {
-            ref = NonlinearModel.run(far);
             sol = NonlinearModel.run(main);
         } catch (ModelBlowUpException e) {
             throw blowUp(scenario, e);
         }
-        return new FarFieldSolution(sol, ref, main.damping().lateralSpongeWidthM());
+        return new FarFieldSolution(sol, main.damping().lateralSpongeWidthM());
     }
 
     /** The one-line message of a blown-up run, in the scenario's terms (keys, local clock time). */

@@ -75,7 +75,7 @@ public final class ScenarioRun {
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, siteX, out.onshoreThresholdMPerS());
         Snapshot peak = sol.snapshotAt(fs.modelSec[d.peakTimeIndex()]);
         BreezeDiagnostics.Circulation circ = sol instanceof FarFieldSolution far
-                ? BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, far.farFieldWindAt(fs.modelSec[d.peakTimeIndex()])[0], d.peakClockH(),
+                ? BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, far.farFieldWind(peak)[0], d.peakClockH(),
                         d.peakXM(), out.nearSurfaceM())
                 : BreezeDiagnostics.circulation(peak, fs.xM, fs.zM, sol.background(), d.peakClockH(), d.peakXM(), out.nearSurfaceM());
 
@@ -190,22 +190,31 @@ public final class ScenarioRun {
         ObjectNode pen = dg.putObject("max_inland_penetration");
         pen.put("km", round(d.maxPenetrationM() / 1000.0, 3));
         putTime(pen, d.penetrationClockH());
-        if (fs.arrivalFollowsFront && d.penetrationClockH() != null) {
-            for (int n = 0; n < fs.clockH.length; n++) {
+        if (sol instanceof FarFieldSolution far) {
+            for (int n = 0; d.penetrationClockH() != null && n < fs.clockH.length; n++) {
                 if (fs.clockH[n] == d.penetrationClockH() && !Double.isNaN(d.frontXM()[n])) {
                     pen.put("front_x_km", round(d.frontXM()[n] / 1000.0, 3));
                     pen.put("front_convergence_per_s", d.frontConvergencePerS()[n]);
-                    pen.put("front_note", "front = strongest near-surface convergence within "
+                    pen.put("front_note", "front = strongest near-surface convergence of the total wind within "
                             + round(BreezeDiagnostics.FRONT_WINDOW_M / 1000.0, 1) + " km of the onshore reach");
                 }
+            }
+            if (d.maxPenetrationM() >= fs.interiorToM - 2 * (fs.xM[1] - fs.xM[0])) {
+                pen.put("note", "the onshore flow reached the landward end of the searched interior (the reference band): later times "
+                        + "there are not measured correctly; widen the domain (grid.points) to follow it farther");
             }
             ObjectNode area = dg.putObject("searched_interior");
             area.put("from_km", round(fs.interiorFromM / 1000.0, 3));
             area.put("to_km", round(fs.interiorToM / 1000.0, 3));
-            area.put("note", "peak, penetration and front are searched here, clear of the far-field sponges; the breeze wind is the run "
-                    + "minus its far-field reference (the same model over the inland surface without a coast); arrival at an inland site "
+            double[] band = far.referenceBandM();
+            area.put("reference_band_from_km", round(band[0] / 1000.0, 3));
+            area.put("reference_band_to_km", round(band[1] / 1000.0, 3));
+            area.put("note", "peak, penetration and front are searched here, clear of the far-field sponges and seaward of "
+                    + "the reference band; the breeze wind is the run "
+                    + "minus its far-field reference (the run's median wind over the reference band at each time and height, so it "
+                    + "has the same drag, turning and spin-up; valid while the front has not reached the band); arrival at an inland site "
                     + "counts only once the onshore breeze connected to the coast has come within "
-                    + round(BreezeDiagnostics.FRONT_WINDOW_M / 1000.0, 1) + " km of it (convective gusts ahead of the front do not)");
+                    + round(BreezeDiagnostics.ARRIVAL_WINDOW_M / 1000.0, 1) + " km of it (convective gusts ahead of the front do not)");
         }
         ArrayNode sites = dg.putArray("sites");
         for (BreezeDiagnostics.SiteTiming s : d.sites()) {

@@ -97,26 +97,10 @@ public record Scenario(String name, String description, Kind kind, String source
      * at each end; snapshots stored at the output step or {@link #NONLINEAR_STORE_MAX_S}, whichever is shorter.
      */
     public NonlinearConfig toNonlinearConfig() {
-        return nonlinearBuilder(surface, xGrid, NONLINEAR_SPONGE_M, false).build();
+        return nonlinearBuilder(surface, xGrid, NONLINEAR_SPONGE_M).build();
     }
 
-    /**
-     * The far-field reference of a nonlinear run: the same model and forcing over a few columns of the
-     * inland-most surface only (no coast, no sponges), so it has no breeze but the same boundary layer,
-     * surface drag, turning and spin-up from rest. The run pipeline measures the breeze against it.
-     */
-    public NonlinearConfig toNonlinearFarFieldConfig() {
-        var segs = surface.segments();
-        var last = segs.get(segs.size() - 1);
-        var ref = last instanceof org.littoral.model.coast.SurfaceSegment.Land l
-                ? new org.littoral.model.coast.SurfaceSegment.Land(l.name(), Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
-                        l.albedo(), l.bowenRatio(), l.roughnessM(), l.soilMoistureFraction())
-                : new org.littoral.model.coast.SurfaceSegment.Water(last.name(), Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
-                        ((org.littoral.model.coast.SurfaceSegment.Water) last).seaSurfaceTemperatureK(), last.roughnessM());
-        return nonlinearBuilder(new SurfaceMap(List.of(ref)), HorizontalGrid.centred(4, xGrid.dxM()), 0.0, true).build();
-    }
-
-    private NonlinearConfig.Builder nonlinearBuilder(SurfaceMap map, HorizontalGrid xg, double spongeM, boolean farField) {
+    private NonlinearConfig.Builder nonlinearBuilder(SurfaceMap map, HorizontalGrid xg, double spongeM) {
         double[] span = nonlinearSolarSpanHours();
         NonlinearConfig.Damping std = NonlinearConfig.Damping.standard();
         NonlinearConfig.BoundaryLayer bl = NonlinearConfig.BoundaryLayer.standard();
@@ -129,16 +113,8 @@ public record Scenario(String name, String description, Kind kind, String source
                     bl.marineDepthM(), bl.backgroundDiffusivityM2PerS());
         } else {
             HeatingSpec.ClassicShape c = (HeatingSpec.ClassicShape) heating;
-            if (!farField) {
-                forcing = new Forcing.PrescribedHeating(CanonicalFlows.classicPeriodicHeating(c.amplitudeKPerS(), c.halfWidthM(),
-                        c.depthM(), c.sunriseSolarHours(), xg));
-            } else {
-                // far inland the classic shape tends to pi Q0 exp(-z/H) sin(omega (t - t_r)); over water it is 0
-                double q = map.segments().get(0).isLand() ? Math.PI * c.amplitudeKPerS() : 0.0;
-                double omega = 2 * Math.PI / 86400.0;
-                forcing = new Forcing.PrescribedHeating((x, z, t) -> q * Math.exp(-z / c.depthM())
-                        * Math.sin(omega * (t - c.sunriseSolarHours() * 3600.0)));
-            }
+            forcing = new Forcing.PrescribedHeating(CanonicalFlows.classicPeriodicHeating(c.amplitudeKPerS(), c.halfWidthM(),
+                    c.depthM(), c.sunriseSolarHours(), xg));
         }
         return NonlinearConfig.builder(coast, map, xg, zGrid)
                 .theta(new ThetaProfile.ConstantN(atmosphere.surfaceThetaK(), atmosphere.buoyancyFrequencyPerS()))

@@ -200,16 +200,6 @@ class NonlinearScenarioTest {
     }
 
     @Test
-    void theFarFieldReferenceHasOnlyTheInlandSurfaceAndNoSponges() {
-        NonlinearConfig f = parse("135").toNonlinearFarFieldConfig();
-        assertEquals(1, f.surface().segments().size());
-        SurfaceSegment.Land land = (SurfaceSegment.Land) f.surface().at(-1e7);
-        assertEquals(0.12, land.roughnessM());
-        assertEquals(0.0, f.damping().lateralSpongeWidthM());
-        assertEquals(49, f.zInterfaces().size());
-    }
-
-    @Test
     void aNonlinearGridNeedsOnlyFactorsTwoThreeAndFive() {
         String msg = assertThrows(UserInputException.class,
                 () -> ScenarioFile.parse("nl.yaml", BASE.replace("FROM", "135").replace("points: 400", "points: 448"), false)).getMessage();
