@@ -11,7 +11,7 @@ import picocli.CommandLine.Parameters;
 /** {@code littoral sweep SWEEP --out DIR [--resume] [--threads N]}. */
 @Command(name = "sweep", description = {"Run every member of a sweep or ensemble file on all cores and compare them side by side.",
         "Writes members/<id>.json as each member finishes (atomically; --resume continues a killed sweep), then comparison.csv/json"
-                + " and comparison figures. Built-in sweeps: ambient-flow, ambient-ensemble. The sweep file format is in docs/sweeps.md."})
+                + " and comparison figures. Built-in sweeps: ambient-flow, ambient-ensemble, hypotheses (nonlinear). The sweep file format is in docs/sweeps.md."})
 public final class SweepCommand implements Callable<Integer> {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SWEEP", description = "Sweep file (YAML/JSON) or built-in sweep name.")

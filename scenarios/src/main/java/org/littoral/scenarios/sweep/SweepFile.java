@@ -28,7 +28,7 @@ public final class SweepFile {
     /** Built-in sweep files live here as {@code <name>.yaml}. */
     public static final String BUILTIN_FOLDER = "/org/littoral/scenarios/builtin/sweeps/";
     /** Built-in sweeps shipped with littoral. */
-    public static final List<String> BUILTINS = List.of("ambient-flow", "ambient-ensemble", "quillmarsh-ambient");
+    public static final List<String> BUILTINS = List.of("ambient-flow", "ambient-ensemble", "quillmarsh-ambient", "hypotheses");
 
     private static final Set<String> TOP_KEYS = Set.of("name", "description", "base", "set", "mode", "axes",
             "ensemble", "breeze_typing");

@@ -43,6 +43,23 @@ class BuiltinSweepsTest {
     }
 
     @Test
+    void theHypothesesSweepRunsTheNonlinearModelOverTheFourBreezeTypes() {
+        SweepSpec s = SweepFile.readBuiltin("hypotheses", ScenarioMemberRunner.scenarioSource());
+        List<Member> members = MemberExpander.expand(s);
+        java.util.Map<String, Object> row = new java.util.LinkedHashMap<>();
+        java.util.Set<String> types = new java.util.TreeSet<>();
+        ScenarioMemberRunner r = new ScenarioMemberRunner(s.source(), null, Solver.standard());
+        for (Member m : members) {
+            ComparisonTable.ambient(s.typing(), m.document(), row);
+            types.add((String) row.get("breeze_type"));
+            assertEquals(org.littoral.scenarios.scenario.Scenario.Kind.NONLINEAR, r.scenarioOf(m).kind());
+        }
+        // bearing 135 (sea to the south-east): from 315 offshore, 135 onshore, 225 corkscrew, 45 backdoor (NH)
+        assertEquals(java.util.Set.of("pure", "synoptic", "corkscrew", "backdoor"), types);
+        assertEquals(12, members.size());
+    }
+
+    @Test
     void aMemberTheScenarioReaderRejectsIsNamedBeforeAnythingRuns() throws Exception {
         Path f = tmp.resolve("bad.yaml");
         Files.writeString(f, "base: offshore-ambient\naxes:\n  heating.amplitude_K_per_h: [0.5, 80]\n");
