@@ -91,11 +91,14 @@ public final class CompareCommand implements Callable<Integer> {
         if (days != null) {
             settings.dayAttributes.putAll(DayTableReader.read(days));
         }
+        java.util.Map<String, Double> inland = ObservedSites.inlandM(coastRef);
+        // site names first: a mismatch should not cost a model run
+        Comparison.matchSites(sc, o.profiles(), obs.toString(), inland, new java.util.ArrayList<>());
         Files.createDirectories(out);
         o.qc().writeCsv(out.resolve("qc-log.csv"));
         ScenarioRun.Outcome model = new ScenarioRun(sc, Solver.standard(), progress).run(out.resolve("model"));
         Comparison.Result r = Comparison.compute(new Comparison.Inputs(sc, model, o.profiles(), coast, settings, breezeType,
-                obs.toString(), ObservedSites.inlandM(coastRef)));
+                obs.toString(), inland));
         CompareOutputs.Written w = CompareOutputs.write(out, r, sc.source(), obs.toString());
         return new Outcome(r, model, w);
     }

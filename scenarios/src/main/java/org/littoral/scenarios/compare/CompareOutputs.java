@@ -20,6 +20,7 @@ import org.littoral.scenarios.report.FigureGrid;
 import org.littoral.scenarios.report.HtmlReport;
 import org.littoral.scenarios.report.NiceTicks;
 import org.littoral.scenarios.report.PngWriter;
+import org.littoral.scenarios.report.ScatterFigure;
 import org.littoral.scenarios.report.Table;
 import org.littoral.scenarios.report.TableWriter;
 import org.littoral.scenarios.run.ScenarioRun;
@@ -56,9 +57,15 @@ public final class CompareOutputs {
             figures.add(p);
             figs.add(f);
         }
+        Figure timing = passageFigure(r.passages());
+        if (timing != null) {
+            Path p = out.resolve("passage-times.png");
+            PngWriter.write(timing, p);
+            figures.add(p);
+        }
         files.addAll(figures);
         Path report = out.resolve("report.html");
-        report(r, scenarioRef, observedLabel, metrics, passages, summary, figs).write(report);
+        report(r, scenarioRef, observedLabel, metrics, passages, summary, figs, timing).write(report);
         files.add(report);
         return new Written(files, figures, report);
     }
@@ -144,6 +151,42 @@ public final class CompareOutputs {
         ArrayNode notes = root.putArray("notes");
         r.notes().forEach(notes::add);
         return root;
+    }
+
+    /** Model passage times (chain and front arrival) against the observed ones, per site; null when there is nothing to plot. */
+    public static Figure passageFigure(List<PassageError> rows) {
+        ScatterFigure.Builder b = ScatterFigure.builder().size(720, 520).title("Passage time: model against observed")
+                .x("Observed passage, local time", "h").y("Model passage, local time", "h").identityLine();
+        java.util.TreeSet<String> sites = new java.util.TreeSet<>();
+        for (PassageError p : rows) {
+            sites.add(p.site());
+        }
+        int series = 0;
+        for (String site : sites) {
+            for (int kind = 0; kind < 2; kind++) {
+                List<double[]> pts = new ArrayList<>();
+                for (PassageError p : rows) {
+                    double m = kind == 0 ? p.modelArrivalH() : p.modelChainH();
+                    if (p.site().equals(site) && Double.isFinite(p.observedH()) && Double.isFinite(m)) {
+                        pts.add(new double[] {p.observedH(), m, Double.isFinite(p.observedUncertaintyH()) ? p.observedUncertaintyH() : 0});
+                    }
+                }
+                if (pts.isEmpty()) {
+                    continue;
+                }
+                double[] x = new double[pts.size()];
+                double[] y = new double[pts.size()];
+                double[] ex = new double[pts.size()];
+                for (int i = 0; i < x.length; i++) {
+                    x[i] = pts.get(i)[0];
+                    y[i] = pts.get(i)[1];
+                    ex[i] = pts.get(i)[2];
+                }
+                b.points(site + (kind == 0 ? ": model front arrival" : ": chain on model soundings"), x, y, ex, null);
+                series++;
+            }
+        }
+        return series == 0 ? null : b.build();
     }
 
     /** Observed | model, cross-shore wind above, theta below, each pair on one colour scale. */
@@ -233,7 +276,7 @@ public final class CompareOutputs {
     }
 
     static HtmlReport report(Comparison.Result r, String scenarioRef, String observedLabel, Table metrics, Table passages,
-                             Table summary, List<Figure> figs) {
+                             Table summary, List<Figure> figs, Figure timing) {
         HtmlReport h = HtmlReport.create("Model against observations: " + r.scenarioName())
                 .meta("scenario", scenarioRef).meta("model", r.modelName()).meta("observations", observedLabel)
                 .meta("compared", r.selection());
@@ -263,6 +306,11 @@ public final class CompareOutputs {
                 + "passage in the model's synthetic soundings, 'arrival' the model's own front arrival (total near-surface wind "
                 + "entering the onshore sector, run.BreezeDiagnostics). Errors in hours, model minus observed.");
         h.table("Passage-time errors per site (mean and RMSE over the days with both passages).", summary);
+        if (timing != null) {
+            h.figure(timing, "Model against observed passage time, one point per site and observed day with an onshore "
+                    + "passage (horizontal bars: the observed passage's timing uncertainty). Points on the diagonal would be "
+                    + "perfect timing; above it the model is late. The model has one day, so each site's model times form a row.");
+        }
         h.table("Passage times and errors per site and day (local clock hours).", passages);
         h.section("Time-height sections");
         for (int i = 0; i < figs.size(); i++) {

@@ -118,7 +118,7 @@ public final class Comparison {
         AnalysisSettings settings = in.settings().validate();
         Scenario sc = in.scenario();
         List<String> notes = new ArrayList<>();
-        Map<String, VirtualSite> modelSites = matchSites(in, notes);
+        Map<String, VirtualSite> modelSites = matchSites(sc, in.observed(), in.observedLabel(), in.observedSiteInlandM(), notes);
         checkCoasts(sc.coast(), in.observedCoast(), in.observedLabel(), notes);
 
         AnalysisResult obs = AnalysisChain.run(in.observed(), in.observedCoast(), settings);
@@ -274,30 +274,36 @@ public final class Comparison {
         return new double[] {lo, hi};
     }
 
-    /** Observed sites by name in the scenario's sites; inland distances checked when the coast file lists them. */
-    static Map<String, VirtualSite> matchSites(Inputs in, List<String> notes) {
+    /**
+     * Observed sites by name in the scenario's sites (one-line error listing both sets otherwise); inland
+     * distances checked when the coast file lists them. Cheap: call it before running the model.
+     *
+     * @return the scenario sites that have observations, by name
+     */
+    public static Map<String, VirtualSite> matchSites(Scenario scenario, List<Profile> observedProfiles, String observedLabel,
+                                                      Map<String, Double> observedSiteInlandM, List<String> notes) {
         Map<String, VirtualSite> bySite = new LinkedHashMap<>();
-        for (VirtualSite v : in.scenario().sites()) {
+        for (VirtualSite v : scenario.sites()) {
             bySite.put(v.name(), v);
         }
         Set<String> observed = new TreeSet<>();
-        for (Profile p : in.observed()) {
+        for (Profile p : observedProfiles) {
             observed.add(p.site());
         }
         Set<String> missing = new TreeSet<>(observed);
         missing.removeAll(bySite.keySet());
         if (!missing.isEmpty()) {
-            throw new UserInputException(in.observedLabel() + ": observed site(s) " + missing + " are not sites of scenario "
-                    + in.scenario().source() + "; observed sites " + observed + ", scenario sites " + bySite.keySet()
+            throw new UserInputException(observedLabel + ": observed site(s) " + missing + " are not sites of scenario "
+                    + scenario.source() + "; observed sites " + observed + ", scenario sites " + bySite.keySet()
                     + "; give the scenario's sites: the observed names and inland_km");
         }
-        for (Map.Entry<String, Double> e : in.observedSiteInlandM().entrySet()) {
+        for (Map.Entry<String, Double> e : observedSiteInlandM.entrySet()) {
             VirtualSite v = bySite.get(e.getKey());
             if (v != null && Math.abs(v.inlandDistanceM() - e.getValue()) > SITE_DISTANCE_TOLERANCE_M) {
                 throw new UserInputException(String.format(Locale.ROOT,
                         "site %s is %.2f km inland in the coast file but %.2f km in scenario %s (tolerance %.2f km); "
                                 + "make sites.inland_km agree", e.getKey(), e.getValue() / 1000.0, v.inlandDistanceM() / 1000.0,
-                        in.scenario().source(), SITE_DISTANCE_TOLERANCE_M / 1000.0));
+                        scenario.source(), SITE_DISTANCE_TOLERANCE_M / 1000.0));
             }
         }
         Map<String, VirtualSite> out = new LinkedHashMap<>();

@@ -99,6 +99,17 @@ class CompareSelfTest {
     }
 
     @Test
+    void aSiteAtAnotherInlandDistanceInTheCoastFileIsAnErrorNamingBothDistances() {
+        String site = scenario.sites().get(0).name();
+        double km = scenario.sites().get(0).inlandDistanceM() / 1000.0;
+        UserInputException e = assertThrows(UserInputException.class, () -> Comparison.compute(new Comparison.Inputs(scenario,
+                model, model.profiles(), scenario.coast(), new AnalysisSettings(), "all", "test observations",
+                Map.of(site, (km + 1.0) * 1000.0))));
+        assertTrue(e.getMessage().contains(site) && e.getMessage().contains(String.format(java.util.Locale.ROOT, "%.2f km", km + 1.0))
+                && e.getMessage().contains(String.format(java.util.Locale.ROOT, "%.2f km", km)), e.getMessage());
+    }
+
+    @Test
     void observationsOutsideTheModelsFlightTimesAreAOneLineErrorWithBothSpans() {
         List<Profile> night = new ArrayList<>();
         for (Profile p : model.profiles()) {
@@ -126,7 +137,7 @@ class CompareSelfTest {
                 "report.html", "model/summary.json")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
         }
-        assertEquals(scenario.sites().size(), o.figures().size());
+        assertEquals(scenario.sites().size() + 1, o.figures().size(), "one section per site and the passage-time figure");
         String html = Files.readString(o.report());
         assertEquals(o.figures().size(), html.split("data:image/png;base64,", -1).length - 1);
         assertTrue(html.contains("not a weather forecast"));
