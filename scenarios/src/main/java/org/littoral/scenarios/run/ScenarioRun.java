@@ -32,6 +32,7 @@ public final class ScenarioRun {
     private final Scenario scenario;
     private final Solver solver;
     private final PrintStream progress;
+    private boolean figures = true;
 
     /** Everything a run produced, for callers and tests. */
     public record Outcome(BreezeSolution solution, List<Profile> profiles, FieldSections sections,
@@ -44,6 +45,12 @@ public final class ScenarioRun {
         this.scenario = scenario;
         this.solver = solver;
         this.progress = progress;
+    }
+
+    /** Whether to draw the PNG figures (default true; sweeps switch them off for speed). Returns this. */
+    public ScenarioRun figures(boolean draw) {
+        this.figures = draw;
+        return this;
     }
 
     private void say(String msg) {
@@ -86,6 +93,9 @@ public final class ScenarioRun {
         Path section = outDir.resolve("near_surface_breeze.csv");
         AtomicWrite.write(section, timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
         files.add(section);
+        if (figures) {
+            files.addAll(RunFigures.write(fs, d, names, siteX, scenario.name(), sol.modelName(), outDir));
+        }
         say("wrote " + profiles.size() + " soundings");
         Path summaryPath = outDir.resolve("summary.json");
         files.add(summaryPath);

@@ -81,7 +81,7 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
         try {
             dir = scratch ? Files.createTempDirectory("littoral-member-") : runsDir.resolve(m.id());
             Files.createDirectories(dir);
-            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).run(dir);
+            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).run(dir);
             return new MemberResult(trim(o.summary()));
         } catch (IOException e) {
             throw new UncheckedIOException("member " + m.id() + ": cannot write its run files to " + dir, e);

@@ -85,6 +85,17 @@ class NonlinearDiagnosticsTest {
         assertTrue(Files.exists(dir.resolve("soundings.csv")));
     }
 
+    @Test
+    void theTimeDistanceAndSiteFiguresAreWrittenAsPngs() throws Exception {
+        for (String f : new String[] {"near_surface_breeze.png", "site_shore-3km_breeze.png", "site_plain-50km_breeze.png"}) {
+            java.awt.image.BufferedImage img = javax.imageio.ImageIO.read(dir.resolve(f).toFile());
+            assertNotNull(img, f);
+            assertTrue(img.getWidth() >= 1000, f);
+        }
+        JsonNode s = new ObjectMapper().readTree(dir.resolve("summary.json").toFile());
+        assertTrue(s.get("files").toString().contains("near_surface_breeze.png"));
+    }
+
     static double max(double[] a) {
         double m = 0;
         for (double v : a) {
