@@ -517,11 +517,10 @@ public final class NonlinearModel {
     // ---------------------------------------------------------------- explicit tendencies
 
     private void tendencies(double t) {
-        java.util.Arrays.fill(tu, 0.0);
-        java.util.Arrays.fill(tv, 0.0);
-        java.util.Arrays.fill(tw, 0.0);
-        java.util.Arrays.fill(tth, 0.0);
-        java.util.Arrays.fill(tq, 0.0);
+        // the advection routines write (not add to) their tendency arrays: they start every tendency
+        // from zero; w at the ground and the lid has no tendency
+        java.util.Arrays.fill(tw, 0, nx, 0.0);
+        java.util.Arrays.fill(tw, nz * nx, (nz + 1) * nx, 0.0);
         advectU();
         advectCentre3(v, tv);
         advectW();
@@ -655,7 +654,7 @@ public final class NonlinearModel {
             shift(fx, 0, 1, fxs);
             if (lin) {
                 for (int i = 0; i < nx; i++) {
-                    ts[o + i] -= (fxs[i] - fx[i]) * invDx;
+                    ts[o + i] = 0.0 - (fxs[i] - fx[i]) * invDx;
                 }
                 continue;
             }
@@ -677,7 +676,7 @@ public final class NonlinearModel {
             }
             double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
-                double t = ts[o + i] - (fxs[i] - fx[i]) * invDx;
+                double t = 0.0 - (fxs[i] - fx[i]) * invDx;
                 ts[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
                 fzBot[i] = fzTop[i];
                 slopeA[i] = slopeB[i];
@@ -730,7 +729,7 @@ public final class NonlinearModel {
             shift(fx, 0, 1, fxs);
             if (lin) {
                 for (int i = 0; i < nx; i++) {
-                    ts[o + i] -= (fxs[i] - fx[i]) * invDx;
+                    ts[o + i] = 0.0 - (fxs[i] - fx[i]) * invDx;
                 }
                 continue;
             }
@@ -752,7 +751,7 @@ public final class NonlinearModel {
             }
             double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
-                double t = ts[o + i] - (fxs[i] - fx[i]) * invDx;
+                double t = 0.0 - (fxs[i] - fx[i]) * invDx;
                 ts[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
                 fzBot[i] = fzTop[i];
             }
@@ -780,7 +779,7 @@ public final class NonlinearModel {
             shift(fx, 0, -1, fxs);
             if (lin) {
                 for (int i = 0; i < nx; i++) {
-                    tu[o + i] -= (fx[i] - fxs[i]) * invDx;
+                    tu[o + i] = 0.0 - (fx[i] - fxs[i]) * invDx;
                 }
                 continue;
             }
@@ -807,7 +806,7 @@ public final class NonlinearModel {
             }
             double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
-                double t = tu[o + i] - (fx[i] - fxs[i]) * invDx;
+                double t = 0.0 - (fx[i] - fxs[i]) * invDx;
                 tu[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
                 fzBot[i] = fzTop[i];
             }
@@ -835,7 +834,7 @@ public final class NonlinearModel {
                 }
                 shift(fx, 0, -1, fxs);
                 for (int i = 0; i < nx; i++) {
-                    tw[o + i] -= (fx[i] - fxs[i]) * invDx;
+                    tw[o + i] = 0.0 - (fx[i] - fxs[i]) * invDx;
                 }
                 continue;
             }
@@ -862,7 +861,7 @@ public final class NonlinearModel {
             }
             double idz = 1.0 / g.dzc[k];
             for (int i = 0; i < nx; i++) {
-                double t = tw[o + i] - (fx[i] - fxs[i]) * invDx;
+                double t = 0.0 - (fx[i] - fxs[i]) * invDx;
                 tw[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
                 fzBot[i] = fzTop[i];
             }
