@@ -226,6 +226,7 @@ public final class NonlinearModel {
         hWork = new double[nx];
         kIface = new double[(nz + 1) * nx];
         cgFactor = new double[nx];
+        dtOverDz = new double[nz];
         dragCol = new double[nx];
         dragFace = new double[nx];
         fluxCol = new double[nx];
@@ -1089,22 +1090,22 @@ public final class NonlinearModel {
      * into the lowest layer and the explicit divergence of the non-local flux cgCol * max(0, K - K_bg).
      */
     private void solveFactorised(double[] s, double[] m, double[] b, double dt, double kb) {
-        double[] r = triR;
         for (int k = 0; k < nz; k++) {
-            int o = k * nx;
-            boolean top = k + 1 < nz;
-            boolean bot = k > 0;
-            double dtOverDz = dt / g.dzf[k];
-            for (int i = 0; i < nx; i++) {
-                double rr = s[o + i];
-                double cg = cgCol[i];
-                if (cg != 0.0) {
-                    // explicit divergence of the non-local flux K gamma_c through the layer's interfaces
-                    double fTop = top ? Math.max(0.0, triK[o + nx + i] - kb) : 0.0;
-                    double fBot = bot ? Math.max(0.0, triK[o + i] - kb) : 0.0;
-                    rr -= dtOverDz * cg * (fTop - fBot);
-                }
-                r[o + i] = rr;
+            dtOverDz[k] = dt / g.dzf[k];
+        }
+        double[] r = triR;
+        System.arraycopy(s, 0, r, 0, nz * nx);
+        for (int i = 0; i < nx; i++) {
+            double cg = cgCol[i];
+            if (cg == 0.0) {
+                continue;
+            }
+            // explicit divergence of the non-local flux K gamma_c through the layer's interfaces
+            for (int k = 0; k < nz; k++) {
+                int n = k * nx + i;
+                double fTop = k + 1 < nz ? Math.max(0.0, triK[n + nx] - kb) : 0.0;
+                double fBot = k > 0 ? Math.max(0.0, triK[n] - kb) : 0.0;
+                r[n] -= dtOverDz[k] * cg * (fTop - fBot);
             }
         }
         double fluxFactor = dt / g.dzf[0];
@@ -1129,6 +1130,7 @@ public final class NonlinearModel {
         }
     }
 
+    private final double[] dtOverDz;
     private final double[] dragCol;
     private final double[] dragFace;
     private final double[] fluxCol;
