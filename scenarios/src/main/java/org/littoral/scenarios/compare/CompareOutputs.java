@@ -79,7 +79,7 @@ public final class CompareOutputs {
         return p;
     }
 
-    static Table metricsTable(List<MetricRow> rows) {
+    public static Table metricsTable(List<MetricRow> rows) {
         Table t = Table.of("site", "layer", "variable", "n", "bias", "rmse", "mean_observed", "mean_model", "unit");
         for (MetricRow m : rows) {
             t.row(m.site(), m.layer(), m.variable(), m.n(), m.bias(), m.rmse(), m.meanObserved(), m.meanModel(), m.unit());
@@ -95,7 +95,7 @@ public final class CompareOutputs {
         return t;
     }
 
-    static Table passageTable(List<PassageError> rows) {
+    public static Table passageTable(List<PassageError> rows) {
         Table t = Table.of("day", "site", "inland_km", "observed_passage_local_h", "observed_uncertainty_h",
                 "model_chain_passage_local_h", "model_front_arrival_local_h", "chain_minus_observed_h",
                 "arrival_minus_observed_h", "chain_minus_arrival_h", "note");
@@ -110,7 +110,7 @@ public final class CompareOutputs {
         return t;
     }
 
-    static Table passageSummaryTable(List<PassageSummary> rows) {
+    public static Table passageSummaryTable(List<PassageSummary> rows) {
         Table t = Table.of("site", "days", "days_with_observed_passage", "model_chain_passage_local_h",
                 "model_front_arrival_local_h", "n_chain", "mean_chain_error_h", "rmse_chain_error_h", "n_arrival",
                 "mean_arrival_error_h", "rmse_arrival_error_h");

@@ -66,13 +66,18 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--resume", description = "Keep sweep and plan members already computed in DIR.")
     boolean resume;
 
+    /** Scenario compared with the observations (the invented coast on a weak-offshore day). */
+    static final String COMPARE_SCENARIO = "quillmarsh-reach";
+    /** The day whose passage times the demo checks. */
+    static final String CHECK_DAY = "2031-06-25";
+
     /** Plan run by the demo (the invented coast). */
     static final String PLAN = "quillmarsh-plan";
 
     @Override
     public Integer call() throws Exception {
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        Progress p = new Progress(System.err, 4);
+        Progress p = new Progress(System.err, 6);
         Files.createDirectories(out);
         HtmlReport rep = HtmlReport.create("littoral demo: the INVENTED Quillmarsh Reach campaign");
         rep.meta("data", "INVENTED demonstration data (not observations), " + data);
@@ -104,6 +109,12 @@ public final class DemoCommand implements Callable<Integer> {
                 + "variables), response metrics, composites and group statistics. Full tables: observe/.");
         skillTable(rep, ar, settings, coast, dataDir.resolve("truth").resolve("passages.csv"));
         AnalysisReport.addSections(rep, ar, o.qc(), figs, true);
+
+        p.step("model against the observations (" + COMPARE_SCENARIO + ", pure days)");
+        compareSection(rep, dataDir, out.resolve("compare"));
+
+        p.step("timing check of the observed passages on " + CHECK_DAY);
+        timingSection(rep, dataDir, obsDir.resolve("passages.csv"), out.resolve("check-timing"), n);
 
         p.step("site and cadence plan for the invented coast (" + PLAN + ")");
         PlanSpec plan = PlanFile.load(PLAN);
@@ -144,7 +155,11 @@ public final class DemoCommand implements Callable<Integer> {
                         + "and depth? A sweep of the model over the ambient wind.",
                 "2. The observations: what passages, responses and group differences does the analysis chain find in the "
                         + "demo campaign, and how well do its detectors recover the known passage times?",
-                "3. Planning: where should two sites go on this coast, and is a denser cadence around the front worth it?"));
+                "3. Model and observations: how far is the model's weak-offshore day from the observed ones, site by "
+                        + "site and layer by layer, and in passage time?",
+                "4. Timing: are the passage times found on one day consistent with the plausible range and with the "
+                        + "front's physics, or is one of them suspect?",
+                "5. Planning: where should two sites go on this coast, and is a denser cadence around the front worth it?"));
     }
 
     private static void sweepSection(HtmlReport rep, SweepCommand.Result sr) throws IOException {
@@ -158,6 +173,53 @@ public final class DemoCommand implements Callable<Integer> {
         rep.table("The sweep's main results per member (sweep/comparison.csv has every column). Arrival: the first time the "
                 + "total near-surface wind turns into the onshore sector at the site; empty where it never does (onshore all day, "
                 + "or the breeze never overcomes the ambient wind).", compactSweepTable(sr.table()));
+    }
+
+    private static void compareSection(HtmlReport rep, Path dataDir, Path dir) throws IOException {
+        org.littoral.scenarios.compare.CompareCommand.Outcome o = org.littoral.scenarios.compare.CompareCommand.run(
+                COMPARE_SCENARIO, dataDir.resolve("binned/profiles-binned.csv.gz"), dataDir.resolve("coast.yaml").toString(),
+                dataDir.resolve("days.csv"), "scenario", dir, null);
+        org.littoral.scenarios.compare.Comparison.Result r = o.result();
+        rep.section("The model against the observations");
+        rep.paragraph("The built-in scenario " + COMPARE_SCENARIO + " (the invented coast on a weak-offshore day, "
+                + r.modelName() + " model) was run once; its synthetic soundings at the two sites went through the same "
+                + "analysis chain as the observations, and were compared with the " + r.days().size() + " observed days of the "
+                + "same breeze type (" + r.pairs() + " paired profiles). Full tables and the per-day metrics: compare/.");
+        if (!r.notes().isEmpty()) {
+            rep.bullets(r.notes());
+        }
+        rep.table("Bias (model minus observed) and RMSE per site, layer and variable; wind direction differences are "
+                + "circular (wrapped to +/-180 deg).", org.littoral.scenarios.compare.CompareOutputs.metricsTable(r.metrics()));
+        rep.table("Passage-time error per site: the chain's passage in the model soundings, and the model's own front "
+                + "arrival, minus the observed passage (hours).",
+                org.littoral.scenarios.compare.CompareOutputs.passageSummaryTable(r.passageSummaries()));
+        for (Path f : o.figures()) {
+            byte[] png = Files.readAllBytes(f);
+            rep.figurePng(png, pngWidth(png), "Time-height sections at " + f.getFileName().toString()
+                    .replaceFirst("^section-", "").replaceFirst("\\.png$", "") + ": observed composite (left) and model (right) "
+                    + "on the same colour scale.");
+        }
+    }
+
+    private static void timingSection(HtmlReport rep, Path dataDir, Path passages, Path dir, int threads) throws IOException {
+        Path day = dataDir.resolve("check-timing-" + CHECK_DAY + ".yaml");
+        rep.section("Timing check of the observed passages");
+        if (!Files.isRegularFile(day)) {
+            rep.paragraph("Not run: the day file " + day + " is not in the data folder (it ships in demo-data/).");
+            return;
+        }
+        org.littoral.scenarios.timing.CheckTimingResult c = org.littoral.scenarios.timing.CheckTimingCommand.run(passages, day,
+                dir, new org.littoral.scenarios.timing.CheckTimingCommand.Options(null, threads, false,
+                        new PrintStream(java.io.OutputStream.nullOutputStream(), false, java.nio.charset.StandardCharsets.UTF_8),
+                        false));
+        rep.paragraph("The passages the chain found on " + CHECK_DAY + " (observe/passages.csv) against an ensemble of "
+                + c.members() + " plausible versions of that day (" + c.model() + " model; day file " + day.getFileName()
+                + "), and the speed implied between the sites against a density-current speed from the day's temperature "
+                + "contrast and breeze depth (Benjamin 1968; Simpson & Britter 1980). A flag is advice, never an edit of the "
+                + "data. Full outputs: check-timing/.");
+        rep.figure(c.figure(), c.figureCaption());
+        rep.table("Flags raised, with their reasons (none: the timings are consistent).", c.flagsTable());
+        rep.table("Where each observed passage falls in the ensemble's arrival times.", c.envelopeTable());
     }
 
     /** Member, ambient wind, breeze type, peak breeze, depth, penetration and the arrival at each site. */
