@@ -120,8 +120,7 @@ public final class DemoCommand implements Callable<Integer> {
         PlanSpec plan = PlanFile.load(PLAN);
         PlanCommand.PlanOutcome po = PlanCommand.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
         List<PlanReport.Captioned> pf = PlanReport.figures(plan, po.result());
-        rep.paragraph("");
-        PlanReport.addSections(rep, plan, po.result(), po.windows(), pf);
+        PlanReport.addSections(rep, plan, po.result(), po.windows(), pf, true);
 
         rep.section("Cautions");
         rep.cautions();

@@ -78,7 +78,8 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
         double[] out = new double[x.length];
         for (int i = 0; i < x.length; i++) {
             Double a = d.sites().get(i).arrivalClockH();
-            out[i] = a == null ? Double.NaN : a;
+            // an arrival after the last launch (a night-time turn of the wind) is no arrival for the campaign's day
+            out[i] = a == null || a > plan.operatingEndH() ? Double.NaN : a;
         }
         return out;
     }

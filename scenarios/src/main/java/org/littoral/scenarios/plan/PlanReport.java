@@ -40,7 +40,7 @@ public final class PlanReport {
         rep.meta("model", model);
         rep.meta("members", r.members + (r.failedMembers > 0 ? " (" + r.failedMembers + " failed)" : ""));
         rep.caution("Planning advice, not a forecast.", PlanOutputs.CAUTION);
-        addSections(rep, plan, r, windows, figs);
+        addSections(rep, plan, r, windows, figs, false);
         rep.cautions();
         rep.write(dir.resolve("report.html"));
     }
@@ -99,7 +99,9 @@ public final class PlanReport {
     }
 
     /** Adds the plan sections (recommendations, figures, windows, arrival table) to {@code rep}. */
-    public static void addSections(HtmlReport rep, PlanSpec plan, PlanResult r, DenseWindow[][] windows, List<Captioned> figs) {
+    /** @param compact true inside a larger report (the demo): the arrival table every 5 km, no per-distance table */
+    public static void addSections(HtmlReport rep, PlanSpec plan, PlanResult r, DenseWindow[][] windows, List<Captioned> figs,
+                                   boolean compact) {
         rep.section("Recommended site sets and cadences");
         rep.paragraph(String.format(Locale.ROOT, "%d ensemble members of %s; %d candidate distances (%s km), %d sites per set, "
                 + "operating hours %s-%s, profiles to %.0f m. Ranking score: %s.", r.members, plan.ensemble().baseLabel(),
@@ -134,12 +136,19 @@ public final class PlanReport {
         }
         Table f = Table.of("km", "members with arrival", "5 %", "25 %", "median", "75 %", "95 %");
         for (PlanResult.FanRow row : r.fan) {
+            if (compact && Math.abs(row.distanceKm() / 5.0 - Math.rint(row.distanceKm() / 5.0)) > 1e-9 && row.distanceKm() != 1.0) {
+                continue;
+            }
             f.row(row.distanceKm(), String.format(Locale.ROOT, "%.0f %%", 100 * row.fractionArriving()), PlanOutputs.clock(row.p5()),
                     PlanOutputs.clock(row.p25()), PlanOutputs.clock(row.p50()), PlanOutputs.clock(row.p75()),
                     PlanOutputs.clock(row.p95()));
         }
         f.decimals("km", 1);
-        rep.table("Percentiles of the model arrival time (local clock) at each candidate distance.", f);
+        rep.table("Percentiles of the model arrival time (local clock) at " + (compact ? "candidate distances every 5 km "
+                + "(arrival-fan.csv has them all)." : "each candidate distance."), f);
+        if (compact) {
+            return;
+        }
         Table w = Table.of("cadence", "km", "dense window (local)", "P(front arrives)", "P(captured)", "flights/day", "feasible");
         for (PlanResult.SiteRow s : r.sites) {
             w.row(s.cadence(), s.distanceKm(), Double.isNaN(s.denseStartH()) ? "none"

@@ -129,7 +129,7 @@ public final class HtmlReport {
     public HtmlReport table(String caption, Table t) {
         int n = ++tables;
         blocks.add(sb -> {
-            sb.append("<table class=\"data\" id=\"table-").append(n).append("\">\n<caption><b>Table ").append(n)
+            sb.append("<div class=\"tablewrap\"><table class=\"data\" id=\"table-").append(n).append("\">\n<caption><b>Table ").append(n)
                     .append(".</b> ").append(escape(caption)).append("</caption>\n<thead><tr>");
             int nc = t.columns().size();
             boolean[] numeric = new boolean[nc];
@@ -153,7 +153,7 @@ public final class HtmlReport {
                 }
                 sb.append("</tr>\n");
             }
-            sb.append("</tbody>\n</table>\n");
+            sb.append("</tbody>\n</table></div>\n");
         });
         return this;
     }
@@ -319,6 +319,7 @@ public final class HtmlReport {
             "figure{margin:18px 0 24px}figure img{width:100%;height:auto;border:1px solid #eee;display:block}",
             "figcaption{font-size:14px;color:#333;margin-top:6px}",
             "table{border-collapse:collapse;margin:14px 0 22px;font-size:14px}",
+            ".tablewrap{overflow-x:auto;max-width:100%}",
             "table.data caption{caption-side:top;text-align:left;padding-bottom:6px;font-size:14px}",
             "table.data th{background:#f0f2f5;border-bottom:2px solid #ccc;padding:5px 10px;text-align:left}",
             "table.data td{border-bottom:1px solid #e6e6e6;padding:4px 10px}",
