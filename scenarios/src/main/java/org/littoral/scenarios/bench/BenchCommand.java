@@ -20,6 +20,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("nonlinear", new NonlinearBenchmark());
         m.put("linear", new LinearBenchmark());
         m.put("plan", new org.littoral.scenarios.plan.PlanBenchmark());
+        m.put("check-timing", new org.littoral.scenarios.timing.TimingBenchmark());
         return m;
     }
 

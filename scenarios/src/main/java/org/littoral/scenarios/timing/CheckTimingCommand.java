@@ -179,7 +179,8 @@ public final class CheckTimingCommand implements Callable<Integer> {
         for (int s = 0; s < ns; s++) {
             x[s] = spec.sites().get(s).inlandKm() * 1000.0;
         }
-        double fromKm = Math.min(0.5, 0.5 * Math.max(0.1, spec.sites().get(0).inlandKm()));
+        double firstKm = spec.sites().get(0).inlandKm();
+        double fromKm = firstKm <= 0 ? firstKm - 1.0 : Math.min(0.5, 0.5 * firstKm);
         for (int i = 0; i < nf; i++) {
             x[ns + i] = 1000.0 * (fromKm + (toKm - fromKm) * i / (nf - 1));
         }

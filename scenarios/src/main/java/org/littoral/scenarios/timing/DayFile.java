@@ -173,10 +173,11 @@ public final class DayFile {
         double halfKm = 0.5 * bg.get("points").asDouble() * bg.get("spacing_km").asDouble();
         for (int i = 0; i < sites.size(); i++) {
             DaySpec.Site site = sites.get(i);
-            if (!(site.inlandKm() >= 0 && site.inlandKm() < 0.95 * halfKm)) {
-                throw err("sites", "site " + site.name() + " at " + fmt(site.inlandKm()) + " km lies outside 0.."
-                        + fmt(Math.floor(0.95 * halfKm)) + " km, the inland part of the ensemble's domain (ensemble.grid points x "
-                        + "spacing_km = " + fmt(2 * halfKm) + " km, centred on the coast); widen ensemble.grid or check inland_km");
+            if (!(Math.abs(site.inlandKm()) < 0.95 * halfKm)) {
+                throw err("sites", "site " + site.name() + " at " + fmt(site.inlandKm()) + " km lies outside -"
+                        + fmt(Math.floor(0.95 * halfKm)) + ".." + fmt(Math.floor(0.95 * halfKm)) + " km, inside the ensemble's "
+                        + "domain (ensemble.grid points x spacing_km = " + fmt(2 * halfKm) + " km, centred on the coast); widen "
+                        + "ensemble.grid or check inland_km");
             }
         }
         Scenario scenario = scenario(base);
@@ -377,9 +378,9 @@ public final class DayFile {
     private void checkSitesInDomain(List<DaySpec.Site> sites, Scenario s) {
         double lastM = s.xGrid().lastM();
         for (DaySpec.Site site : sites) {
-            if (site.inlandKm() * 1000.0 >= lastM || site.inlandKm() < 0) {
+            if (site.inlandKm() * 1000.0 >= lastM) {
                 throw err("sites", "site " + site.name() + " at " + fmt(site.inlandKm()) + " km lies outside 0.."
-                        + String.format(Locale.ROOT, "%.1f", lastM / 1000.0) + " km, the inland half of the ensemble's domain;"
+                        + String.format(Locale.ROOT, "%.1f", lastM / 1000.0) + " km, the end of the ensemble's domain;"
                         + " widen ensemble.grid (points x spacing_km) or check inland_km");
             }
         }

@@ -65,7 +65,7 @@ class DayFileTest {
         "grid points | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {grid: {points: 300}}' | ensemble.grid.points: value 300 must be a power of two (FFT), e.g. 256",
         "distribution range | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {ambient_speed_m_per_s: {uniform: {from: 0, to: 60}}}' | ensemble.ambient_speed_m_per_s.uniform.to: value 60 is outside the allowed range 0..40 m/s",
         "unknown distribution | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {buoyancy_frequency_per_s: {lognormal: {mu: 1}}}' | ensemble.buoyancy_frequency_per_s: unknown distribution [lognormal]",
-        "site outside domain | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nsites: [{name: far, inland_km: 400}]\\nensemble: {grid: {points: 256, spacing_km: 1}}' | sites: site far at 400 km lies outside 0..",
+        "site outside domain | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nsites: [{name: far, inland_km: 400}]\\nensemble: {grid: {points: 256, spacing_km: 1}}' | sites: site far at 400 km lies outside -121..121 km",
         "all fixed | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {ambient_from_deg: fixed, ambient_speed_m_per_s: fixed, heating_amplitude_K_per_h: fixed, buoyancy_frequency_per_s: fixed}' | ensemble: every uncertain input is fixed",
     })
     void aBadDayFileGetsOneLineNamingTheKeyValueAndAllowedRange(String what, String yaml, String expected) {
