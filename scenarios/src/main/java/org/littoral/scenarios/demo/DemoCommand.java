@@ -59,7 +59,7 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
-    @Option(names = "--sweep", paramLabel = "SWEEP", defaultValue = "quillmarsh-ambient",
+    @Option(names = "--sweep", paramLabel = "SWEEP", defaultValue = "hypotheses",
             description = "Hypothesis sweep to run (built-in name or file; default: ${DEFAULT-VALUE}).")
     String sweepRef;
 

@@ -76,6 +76,10 @@ public final class ComparisonFigures {
             }
             ScatterFigure.Builder b = ScatterFigure.builder().size(PANEL_W, PANEL_H).title(shortName(c))
                     .x("ambient wind speed", "m/s").y(yTitle, yUnit);
+            double[] span = paddedRange(speed);
+            if (span != null) {
+                b.xRange(span[0], span[1]);
+            }
             // every breeze type gets its own marker and colour, so coinciding types (corkscrew and backdoor in
             // the linear model) stay visible as overlapping shapes
             for (Map.Entry<String, double[][]> e : groups.entrySet()) {
@@ -84,6 +88,23 @@ public final class ComparisonFigures {
             panels.add(b.build());
         }
         return panels;
+    }
+
+    /** The speeds' range widened by 10 % (at least 0.5 m/s) each side, so no point sits on the frame; null without data. */
+    static double[] paddedRange(double[] v) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double x : v) {
+            if (!Double.isNaN(x)) {
+                lo = Math.min(lo, x);
+                hi = Math.max(hi, x);
+            }
+        }
+        if (lo > hi) {
+            return null;
+        }
+        double pad = Math.max(0.5, 0.1 * (hi - lo));
+        return new double[] {Math.max(0, lo - pad), hi + pad};
     }
 
     private static Map<String, double[][]> byType(double[] x, double[] y, List<String> type) {
