@@ -53,8 +53,14 @@ public final class CompareCommand implements Callable<Integer> {
 
     /** What {@link #run} produced. */
     public record Outcome(Comparison.Result result, ScenarioRun.Outcome model, CompareOutputs.Written written) {
+        /** The time-height section PNGs, one per compared site. */
         public List<Path> figures() {
             return written.figures();
+        }
+
+        /** The passage-time PNG (model against observed), or null when there was nothing to plot. */
+        public Path passageFigure() {
+            return written.passageFigure();
         }
 
         public Path report() {

@@ -30,8 +30,11 @@ public final class CompareOutputs {
     private CompareOutputs() {
     }
 
-    /** What was written: every file, the figures among them, and the report. */
-    public record Written(List<Path> files, List<Path> figures, Path report) {
+    /**
+     * What was written: every file; the time-height section PNGs (one per site, in site order); the
+     * passage-time figure (null when no site-day has both an observed and a model passage); the report.
+     */
+    public record Written(List<Path> files, List<Path> figures, Path passageFigure, Path report) {
     }
 
     public static Written write(Path out, Comparison.Result r, String scenarioRef, String observedLabel) throws IOException {
@@ -57,17 +60,18 @@ public final class CompareOutputs {
             figures.add(p);
             figs.add(f);
         }
-        Figure timing = passageFigure(r.passages());
-        if (timing != null) {
-            Path p = out.resolve("passage-times.png");
-            PngWriter.write(timing, p);
-            figures.add(p);
-        }
         files.addAll(figures);
+        Figure timing = passageFigure(r.passages());
+        Path timingPath = null;
+        if (timing != null) {
+            timingPath = out.resolve("passage-times.png");
+            PngWriter.write(timing, timingPath);
+            files.add(timingPath);
+        }
         Path report = out.resolve("report.html");
         report(r, scenarioRef, observedLabel, metrics, passages, summary, figs, timing).write(report);
         files.add(report);
-        return new Written(files, figures, report);
+        return new Written(files, figures, timingPath, report);
     }
 
     static String safe(String s) {

@@ -137,9 +137,10 @@ class CompareSelfTest {
                 "report.html", "model/summary.json")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
         }
-        assertEquals(scenario.sites().size() + 1, o.figures().size(), "one section per site and the passage-time figure");
+        assertEquals(scenario.sites().size(), o.figures().size(), "one time-height section per site");
+        assertTrue(o.passageFigure() != null && Files.size(o.passageFigure()) > 0, "passage-time figure");
         String html = Files.readString(o.report());
-        assertEquals(o.figures().size(), html.split("data:image/png;base64,", -1).length - 1);
+        assertEquals(o.figures().size() + 1, html.split("data:image/png;base64,", -1).length - 1);
         assertTrue(html.contains("not a weather forecast"));
         List<String> lines = Files.readAllLines(out.resolve("metrics.csv"));
         assertEquals("site,layer,variable,n,bias,rmse,mean_observed,mean_model,unit", lines.get(0));
