@@ -153,12 +153,29 @@ public final class CheckTimingCommand implements Callable<Integer> {
             envelopes.add(new TimingInputs.ArrivalEnvelope(site.name(), "sea_breeze", e));
             flights.put(site.name(), site.flightHours());
         }
-        TimingCheck.Result check = new TimingCheck(spec.settings()).check(spec.conditions(), obs.passages(), flights, envelopes);
+        // Earliest plausible onset at the coast: the day file's, else the earliest onset of any member, so that "earlier
+        // than any plausible onset" also allows the front to run from there at the fastest plausible speed.
+        TimingInputs.DayConditions dc = spec.conditions();
+        List<String> notes = new ArrayList<>(obs.notes());
+        if (Double.isNaN(dc.earliestOnsetHours())) {
+            double first = Double.POSITIVE_INFINITY;
+            for (double o : onsets) {
+                if (Double.isFinite(o)) {
+                    first = Math.min(first, o);
+                }
+            }
+            if (Double.isFinite(first)) {
+                dc = new TimingInputs.DayConditions(dc.day(), dc.crossShoreWindMPerS(), dc.thetaVContrastK(),
+                        dc.contrastUncertaintyK(), dc.thetaVK(), dc.breezeDepthM(), dc.depthUncertaintyM(), dc.totalDepthM(), first);
+                notes.add("earliest plausible onset at the coast: " + TimingCheck.clock(first) + ", the earliest onset of the "
+                        + arrivals.size() + " ensemble members (front.earliest_onset_h not given)");
+            }
+        }
+        TimingCheck.Result check = new TimingCheck(spec.settings()).check(dc, obs.passages(), flights, envelopes);
         double[] speed = DensityCurrent.plausibleSpeedRangeMPerS(spec.conditions().thetaVContrastK(),
                 spec.conditions().contrastUncertaintyK(), spec.conditions().thetaVK(), spec.conditions().breezeDepthM(),
                 spec.conditions().depthUncertaintyM(), spec.conditions().totalDepthM(), spec.conditions().crossShoreWindMPerS(),
                 spec.settings().retardationMin);
-        List<String> notes = new ArrayList<>(obs.notes());
         if (so.failed() > 0) {
             notes.add(so.failed() + " ensemble member(s) failed (first: " + firstError + "); they are left out of the envelope");
         }
