@@ -65,6 +65,15 @@ class CompareSelfTest {
             }
         }
         assertTrue(passages > 0, "the chain found no onshore passage in classic-45N's soundings");
+        for (Comparison.Section sec : r.sections()) {
+            for (int k = 0; k < sec.heightM().length; k++) {
+                for (int j = 0; j < sec.timeH().length; j++) {
+                    assertEquals(sec.modelCrossShore()[k][j], sec.observedCrossShore()[k][j], 1e-12,
+                            sec.site() + " cross-shore at " + sec.heightM()[k] + " m, " + sec.timeH()[j] + " h");
+                    assertEquals(sec.modelTheta()[k][j], sec.observedTheta()[k][j], 1e-12);
+                }
+            }
+        }
     }
 
     @Test
