@@ -41,10 +41,12 @@ public final class PlanBenchmark implements Benchmark {
         text = text.replaceFirst("(?m)^  members: \\d+", "  members: " + members);
         text = text.replaceFirst("(?m)^  model: \\w+", "  model: " + model);
         if (model.equals("nonlinear")) {
-            // a planning grid for the nonlinear model: 1 km over 400 km (50 km sponges each side), 40 levels to 4 km
-            text = text.replaceFirst("(?m)^  grid.points: \\d+.*$", "  grid.points: 400")
-                    .replaceFirst("(?m)^  grid.spacing_km: [0-9.]+.*$", "  grid.spacing_km: 1.0")
-                    .replaceFirst("(?m)^  grid.levels: \\d+.*$", "  grid.levels: 40")
+            // a planning grid for the nonlinear model, as the built-in 'hypotheses' sweep uses: 2 km over 400 km
+            // (50 km sponges each side), 32 levels to 4 km; the run starts at 06 local (an hour before the first
+            // launch) instead of the scenario's 04
+            text = text.replaceFirst("(?m)^  grid.points: \\d+.*$", "  grid.points: 200")
+                    .replaceFirst("(?m)^  grid.spacing_km: [0-9.]+.*$", "  grid.spacing_km: 2.0")
+                    .replaceFirst("(?m)^  grid.levels: \\d+.*$", "  grid.levels: 32\n  output.start_h: 6")
                     .replaceFirst("(?m)^  physics.harmonics: \\d+.*$", "");
         }
         return text;
