@@ -72,7 +72,7 @@ public final class DemoCommand implements Callable<Integer> {
     static final String CHECK_DAY = "2031-06-25";
 
     /** Plan run by the demo (the invented coast). */
-    static final String PLAN = "quillmarsh-plan";
+    static final String PLAN = "quillmarsh-plan-nonlinear";
 
     @Override
     public Integer call() throws Exception {

@@ -29,7 +29,7 @@ import org.littoral.scenarios.sweep.SweepSpec;
  */
 public final class PlanFile {
     public static final String BUILTIN_FOLDER = "/org/littoral/scenarios/builtin/plans/";
-    public static final List<String> BUILTINS = List.of("bay-coast-plan", "quillmarsh-plan");
+    public static final List<String> BUILTINS = List.of("bay-coast-plan", "quillmarsh-plan", "quillmarsh-plan-nonlinear");
 
     private static final Set<String> PLAN_KEYS = new TreeSet<>(List.of("candidates_km", "sites_per_set", "cadences",
             "operating_hours", "max_flights_per_site_per_day", "altitude_ceiling_m", "min_profiles_before",
