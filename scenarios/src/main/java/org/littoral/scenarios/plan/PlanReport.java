@@ -66,7 +66,7 @@ public final class PlanReport {
                     .build();
             out.add(new Captioned("arrival-fan.png", fan, String.format(Locale.ROOT, "Arrival time of the onshore flow at each "
                     + "candidate distance over the %d ensemble members: median (line), 25-75 %% (dark) and 5-95 %% (light) "
-                    + "ranges, over the members in which the front arrives there (the fraction is in Table 2).", r.members)));
+                    + "ranges, over the members in which the front arrives there (the fraction of members is in the arrival-time table below).", r.members)));
         }
         Map<String, List<PlanResult.SiteRow>> byCadence = new LinkedHashMap<>();
         for (PlanResult.SiteRow s : r.sites) {
