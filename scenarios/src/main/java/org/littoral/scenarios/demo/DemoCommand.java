@@ -63,6 +63,10 @@ public final class DemoCommand implements Callable<Integer> {
             description = "Hypothesis sweep to run (built-in name or file; default: ${DEFAULT-VALUE}).")
     String sweepRef;
 
+    @Option(names = "--plan", paramLabel = "PLAN", defaultValue = "quillmarsh-plan-nonlinear",
+            description = "Plan to run (built-in name or file; default: ${DEFAULT-VALUE}; quillmarsh-plan is the linear quick look).")
+    String planRef;
+
     @Option(names = "--resume", description = "Keep sweep and plan members already computed in DIR.")
     boolean resume;
 
@@ -71,8 +75,6 @@ public final class DemoCommand implements Callable<Integer> {
     /** The day whose passage times the demo checks. */
     static final String CHECK_DAY = "2031-06-25";
 
-    /** Plan run by the demo (the invented coast). */
-    static final String PLAN = "quillmarsh-plan-nonlinear";
 
     @Override
     public Integer call() throws Exception {
@@ -116,8 +118,8 @@ public final class DemoCommand implements Callable<Integer> {
         p.step("timing check of the observed passages on " + CHECK_DAY);
         timingSection(rep, dataDir, obsDir.resolve("passages.csv"), out.resolve("check-timing"), n);
 
-        p.step("site and cadence plan for the invented coast (" + PLAN + ")");
-        PlanSpec plan = PlanFile.load(PLAN);
+        p.step("site and cadence plan for the invented coast (" + planRef + ")");
+        PlanSpec plan = PlanFile.load(planRef);
         PlanCommand.PlanOutcome po = PlanCommand.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
         List<PlanReport.Captioned> pf = PlanReport.figures(plan, po.result());
         PlanReport.addSections(rep, plan, po.result(), po.windows(), pf, true);
@@ -138,6 +140,13 @@ public final class DemoCommand implements Callable<Integer> {
             return given;
         }
         new DemoDataWriter(DemoCampaign.generate(DemoCampaign.DEFAULT_SEED)).writeAll(fallback, List.of());
+        // the timing check's day file is hand-written (not made by the generator); a copy ships in the jar
+        String dayFile = "check-timing-" + CHECK_DAY + ".yaml";
+        try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/" + dayFile)) {
+            if (in != null) {
+                org.littoral.scenarios.report.AtomicFiles.write(fallback.resolve(dayFile), in.readAllBytes());
+            }
+        }
         return fallback;
     }
 

@@ -14,6 +14,44 @@ import org.littoral.scenarios.report.LineFigure;
 /** Pieces of `littoral demo`: where its data comes from, the answer key, embedded figure sizes. */
 class DemoCommandTest {
 
+    /**
+     * The whole demo end to end, with the linear sweep and the linear quick-look plan so that it runs in
+     * seconds: one report with every step's section, every figure embedded, the cautions, and each step's
+     * own files.
+     */
+    @Test
+    void theDemoWritesOneReportWithEveryStepAndEveryFigureEmbedded(@TempDir Path tmp) throws Exception {
+        Path out = tmp.resolve("demo");
+        int rc = new picocli.CommandLine(new org.littoral.scenarios.cli.Main()).execute("demo", "--out", out.toString(),
+                "--data", tmp.resolve("no-data-here").toString(), "--sweep", "quillmarsh-ambient", "--plan", "quillmarsh-plan",
+                "--threads", "2");
+        assertEquals(0, rc);
+        String html = Files.readString(out.resolve("index.html"));
+        for (String heading : new String[] {"What was run and why", "Hypotheses: the ambient flow", "what the analysis chain finds",
+            "The model against the observations", "Timing check of the observed passages", "Recommended site sets and cadences",
+            "Cautions"}) {
+            assertTrue(html.contains(heading), "section '" + heading + "'");
+        }
+        int figures = html.split("<img src=\"data:image/png;base64,", -1).length - 1;
+        assertTrue(figures >= 10, "figures embedded: " + figures);
+        assertTrue(html.contains("Drone operations follow local aviation rules"));
+        assertTrue(html.contains("INVENTED"));
+        for (String f : new String[] {"sweep/comparison.csv", "observe/passages.csv", "compare/metrics.csv",
+            "check-timing/flags.csv", "plan/plan.json"}) {
+            assertTrue(Files.isRegularFile(out.resolve(f)), f);
+        }
+    }
+
+    @Test
+    void theBundledDayFileIsTheOneInDemoData() throws Exception {
+        Path repo = Path.of("").toAbsolutePath().getParent();
+        Path inRepo = repo.resolve("demo-data/check-timing-2031-06-25.yaml");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isRegularFile(inRepo), "run from the scenarios module of a checkout");
+        try (var in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/check-timing-2031-06-25.yaml")) {
+            assertEquals(Files.readString(inRepo), new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8));
+        }
+    }
+
     @Test
     void aMissingDataFolderIsWrittenAfreshByTheGenerator(@TempDir Path tmp) throws Exception {
         Path got = DemoCommand.ensureData(tmp.resolve("nowhere"), tmp.resolve("fresh"));
