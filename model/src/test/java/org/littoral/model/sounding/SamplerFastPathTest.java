@@ -7,10 +7,10 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.coast.SurfaceMap;
-import org.littoral.model.field.Background;
 import org.littoral.model.field.BreezeSolution;
 import org.littoral.model.field.FieldSampling;
 import org.littoral.model.field.Snapshot;
+import org.littoral.model.field.SnapshotsOnly;
 import org.littoral.model.grid.HorizontalGrid;
 import org.littoral.model.grid.VerticalGrid;
 import org.littoral.model.linear.HeatingSpec;
@@ -23,36 +23,6 @@ import org.littoral.model.linear.LinearConfig;
  */
 class SamplerFastPathTest {
 
-    /** The same solution without the fast path (forces the snapshot path). */
-    private record SnapshotsOnly(BreezeSolution s) implements BreezeSolution {
-        public double[] xM() {
-            return s.xM();
-        }
-
-        public double[] zM() {
-            return s.zM();
-        }
-
-        public Background background() {
-            return s.background();
-        }
-
-        public double startSec() {
-            return s.startSec();
-        }
-
-        public double endSec() {
-            return s.endSec();
-        }
-
-        public Snapshot snapshotAt(double t) {
-            return s.snapshotAt(t);
-        }
-
-        public String modelName() {
-            return s.modelName();
-        }
-    }
 
     private static final Coast COAST = new Coast(40, 0, 0, 270, 180);
 

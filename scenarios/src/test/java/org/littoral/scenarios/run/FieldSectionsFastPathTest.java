@@ -3,9 +3,8 @@ package org.littoral.scenarios.run;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
-import org.littoral.model.field.Background;
 import org.littoral.model.field.BreezeSolution;
-import org.littoral.model.field.Snapshot;
+import org.littoral.model.field.SnapshotsOnly;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
@@ -13,35 +12,6 @@ import org.littoral.scenarios.scenario.ScenarioFile;
 /** The time-distance and site sections of a linear run are the same by the fast path and by whole snapshots. */
 class FieldSectionsFastPathTest {
 
-    private record SnapshotsOnly(BreezeSolution s) implements BreezeSolution {
-        public double[] xM() {
-            return s.xM();
-        }
-
-        public double[] zM() {
-            return s.zM();
-        }
-
-        public Background background() {
-            return s.background();
-        }
-
-        public double startSec() {
-            return s.startSec();
-        }
-
-        public double endSec() {
-            return s.endSec();
-        }
-
-        public Snapshot snapshotAt(double t) {
-            return s.snapshotAt(t);
-        }
-
-        public String modelName() {
-            return s.modelName();
-        }
-    }
 
     @Test
     void fastAndSnapshotSectionsAgreeToRoundOff() {
