@@ -215,6 +215,25 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
 
     @Override
     public double[] crossShoreWindAtLevel(int levelIndex, double timeSec) {
+        double[] u = levelOfUModes(levelIndex, timeSec, null, null);
+        double ua = bg.ambientUMPerS()[levelIndex];
+        for (int i = 0; i < nx; i++) {
+            u[i] += ua;
+        }
+        return u;
+    }
+
+    @Override
+    public double[] alongshoreWindAtLevel(int levelIndex, double timeSec) {
+        return levelOfUModes(levelIndex, timeSec, cvR, cvI);
+    }
+
+    /**
+     * One level of a field built on the modes' u structure: sum over harmonics of mult(k) e^{i w t} times the
+     * u mode at that level, then one inverse FFT (as {@link #snapshotAt} does for the whole field). A null
+     * multiplier means 1 (the cross-shore wind itself). Allocates nx.
+     */
+    private double[] levelOfUModes(int levelIndex, double timeSec, double[][] multR, double[][] multI) {
         if (levelIndex < 0 || levelIndex >= nz) {
             throw new IllegalArgumentException("level index " + levelIndex + " outside 0.." + (nz - 1));
         }
@@ -225,37 +244,11 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
             double er = Math.cos(omega[h] * timeSec);
             double ei = Math.sin(omega[h] * timeSec);
             double[] vR = uR[h], vI = uI[h];
+            double[] mR = multR == null ? null : multR[h];
+            double[] mI = multI == null ? null : multI[h];
             for (int kk = 0; kk < nx; kk++) {
-                double yr = vR[off + kk], yi = vI[off + kk];
-                sr[kk] += er * yr - ei * yi;
-                si[kk] += er * yi + ei * yr;
-            }
-        }
-        double[][] ri = new double[2][nx];
-        inverse(new FastFourierTransformer(DftNormalization.STANDARD), sr, si, 0, ri);
-        double ua = bg.ambientUMPerS()[levelIndex];
-        for (int i = 0; i < nx; i++) {
-            ri[0][i] += ua;
-        }
-        return ri[0];
-    }
-
-    @Override
-    public double[] alongshoreWindAtLevel(int levelIndex, double timeSec) {
-        if (levelIndex < 0 || levelIndex >= nz) {
-            throw new IllegalArgumentException("level index " + levelIndex + " outside 0.." + (nz - 1));
-        }
-        double[] sr = new double[nx];
-        double[] si = new double[nx];
-        int off = levelIndex * nx;
-        for (int h = 0; h < nh; h++) {
-            double er = Math.cos(omega[h] * timeSec);
-            double ei = Math.sin(omega[h] * timeSec);
-            double[] vR = uR[h], vI = uI[h], mR = cvR[h], mI = cvI[h];
-            for (int kk = 0; kk < nx; kk++) {
-                // a = mult_V(k) e^{i w t}, then a times the mode's u structure, as in snapshotAt
-                double ar = mR[kk] * er - mI[kk] * ei;
-                double ai = mR[kk] * ei + mI[kk] * er;
+                double ar = mR == null ? er : mR[kk] * er - mI[kk] * ei;
+                double ai = mR == null ? ei : mR[kk] * ei + mI[kk] * er;
                 double yr = vR[off + kk], yi = vI[off + kk];
                 sr[kk] += ar * yr - ai * yi;
                 si[kk] += ar * yi + ai * yr;

@@ -1,5 +1,6 @@
 package org.littoral.scenarios.demo;
 
+import org.littoral.scenarios.report.CaptionedFigure;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Files;
@@ -19,7 +20,6 @@ import org.littoral.scenarios.analysis.detect.CampaignSkill;
 import org.littoral.scenarios.analysis.detect.DetectionScore;
 import org.littoral.scenarios.analysis.ingest.CsvTable;
 import org.littoral.scenarios.analysis.ingest.DayTableReader;
-import org.littoral.scenarios.cli.UserInputException;
 import org.littoral.scenarios.observe.AnalysisFigures;
 import org.littoral.scenarios.observe.AnalysisOutputs;
 import org.littoral.scenarios.observe.AnalysisReport;
@@ -104,7 +104,7 @@ public final class DemoCommand implements Callable<Integer> {
         Files.createDirectories(obsDir);
         o.qc().writeCsv(obsDir.resolve("qc-log.csv"));
         AnalysisOutputs.write(obsDir, ar, o.qc(), "the INVENTED demo campaign", coast, o.profiles(), settings);
-        List<AnalysisFigures.Captioned> figs = AnalysisFigures.all(ar, settings, coast);
+        List<CaptionedFigure> figs = AnalysisFigures.all(ar, settings, coast);
         rep.section("The demo observations: what the analysis chain finds");
         rep.paragraph("The same analysis chain that reads synthetic soundings reads the (invented) observations: ingest and QC, "
                 + "passage detectors (PELT change points on the wind and a multivariate change point over several levels and "
@@ -121,7 +121,7 @@ public final class DemoCommand implements Callable<Integer> {
         p.step("site and cadence plan for the invented coast (" + planRef + ")");
         PlanSpec plan = PlanFile.load(planRef);
         PlanCommand.PlanOutcome po = PlanCommand.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
-        List<PlanReport.Captioned> pf = PlanReport.figures(plan, po.result());
+        List<CaptionedFigure> pf = PlanReport.figures(plan, po.result());
         PlanReport.addSections(rep, plan, po.result(), po.windows(), pf, true);
 
         rep.section("Cautions");
@@ -332,7 +332,4 @@ public final class DemoCommand implements Callable<Integer> {
         }
     }
 
-    static UserInputException missing(Path p, String what) {
-        return new UserInputException(p + ": " + what);
-    }
 }

@@ -1,5 +1,6 @@
 package org.littoral.scenarios.observe;
 
+import org.littoral.scenarios.report.CaptionedFigure;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -37,9 +38,6 @@ public final class AnalysisFigures {
     private AnalysisFigures() {
     }
 
-    /** A figure, the file name it is written under and its caption. */
-    public record Captioned(String fileName, Figure figure, String caption) {
-    }
 
     /** Panels per row in the day-by-day small multiples. */
     static final int DAY_COLUMNS = 3;
@@ -47,8 +45,8 @@ public final class AnalysisFigures {
     static final int DAYS_PER_GRID = 24;
 
     /** All figures, in reading order. */
-    public static List<Captioned> all(AnalysisResult r, AnalysisSettings s, Coast coast) {
-        List<Captioned> out = new ArrayList<>(dayPanels(r, s, coast));
+    public static List<CaptionedFigure> all(AnalysisResult r, AnalysisSettings s, Coast coast) {
+        List<CaptionedFigure> out = new ArrayList<>(dayPanels(r, s, coast));
         passageTimes(r).ifPresent(out::add);
         out.addAll(responseBoxes(r, s));
         out.addAll(composites(r));
@@ -59,7 +57,7 @@ public final class AnalysisFigures {
      * Wind direction in the detector's layer against local time, one panel per day, one line per site,
      * with each detected passage as a dashed vertical line labelled by site and onshore ('on') or not.
      */
-    static List<Captioned> dayPanels(AnalysisResult r, AnalysisSettings s, Coast coast) {
+    static List<CaptionedFigure> dayPanels(AnalysisResult r, AnalysisSettings s, Coast coast) {
         Map<String, List<SiteDayResult>> byDay = new TreeMap<>();
         for (SiteDayResult d : r.siteDays()) {
             byDay.computeIfAbsent(d.siteDay().day(), k -> new ArrayList<>()).add(d);
@@ -92,14 +90,14 @@ public final class AnalysisFigures {
             }
             panels.add(b.build());
         }
-        List<Captioned> out = new ArrayList<>();
+        List<CaptionedFigure> out = new ArrayList<>();
         if (panels.isEmpty()) {
             return out;
         }
         for (int from = 0, part = 1; from < panels.size(); from += DAYS_PER_GRID, part++) {
             List<Figure> chunk = panels.subList(from, Math.min(panels.size(), from + DAYS_PER_GRID));
             String suffix = panels.size() > DAYS_PER_GRID ? " (part " + part + ")" : "";
-            out.add(new Captioned("wind-direction-days" + (panels.size() > DAYS_PER_GRID ? "-" + part : "") + ".png",
+            out.add(new CaptionedFigure("wind-direction-days" + (panels.size() > DAYS_PER_GRID ? "-" + part : "") + ".png",
                     FigureGrid.of("Wind direction " + layer.label() + " by day" + suffix, chunk, DAY_COLUMNS),
                     String.format(Locale.ROOT, "Wind direction (where the wind blows from) averaged over %s above ground against "
                             + "local time, one panel per day%s, one colour per site (%s). Dashed vertical lines: detected passages; "
@@ -153,7 +151,7 @@ public final class AnalysisFigures {
     }
 
     /** Histogram of the first onshore passage time per site. */
-    static java.util.Optional<Captioned> passageTimes(AnalysisResult r) {
+    static java.util.Optional<CaptionedFigure> passageTimes(AnalysisResult r) {
         Map<String, List<Double>> bySite = new LinkedHashMap<>();
         for (SiteDayResult d : r.siteDays()) {
             Passage p = d.firstOnshorePassage();
@@ -171,12 +169,12 @@ public final class AnalysisFigures {
             b.data(e.getKey(), toArray(e.getValue()));
             n += e.getValue().size();
         }
-        return java.util.Optional.of(new Captioned("passage-times.png", b.build(), "Distribution of the first passage that "
+        return java.util.Optional.of(new CaptionedFigure("passage-times.png", b.build(), "Distribution of the first passage that "
                 + "turns the wind onshore, per site (" + n + " site-days with one), in 30-min bins of local time."));
     }
 
     /** Box plots of the change across the first onshore passage, by breeze type, for theta, mixing ratio and theta-e. */
-    static List<Captioned> responseBoxes(AnalysisResult r, AnalysisSettings s) {
+    static List<CaptionedFigure> responseBoxes(AnalysisResult r, AnalysisSettings s) {
         Map<String, String> typeOf = new LinkedHashMap<>();
         for (SiteDayResult d : r.siteDays()) {
             typeOf.put(d.siteDay().key(), d.breezeType().name().toLowerCase(Locale.ROOT));
@@ -202,9 +200,9 @@ public final class AnalysisFigures {
             }
             panels.add(b.build());
         }
-        List<Captioned> out = new ArrayList<>();
+        List<CaptionedFigure> out = new ArrayList<>();
         if (!panels.isEmpty()) {
-            out.add(new Captioned("response-boxes.png", FigureGrid.of("Post-passage changes by breeze type", panels, 3),
+            out.add(new CaptionedFigure("response-boxes.png", FigureGrid.of("Post-passage changes by breeze type", panels, 3),
                     String.format(Locale.ROOT, "Change of the %s layer mean across each onshore passage (post-window mean minus "
                             + "pre-window mean; windows in the analysis settings), grouped by the day's breeze type (number of "
                             + "passages in brackets). Boxes: quartiles; whiskers: 1.5 IQR; diamond: mean.", layer.label())));
@@ -213,7 +211,7 @@ public final class AnalysisFigures {
     }
 
     /** Composite medians with inter-quartile bands around the passage, one panel per variable, one line per group. */
-    static List<Captioned> composites(AnalysisResult r) {
+    static List<CaptionedFigure> composites(AnalysisResult r) {
         Map<CompositeSpec, Map<String, List<CompositeRow>>> bySpec = new LinkedHashMap<>();
         for (CompositeRow c : r.composites()) {
             bySpec.computeIfAbsent(c.spec(), k -> new LinkedHashMap<>()).computeIfAbsent(c.group(), k -> new ArrayList<>()).add(c);
@@ -258,15 +256,15 @@ public final class AnalysisFigures {
                 (rel ? relative : hourly).add(b.build());
             }
         }
-        List<Captioned> out = new ArrayList<>();
+        List<CaptionedFigure> out = new ArrayList<>();
         if (!relative.isEmpty()) {
-            out.add(new Captioned("composites-relative.png", FigureGrid.of("Composites around the first onshore passage", relative, 2),
+            out.add(new CaptionedFigure("composites-relative.png", FigureGrid.of("Composites around the first onshore passage", relative, 2),
                     "Median (line) and inter-quartile range (band) over site-days of each variable's anomaly from its mean over the pre-passage "
                             + "window, against time after the first onshore passage, by breeze type; bins with fewer than 3 values are "
                             + "left out."));
         }
         if (!hourly.isEmpty()) {
-            out.add(new Captioned("composites-hourly.png", FigureGrid.of("Composites by hour of day", hourly, 2),
+            out.add(new CaptionedFigure("composites-hourly.png", FigureGrid.of("Composites by hour of day", hourly, 2),
                     "Median (line) and inter-quartile range (band) over site-days of each variable against local time, by breeze "
                             + "type; bins with fewer than 3 values are left out."));
         }

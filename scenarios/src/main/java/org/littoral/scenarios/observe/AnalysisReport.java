@@ -1,5 +1,6 @@
 package org.littoral.scenarios.observe;
 
+import org.littoral.scenarios.report.CaptionedFigure;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -30,8 +31,8 @@ public final class AnalysisReport {
     static List<Path> write(Path out, AnalysisResult r, QcLog qc, String what, Coast coast, AnalysisSettings s)
             throws IOException {
         List<Path> files = new ArrayList<>();
-        List<AnalysisFigures.Captioned> figs = AnalysisFigures.all(r, s, coast);
-        for (AnalysisFigures.Captioned c : figs) {
+        List<CaptionedFigure> figs = AnalysisFigures.all(r, s, coast);
+        for (CaptionedFigure c : figs) {
             Path png = out.resolve(c.fileName());
             c.figure().writePng(png);
             files.add(png);
@@ -53,7 +54,7 @@ public final class AnalysisReport {
      * @param compact true for a larger report (the demo): only the onshore-turning passages and the comparisons
      *                that stay significant after the Holm correction are tabled (the CSV files hold everything)
      */
-    public static void addSections(HtmlReport rep, AnalysisResult r, QcLog qc, List<AnalysisFigures.Captioned> figs,
+    public static void addSections(HtmlReport rep, AnalysisResult r, QcLog qc, List<CaptionedFigure> figs,
                                    boolean compact) {
         long onshore = r.passages().stream().filter(Passage::turnsOnshore).count();
         rep.section("Passages found");
@@ -67,7 +68,7 @@ public final class AnalysisReport {
         }
         rep.paragraph("Site-days by breeze type (from the morning ambient wind above the breeze layer relative to the coast):");
         rep.keyValues(types);
-        for (AnalysisFigures.Captioned c : figs) {
+        for (CaptionedFigure c : figs) {
             if (c.fileName().startsWith("wind-direction")) {
                 rep.figure(c.figure(), c.caption());
             }
@@ -88,7 +89,7 @@ public final class AnalysisReport {
                 + "column)." : "Detected passages per site and day (passages.csv has every column).") + " Timing uncertainty is at "
                 + "least half the local flight interval; confidence is the detectors' agreement.", t);
         rep.section("Responses, distributions and composites");
-        for (AnalysisFigures.Captioned c : figs) {
+        for (CaptionedFigure c : figs) {
             if (!c.fileName().startsWith("wind-direction")) {
                 rep.figure(c.figure(), c.caption());
             }

@@ -1,5 +1,6 @@
 package org.littoral.scenarios.plan;
 
+import org.littoral.scenarios.report.CaptionedFigure;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -26,13 +27,10 @@ public final class PlanReport {
     private PlanReport() {
     }
 
-    /** A figure with its file name and caption. */
-    public record Captioned(String fileName, Figure figure, String caption) {
-    }
 
     static void write(Path dir, PlanSpec plan, String model, PlanResult r, DenseWindow[][] windows) throws IOException {
-        List<Captioned> figs = figures(plan, r);
-        for (Captioned c : figs) {
+        List<CaptionedFigure> figs = figures(plan, r);
+        for (CaptionedFigure c : figs) {
             c.figure().writePng(dir.resolve(c.fileName()));
         }
         HtmlReport rep = HtmlReport.create("littoral site and cadence plan: " + plan.ensemble().name());
@@ -46,8 +44,8 @@ public final class PlanReport {
     }
 
     /** The figures of a plan, in reading order. */
-    public static List<Captioned> figures(PlanSpec plan, PlanResult r) {
-        List<Captioned> out = new ArrayList<>();
+    public static List<CaptionedFigure> figures(PlanSpec plan, PlanResult r) {
+        List<CaptionedFigure> out = new ArrayList<>();
         if (!r.fan.isEmpty()) {
             int n = r.fan.size();
             double[] x = new double[n];
@@ -64,7 +62,7 @@ public final class PlanReport {
             FanChartFigure fan = FanChartFigure.builder().size(900, 560).title("Front arrival time against inland distance")
                     .x(x, "inland distance", "km").y("arrival (local time)", "h").percentiles(p[0], p[1], p[2], p[3], p[4])
                     .build();
-            out.add(new Captioned("arrival-fan.png", fan, String.format(Locale.ROOT, "Arrival time of the onshore flow at each "
+            out.add(new CaptionedFigure("arrival-fan.png", fan, String.format(Locale.ROOT, "Arrival time of the onshore flow at each "
                     + "candidate distance over the %d ensemble members: median (line), 25-75 %% (dark) and 5-95 %% (light) "
                     + "ranges, over the members in which the front arrives there (the fraction of members is in the arrival-time table below).", r.members)));
         }
@@ -89,7 +87,7 @@ public final class PlanReport {
                 }
                 b.series(Series.of(e.getKey(), x, y).marker(Marker.cycle(m++)).errorBars(null, err));
             }
-            out.add(new Captioned("capture-by-distance.png", b.build(), String.format(Locale.ROOT, "Probability that a site at "
+            out.add(new CaptionedFigure("capture-by-distance.png", b.build(), String.format(Locale.ROOT, "Probability that a site at "
                     + "each distance captures the passage (detected by the analysis chain within %.0f min of the model's arrival, "
                     + "with at least %d profiles before and %d after it inside operating hours), per cadence option; bars: "
                     + "half-width of the 95 %% Wilson interval.", plan.criteria().timingToleranceH() * 60,
@@ -100,7 +98,7 @@ public final class PlanReport {
 
     /** Adds the plan sections (recommendations, figures, windows, arrival table) to {@code rep}. */
     /** @param compact true inside a larger report (the demo): the arrival table every 5 km, no per-distance table */
-    public static void addSections(HtmlReport rep, PlanSpec plan, PlanResult r, DenseWindow[][] windows, List<Captioned> figs,
+    public static void addSections(HtmlReport rep, PlanSpec plan, PlanResult r, DenseWindow[][] windows, List<CaptionedFigure> figs,
                                    boolean compact) {
         rep.section("Recommended site sets and cadences");
         rep.paragraph(String.format(Locale.ROOT, "%d ensemble members of %s; %d candidate distances (%s km), %d sites per set, "
@@ -131,7 +129,7 @@ public final class PlanReport {
             rep.bullets(r.notes);
         }
         rep.section("Arrival times and capture by distance");
-        for (Captioned c : figs) {
+        for (CaptionedFigure c : figs) {
             rep.figure(c.figure(), c.caption());
         }
         Table f = Table.of("km", "members with arrival", "5 %", "25 %", "median", "75 %", "95 %");
