@@ -127,6 +127,18 @@ public final class SoundingSampler {
 
     /** All profiles, ordered by launch time, then by site in the order given (allocates). */
     public List<Profile> sampleAll() {
+        return sample(false);
+    }
+
+    /**
+     * The profiles of the flights that fit inside the solution's span, skipping the others (for a run that
+     * stopped early); for a periodic solution the same as {@link #sampleAll()}.
+     */
+    public List<Profile> sampleFlightsInsideSpan() {
+        return sample(true);
+    }
+
+    private List<Profile> sample(boolean skipOutside) {
         List<Double> launches = schedule.launchTimesClockHours();
         List<Profile> out = new ArrayList<>(launches.size() * sites.size());
         Random rng = spec.noise() == null ? null : new Random(spec.noise().seed());
@@ -139,6 +151,9 @@ public final class SoundingSampler {
         for (double clockH : launches) {
             double t0 = modelTimeSec(clockH);
             if (!periodic && (t0 < solution.startSec() - 1e-6 || t0 + ascentSec > solution.endSec() + 1e-6)) {
+                if (skipOutside) {
+                    continue;
+                }
                 throw new IllegalArgumentException("flight at " + clockH + " h local clock (model time " + t0
                         + " s) is outside the solution's span " + solution.startSec() + " to " + solution.endSec()
                         + " s; narrow the flight window or lengthen the run");

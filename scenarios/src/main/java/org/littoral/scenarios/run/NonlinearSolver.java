@@ -28,17 +28,22 @@ final class NonlinearSolver {
         try {
             sol = NonlinearModel.run(main);
         } catch (ModelBlowUpException e) {
-            throw blowUp(scenario, e);
+            NonlinearSolution part = e.partialSolution();
+            throw new UnstableRunException(blowUp(scenario, e).getMessage(), e,
+                    part != null && part.snapshotCount() >= 2 ? new FarFieldSolution(part, main.damping().lateralSpongeWidthM()) : null);
         }
         return new FarFieldSolution(sol, main.damping().lateralSpongeWidthM());
     }
 
-    /** The one-line message of a blown-up run, in the scenario's terms (keys, local clock time). */
+    /**
+     * The one-line message of a blown-up run, in the scenario's terms (keys, local clock time); {@link ScenarioRun}
+     * adds what it kept of the run.
+     */
     static UserInputException blowUp(Scenario scenario, ModelBlowUpException e) {
         double clock = scenario.coast().clockHoursFromSolar(e.solarHours());
         String msg = String.format(Locale.ROOT,
                 "%s: the nonlinear model became unstable at %s local time (%.2f solar h), x = %.1f km from the coast, z = %.0f m "
-                        + "(%s = %.4g); nothing of this run was written and files already in the output folder are kept; "
+                        + "(%s = %.4g); "
                         + "try a finer grid.spacing_km or more grid.levels, a weaker heating (heating.*), a weaker ambient_wind.speed_m_per_s "
                         + "or some physics.friction_per_s (e.g. 1e-5)",
                 scenario.source(), ScenarioRun.clock(clock), e.solarHours(), e.xKm(), e.zM(), e.variable(), e.value());

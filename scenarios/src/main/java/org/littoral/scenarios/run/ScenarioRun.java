@@ -19,6 +19,7 @@ import org.littoral.model.sounding.SoundingSampler;
 import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.thermo.Thermo;
 import org.littoral.scenarios.analysis.ingest.ProfileColumns;
+import org.littoral.scenarios.cli.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**
@@ -63,7 +64,12 @@ public final class ScenarioRun {
         long t0 = System.nanoTime();
         say("solving " + scenario.name() + " (" + scenario.kind().name().toLowerCase(Locale.ROOT) + ", "
                 + scenario.xGrid().nx() + " x " + scenario.zGrid().size() + " points)");
-        BreezeSolution sol = solver.solve(scenario);
+        BreezeSolution sol;
+        try {
+            sol = solver.solve(scenario);
+        } catch (UnstableRunException e) {
+            throw keepPartial(e, outDir);
+        }
         say(String.format(Locale.ROOT, "solved in %.2f s; sampling soundings", (System.nanoTime() - t0) / 1e9));
         Coast coast = scenario.coast();
         List<VirtualSite> sites = scenario.sites();
@@ -104,6 +110,90 @@ public final class ScenarioRun {
         AtomicWrite.write(summaryPath, json.writeValueAsBytes(summary));
         say(String.format(Locale.ROOT, "done in %.2f s: %s", (System.nanoTime() - t0) / 1e9, outDir));
         return new Outcome(sol, profiles, fs, d, circ, peak, summary, files);
+    }
+
+    /** Subfolder that receives what an unstable run computed before it stopped. */
+    public static final String PARTIAL_DIR = "before-instability";
+
+    /**
+     * Writes what an unstable run stored before it blew up into {@link #PARTIAL_DIR} (so that a complete earlier
+     * run in the output folder is not mixed with it): the flights that fit before the last snapshot, the
+     * time-distance section up to it, the full last state, and a record of the blow-up. Returns the error to
+     * raise, naming what was written.
+     */
+    private UserInputException keepPartial(UnstableRunException e, Path outDir) {
+        FarFieldSolution part = e.partial();
+        if (part == null) {
+            return new UserInputException(e.getMessage() + "; it stopped before a second snapshot, so nothing of it was written "
+                    + "and files already in the output folder are kept", e);
+        }
+        Path dir = outDir.resolve(PARTIAL_DIR);
+        try {
+            java.nio.file.Files.createDirectories(dir);
+            Coast coast = scenario.coast();
+            List<VirtualSite> sites = scenario.sites();
+            List<Profile> profiles = new SoundingSampler(part, coast, sites, scenario.flights().schedule(),
+                    scenario.flights().sounding(), false).sampleFlightsInsideSpan();
+            double[] siteX = new double[sites.size()];
+            for (int s = 0; s < siteX.length; s++) {
+                siteX[s] = sites.get(s).inlandDistanceM();
+            }
+            Scenario.Output out = scenario.output();
+            FieldSections fs = FieldSections.evaluate(part, coast, out.clockHours(), out.nearSurfaceM(), siteX, false, null);
+            List<String> written = new ArrayList<>();
+            AtomicWrite.write(dir.resolve("soundings.csv"), soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
+            written.add("soundings.csv");
+            AtomicWrite.write(dir.resolve("near_surface_breeze.csv"), timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
+            written.add("near_surface_breeze.csv");
+            Snapshot last = part.snapshotAt(part.endSec());
+            AtomicWrite.write(dir.resolve("last_state.csv"), stateCsv(last, part.xM(), part.zM(), coast.clockHoursFromSolar(
+                    last.timeSec() / 3600.0 - scenario.flights().sounding().dayIndex() * 24.0)).getBytes(StandardCharsets.UTF_8));
+            written.add("last_state.csv");
+            ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+            ObjectNode rec = m.createObjectNode();
+            rec.put("scenario", scenario.name());
+            rec.put("source", scenario.source());
+            rec.put("complete", false);
+            rec.put("error", e.getMessage());
+            org.littoral.model.nonlinear.ModelBlowUpException b = e.blowUp();
+            rec.put("blow_up_solar_h", round(b.solarHours(), 4));
+            rec.put("blow_up_time_local", clock(coast.clockHoursFromSolar(b.solarHours())));
+            rec.put("blow_up_x_km", round(b.xKm(), 3));
+            rec.put("blow_up_z_m", round(b.zM(), 1));
+            rec.put("variable", b.variable());
+            rec.put("value", b.value());
+            rec.put("snapshots_kept", part.run().snapshotCount());
+            double endClock = coast.clockHoursFromSolar(part.endSec() / 3600.0 - scenario.flights().sounding().dayIndex() * 24.0);
+            rec.put("last_snapshot_time_local", clock(endClock));
+            rec.put("flights_kept", profiles.size() / Math.max(1, sites.size()));
+            rec.put("output_times_kept", fs.clockH.length);
+            rec.put("caution", CAUTION);
+            written.add("instability.json");
+            ArrayNode f = rec.putArray("files");
+            written.forEach(f::add);
+            AtomicWrite.write(dir.resolve("instability.json"), m.writeValueAsBytes(rec));
+            return new UserInputException(e.getMessage() + "; what it computed up to " + clock(endClock) + " local ("
+                    + part.run().snapshotCount() + " snapshots, " + profiles.size() / Math.max(1, sites.size()) + " flights) is in "
+                    + dir + " (" + String.join(", ", written) + "); files already in the output folder are kept", e);
+        } catch (IOException | RuntimeException w) {
+            return new UserInputException(e.getMessage() + "; writing what it computed to " + dir + " failed too (" + w.getMessage()
+                    + "); files already in the output folder are kept", e);
+        }
+    }
+
+    /** Every cell of one stored state, long format: the fields just before an instability. */
+    static String stateCsv(Snapshot s, double[] xM, double[] zM, double clockH) {
+        StringBuilder sb = new StringBuilder(xM.length * zM.length * 70);
+        sb.append("time_local_h,x_km,z_m,u_m_per_s,v_m_per_s,w_m_per_s,theta_k,mixing_ratio_g_per_kg\n");
+        int nx = xM.length;
+        for (int k = 0; k < zM.length; k++) {
+            for (int i = 0; i < nx; i++) {
+                int n = k * nx + i;
+                sb.append(String.format(Locale.ROOT, "%.4f,%.3f,%.1f,%.4f,%.4f,%.5f,%.4f,%.4f%n", clockH, xM[i] / 1000.0, zM[k],
+                        s.uMPerS()[n], s.vMPerS()[n], s.wMPerS()[n], s.thetaK()[n], s.mixingRatioKgPerKg()[n] * 1000.0));
+            }
+        }
+        return sb.toString().replace("NaN", "");
     }
 
     /** Local clock time as HH:MM, with "+1d" for times on the next day. */

@@ -7,11 +7,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.littoral.model.nonlinear.ModelBlowUpException;
 import org.littoral.model.nonlinear.NonlinearConfig;
 import org.littoral.model.nonlinear.NonlinearModel;
+import org.littoral.model.nonlinear.NonlinearSolution;
+import org.littoral.scenarios.analysis.ingest.ProfileColumns;
 import org.littoral.scenarios.cli.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
@@ -33,11 +38,16 @@ class NonlinearBlowUpTest {
 
     /** A real blow-up: the same configuration with a wind limit (1 m/s) below the ambient wind (4 m/s). */
     static ModelBlowUpException realBlowUp(Scenario s) {
+        return realBlowUp(s, 1.0, 0.5);
+    }
+
+    /** A real blow-up once some wind exceeds {@code limit} (m/s), in a run of {@code hours}. */
+    static ModelBlowUpException realBlowUp(Scenario s, double limit, double hours) {
         NonlinearConfig c = s.toNonlinearConfig();
         NonlinearConfig bad = new NonlinearConfig(c.coast(), c.surface(), c.xGrid(), c.zInterfaces(), c.theta(), c.surfaceMixingRatio(),
                 c.mixingRatioGradientPerM(), c.surfacePressurePa(), c.geostrophicSpeedMPerS(), c.geostrophicDirectionFromDeg(),
-                c.startSolarHours(), c.startSolarHours() + 0.5, c.outputIntervalS(), c.forcing(), c.switches(), c.damping(),
-                c.boundaryLayer(), new NonlinearConfig.Numerics(0.5, 1.0, 300.0, 1.0), null, null, null);
+                c.startSolarHours(), c.startSolarHours() + hours, c.outputIntervalS(), c.forcing(), c.switches(), c.damping(),
+                c.boundaryLayer(), new NonlinearConfig.Numerics(0.5, 1.0, 300.0, limit), null, null, null);
         return assertThrows(ModelBlowUpException.class, () -> NonlinearModel.run(bad));
     }
 
@@ -50,7 +60,68 @@ class NonlinearBlowUpTest {
         assertTrue(m.startsWith("unstable.yaml: the nonlinear model became unstable at 07:"), m);
         assertTrue(m.contains("x = ") && m.contains("km from the coast") && m.contains("z = "), m);
         assertTrue(m.contains("try a finer grid.spacing_km"), m);
-        assertTrue(m.contains("files already in the output folder are kept"), m);
+    }
+
+    /** A solver that runs the scenario with a wind limit, as {@link NonlinearSolver} reports a blow-up. */
+    static Solver limited(double limit, double hours) {
+        return sc -> {
+            ModelBlowUpException e = realBlowUp(sc, limit, hours);
+            NonlinearSolution part = e.partialSolution();
+            throw new UnstableRunException(NonlinearSolver.blowUp(sc, e).getMessage(), e,
+                    part.snapshotCount() >= 2 ? new FarFieldSolution(part, sc.toNonlinearConfig().damping().lateralSpongeWidthM()) : null);
+        };
+    }
+
+    @Test
+    void aBlowUpBeforeTheSecondSnapshotWritesNothingAndKeepsOldFiles(@TempDir Path dir) throws Exception {
+        Scenario s = ScenarioFile.parse("unstable.yaml", YAML, false);
+        Path old = dir.resolve("summary.json");
+        Files.writeString(old, "{\"from\": \"an earlier run\"}");
+        UserInputException thrown = assertThrows(UserInputException.class, () -> new ScenarioRun(s, limited(1.0, 0.5), null).run(dir));
+        assertTrue(thrown.getMessage().contains("nothing of it was written and files already in the output folder are kept"),
+                thrown.getMessage());
+        assertEquals("{\"from\": \"an earlier run\"}", Files.readString(old));
+        try (var files = Files.list(dir)) {
+            assertEquals(1, files.count(), "nothing else written");
+        }
+    }
+
+    @Test
+    void aLaterBlowUpKeepsWhatWasComputedBeforeIt(@TempDir Path dir) throws Exception {
+        Scenario s = ScenarioFile.parse("unstable.yaml", YAML, false);
+        Path old = dir.resolve("summary.json");
+        Files.writeString(old, "{\"from\": \"an earlier run\"}");
+        // with a 4.3 m/s limit the growing breeze trips it near 08:57 local (8.84 solar h), after 12 ten-minute snapshots
+        UserInputException thrown = assertThrows(UserInputException.class, () -> new ScenarioRun(s, limited(4.3, 2.0), null).run(dir));
+        String m = thrown.getMessage();
+        Path part = dir.resolve(ScenarioRun.PARTIAL_DIR);
+        assertFalse(m.contains("\n"), m);
+        assertTrue(m.contains("what it computed up to 08:50 local") && m.contains(part.toString()), m);
+        assertTrue(m.endsWith("files already in the output folder are kept"), m);
+        assertEquals("{\"from\": \"an earlier run\"}", Files.readString(old));
+
+        JsonNode rec = new ObjectMapper().readTree(part.resolve("instability.json").toFile());
+        assertFalse(rec.get("complete").asBoolean());
+        assertEquals("u", rec.get("variable").asText());
+        double blowUpH = rec.get("blow_up_solar_h").asDouble();
+        assertTrue(blowUpH > 8.5 && blowUpH < 9.0, "blow-up at " + blowUpH);
+        assertTrue(rec.get("snapshots_kept").asInt() >= 10);
+
+        // the section holds every output time up to the last snapshot and none after it
+        List<String> sec = Files.readAllLines(part.resolve("near_surface_breeze.csv"));
+        double lastSection = sec.stream().skip(1).mapToDouble(l -> Double.parseDouble(l.split(",")[0])).max().orElseThrow();
+        assertEquals(8.5, lastSection, 1e-9, "07:00-09:00 every 30 min, cut at the last snapshot before the blow-up");
+        // every kept flight ends before the blow-up, and the flights before it are all there
+        List<String> snd = Files.readAllLines(part.resolve("soundings.csv"));
+        int timeCol = List.of(snd.get(0).split(",")).indexOf(ProfileColumns.TIME_LOCAL);
+        assertTrue(timeCol >= 0, snd.get(0));
+        double lastFlight = snd.stream().skip(1).mapToDouble(l -> Double.parseDouble(l.split(",")[timeCol])).max().orElseThrow();
+        assertTrue(lastFlight < blowUpH && lastFlight >= 7.9, "last kept flight at " + lastFlight);
+        assertEquals(rec.get("flights_kept").asInt(), snd.stream().skip(1).map(l -> l.split(",")[timeCol]).distinct().count());
+        // the last state: every cell, finite
+        List<String> state = Files.readAllLines(part.resolve("last_state.csv"));
+        assertEquals(256 * 8 + 1, state.size(), "256 columns x 8 cells (9 level interfaces)");
+        assertTrue(state.stream().skip(1).noneMatch(l -> l.contains(",,") || l.endsWith(",")), "no missing values");
     }
 
     @Test
