@@ -133,6 +133,16 @@ public final class NonlinearModel {
     private double dtLast;
     private final FarFieldColumn farLeft;
     private final FarFieldColumn farRight;
+    // flux-corrected scalar transport (nonlinear mode): the step's weighted mean fluxes and velocity
+    private final boolean useFct;
+    private final FluxCorrectedTransport fct;
+    private final double[] fxTh;
+    private final double[] fzTh;
+    private final double[] fxQ;
+    private final double[] fzQ;
+    private final double[] uMean;
+    private final double[] wMean;
+    private double stageWeight;
 
     private NonlinearModel(NonlinearConfig cfg) {
         this.cfg = cfg;
@@ -197,6 +207,14 @@ public final class NonlinearModel {
         tq = new double[nc];
         chi = new double[nc];
         fx = new double[nx + 1];
+        useFct = !lin && cfg.numerics().scalarTransport() == NonlinearConfig.ScalarTransport.FCT_STEP;
+        fct = useFct ? new FluxCorrectedTransport(nx, nz, g.dx, g.dzf) : null;
+        fxTh = useFct ? new double[nc] : null;
+        fzTh = useFct ? new double[(nz + 1) * nx] : null;
+        fxQ = useFct ? new double[nc] : null;
+        fzQ = useFct ? new double[(nz + 1) * nx] : null;
+        uMean = useFct ? new double[nc] : null;
+        wMean = useFct ? new double[(nz + 1) * nx] : null;
         sh1 = new double[nx];
         sh2 = new double[nx];
         sh3 = new double[nx];
@@ -433,7 +451,9 @@ public final class NonlinearModel {
         NonlinearConfig.Numerics num = cfg.numerics();
         double dt = num.maxStepS();
         if (c > 0) {
-            dt = Math.min(dt, num.courantNumber() / c);
+            // the limited-slope scheme (linear mode, or chosen) is monotone only up to a Courant sum of 0.5
+            double courant = useFct ? num.courantNumber() : Math.min(num.courantNumber(), 0.5);
+            dt = Math.min(dt, courant / c);
         }
         if (nMax > 0) {
             dt = Math.min(dt, num.buoyancyStepFactor() / nMax);
@@ -458,9 +478,27 @@ public final class NonlinearModel {
         System.arraycopy(q, 0, qn, 0, q.length);
         // Shu & Osher (1988) eq. 2.18: u1 = un + dt L(un); u2 = 3/4 un + 1/4 (u1 + dt L(u1));
         // u(n+1) = 1/3 un + 2/3 (u2 + dt L(u2)); stage times t, t + dt, t + dt/2.
+        // the weight of each stage's tendency in the step: 1/6, 1/6, 2/3
+        if (useFct) {
+            java.util.Arrays.fill(fxTh, 0.0);
+            java.util.Arrays.fill(fzTh, 0.0);
+            java.util.Arrays.fill(fxQ, 0.0);
+            java.util.Arrays.fill(fzQ, 0.0);
+            java.util.Arrays.fill(uMean, 0.0);
+            java.util.Arrays.fill(wMean, 0.0);
+        }
+        stageWeight = 1.0 / 6.0;
         stage(t, dt, 0.0, 1.0);
+        stageWeight = 1.0 / 6.0;
         stage(t + dt, dt, 0.75, 0.25);
+        stageWeight = 2.0 / 3.0;
         stage(t + 0.5 * dt, dt, 1.0 / 3.0, 2.0 / 3.0);
+        if (useFct) {
+            // theta and r leave the step as s_n + dt S - dt div F with F the step's mean third-order flux:
+            // limit F against first-order upwind (final-stage limiting, Skamarock 2006)
+            fct.limit(thn, th, fxTh, fzTh, uMean, wMean, dt);
+            fct.limit(qn, q, fxQ, fzQ, uMean, wMean, dt);
+        }
     }
 
     private void stage(double t, double dt, double a, double b) {
@@ -523,10 +561,22 @@ public final class NonlinearModel {
         java.util.Arrays.fill(tw, 0, nx, 0.0);
         java.util.Arrays.fill(tw, nz * nx, (nz + 1) * nx, 0.0);
         advectU();
-        advectCentre3(v, tv);
+        advectCentre3(v, tv, null, null);
         advectW();
-        advectCentreLimited(th, tth);
-        advectCentreLimited(q, tq);
+        if (useFct) {
+            double wt = stageWeight;
+            for (int n = 0; n < uMean.length; n++) {
+                uMean[n] += wt * u[n];
+            }
+            for (int n = 0; n < wMean.length; n++) {
+                wMean[n] += wt * w[n];
+            }
+            advectCentre3(th, tth, fxTh, fzTh);
+            advectCentre3(q, tq, fxQ, fzQ);
+        } else {
+            advectCentreLimited(th, tth);
+            advectCentreLimited(q, tq);
+        }
         double alpha = cfg.damping().rayleighFrictionPerS();
         double alphaN = cfg.damping().newtonianCoolingPerS();
         boolean moist = cfg.switches().moistureBuoyancy();
@@ -709,8 +759,12 @@ public final class NonlinearModel {
      * (the same operations in the same order per point as an x pass followed by a z pass).
      */
 
-    /** Advection of a centred momentum component (v) with the third-order flux. */
-    private void advectCentre3(double[] s, double[] ts) {
+    /**
+     * Advection of a cell-centred field (v; theta and r under flux-corrected transport) with the third-order
+     * flux. When accX is not null the fluxes, times the stage weight, are added to accX (west faces) and
+     * accZ (interfaces).
+     */
+    private void advectCentre3(double[] s, double[] ts, double[] accX, double[] accZ) {
         java.util.Arrays.fill(fzBot, 0.0);
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
@@ -734,6 +788,12 @@ public final class NonlinearModel {
                 }
                 continue;
             }
+            if (accX != null) {
+                double wt = stageWeight;
+                for (int i = 0; i < nx; i++) {
+                    accX[o + i] += wt * fx[i];
+                }
+            }
             int kf = k + 1; // top interface of layer k
             int of = kf * nx;
             if (kf >= 2 && kf <= nz - 2) {
@@ -749,6 +809,12 @@ public final class NonlinearModel {
                 }
             } else {
                 java.util.Arrays.fill(fzTop, 0.0);
+            }
+            if (accZ != null && kf < nz) {
+                double wt = stageWeight;
+                for (int i = 0; i < nx; i++) {
+                    accZ[of + i] += wt * fzTop[i];
+                }
             }
             double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
