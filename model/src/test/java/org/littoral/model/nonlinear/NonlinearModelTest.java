@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.coast.SurfaceMap;
@@ -75,14 +76,18 @@ class NonlinearModelTest {
         assertEquals(expectedH, period, 0.01 * expectedH);
     }
 
-    @Test
-    void squareWaveOfMoistureAdvectedByAUniformWindKeepsItsBoundsAndMoves() {
+    @ParameterizedTest
+    @EnumSource(NonlinearConfig.ScalarTransport.class)
+    void squareWaveOfMoistureAdvectedByAUniformWindKeepsItsBoundsAndMoves(NonlinearConfig.ScalarTransport scheme) {
         double q0 = 0.008;
+        NonlinearConfig.Numerics num = scheme == NonlinearConfig.ScalarTransport.FCT_STEP
+                ? NonlinearConfig.Numerics.standard() : NonlinearConfig.Numerics.limitedStages();
+        assertEquals(scheme, num.scalarTransport());
         NonlinearConfig c = NonlinearConfig.builder(coastAt(0.0), COAST, HorizontalGrid.centred(100, 1000.0),
                         VerticalGrid.uniform(5, 2000.0))
                 .forcing(new Forcing.None()).switches(new NonlinearConfig.Switches(true, false, false))
                 .damping(noDamping()).moisture(q0, 0.0).geostrophicWind(10.0, 270.0).solarHours(0, 1)
-                .initialMixingRatioPerturbation((x, z) -> Math.abs(x) < 10_000 ? 0.004 : 0.0).build();
+                .initialMixingRatioPerturbation((x, z) -> Math.abs(x) < 10_000 ? 0.004 : 0.0).numerics(num).build();
         NonlinearSolution s = NonlinearModel.run(c);
         Snapshot end = s.snapshotAt(s.endSec());
         double lo = Double.MAX_VALUE;
