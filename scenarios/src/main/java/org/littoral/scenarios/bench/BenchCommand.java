@@ -17,6 +17,7 @@ public final class BenchCommand implements Callable<Integer> {
         Map<String, Benchmark> m = new LinkedHashMap<>();
         m.put("analysis", new AnalysisBenchmark());
         m.put("sweep", new org.littoral.scenarios.sweep.SweepBenchmark());
+        m.put("sweep-nonlinear", org.littoral.scenarios.sweep.SweepBenchmark.nonlinear());
         m.put("nonlinear", new NonlinearBenchmark());
         m.put("linear", new LinearBenchmark());
         m.put("plan", new org.littoral.scenarios.plan.PlanBenchmark());
