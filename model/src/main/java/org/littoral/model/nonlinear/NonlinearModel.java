@@ -776,77 +776,35 @@ public final class NonlinearModel {
 
     /**
      * Advection of a cell-centred field (v; theta and r under flux-corrected transport) with the third-order
-     * flux. When accX is not null the fluxes, times the stage weight, are added to accX (west faces) and
-     * accZ (interfaces).
+     * flux: by the ambient wind in x only in linear mode, by the flow in x and z otherwise
+     * ({@link #advectCentre3Rows}). When accX is not null the fluxes, times the stage weight, are added to
+     * accX (west faces) and accZ (interfaces).
      */
     private void advectCentre3(double[] s, double[] ts, double[] accX, double[] accZ) {
         if (!lin) {
             advectCentre3Rows(s, ts, accX, accZ);
             return;
         }
-        java.util.Arrays.fill(fzBot, 0.0);
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             shift(s, o, -2, sh1);
             shift(s, o, -1, sh2);
             shift(s, o, 1, sh3);
             // fx[i]: flux through the west face of cell i
-            if (lin) {
-                for (int i = 0; i < nx; i++) {
-                    fx[i] = flux3(ug, sh1[i], sh2[i], s[o + i], sh3[i]);
-                }
-            } else {
-                for (int i = 0; i < nx; i++) {
-                    fx[i] = flux3(u[o + i], sh1[i], sh2[i], s[o + i], sh3[i]);
-                }
+            for (int i = 0; i < nx; i++) {
+                fx[i] = flux3(ug, sh1[i], sh2[i], s[o + i], sh3[i]);
             }
             shift(fx, 0, 1, fxs);
-            if (lin) {
-                for (int i = 0; i < nx; i++) {
-                    ts[o + i] = 0.0 - (fxs[i] - fx[i]) * invDx;
-                }
-                continue;
-            }
-            if (accX != null) {
-                double wt = stageWeight;
-                for (int i = 0; i < nx; i++) {
-                    accX[o + i] += wt * fx[i];
-                }
-            }
-            int kf = k + 1; // top interface of layer k
-            int of = kf * nx;
-            if (kf >= 2 && kf <= nz - 2) {
-                for (int i = 0; i < nx; i++) {
-                    int n = o + i;
-                    fzTop[i] = flux3(w[of + i], s[n - nx], s[n], s[n + nx], s[n + 2 * nx]);
-                }
-            } else if (kf < nz) {
-                double wl = g.wLo[kf];
-                for (int i = 0; i < nx; i++) {
-                    int n = o + i;
-                    fzTop[i] = w[of + i] * (wl * s[n] + (1.0 - wl) * s[n + nx]);
-                }
-            } else {
-                java.util.Arrays.fill(fzTop, 0.0);
-            }
-            if (accZ != null && kf < nz) {
-                double wt = stageWeight;
-                for (int i = 0; i < nx; i++) {
-                    accZ[of + i] += wt * fzTop[i];
-                }
-            }
-            double idz = 1.0 / g.dzf[k];
             for (int i = 0; i < nx; i++) {
-                double t = 0.0 - (fxs[i] - fx[i]) * invDx;
-                ts[o + i] = t - (fzTop[i] - fzBot[i]) * idz;
-                fzBot[i] = fzTop[i];
+                ts[o + i] = 0.0 - (fxs[i] - fx[i]) * invDx;
             }
         }
     }
 
     /**
-     * The nonlinear path of {@link #advectCentre3}: the same operations in the same order, but every loop
-     * reads and writes row copies at one index, so that all of them compile to vector instructions.
+     * The nonlinear path of {@link #advectCentre3}: x fluxes of a row, then the z flux through its top (third
+     * order inside, centred second order next to the ground and the lid); every loop reads and writes row
+     * copies at one index, so that all of them compile to vector instructions.
      */
     private void advectCentre3Rows(double[] s, double[] ts, double[] accX, double[] accZ) {
         java.util.Arrays.fill(fzBot, 0.0);
