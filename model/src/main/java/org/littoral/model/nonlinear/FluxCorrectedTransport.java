@@ -23,7 +23,6 @@ final class FluxCorrectedTransport {
     private static final double TINY = 1e-300;
 
     private final int nx;
-    private final int nz;
     private final int nc;
     private final double invDx;
     private final double[] idz;
@@ -49,7 +48,6 @@ final class FluxCorrectedTransport {
      */
     FluxCorrectedTransport(int nx, int nz, double dx, double[] dzf) {
         this.nx = nx;
-        this.nz = nz;
         this.nc = nx * nz;
         this.invDx = 1.0 / dx;
         idz = new double[nc];
@@ -95,8 +93,7 @@ final class FluxCorrectedTransport {
             double a = wMean[n];
             az[n] = fzH[n] - (Math.max(a, 0.0) * below[n] + Math.min(a, 0.0) * s0[n]);
         }
-        java.util.Arrays.fill(az, 0, nx, 0.0);
-        java.util.Arrays.fill(az, nc, nc + nx, 0.0);
+        // rows 0 (ground) and nz (lid) of az are never written: no flux there
         shiftEast(ax, axE);
         System.arraycopy(az, nx, azT, 0, nc);
         // low-order solution td = sRk + dt div A (eq. 7)
