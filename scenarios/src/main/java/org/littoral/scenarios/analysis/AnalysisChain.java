@@ -23,7 +23,7 @@ import org.littoral.scenarios.analysis.stats.GroupComparisons;
 import org.littoral.scenarios.analysis.detect.PassageDetector;
 import org.littoral.scenarios.analysis.detect.PassageFinder;
 import org.littoral.scenarios.analysis.stats.BreezeType;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * The single entry point of the analysis chain: the same path for observed profiles and for the

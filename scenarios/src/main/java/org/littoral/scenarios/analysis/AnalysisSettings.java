@@ -10,7 +10,7 @@ import org.littoral.scenarios.analysis.ingest.IngestSettings;
 import org.littoral.scenarios.analysis.metrics.MetricSettings;
 import org.littoral.scenarios.analysis.stats.StatsSettings;
 import org.littoral.scenarios.analysis.stats.BreezeTyping;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Every setting of the analysis chain, with documented defaults (docs/analysis.md gives the reasons).

@@ -1,7 +1,7 @@
 package org.littoral.scenarios.analysis;
 
 import java.util.Locale;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /** A height layer above ground, bottom and top inclusive, m. */
 public record Layer(double bottomM, double topM) {

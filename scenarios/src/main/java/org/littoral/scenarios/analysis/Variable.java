@@ -72,7 +72,7 @@ public enum Variable {
                 return v;
             }
         }
-        throw new org.littoral.scenarios.cli.UserInputException("unknown variable '" + s + "'; choose one of "
+        throw new org.littoral.scenarios.input.UserInputException("unknown variable '" + s + "'; choose one of "
                 + java.util.Arrays.toString(values()).toLowerCase(java.util.Locale.ROOT));
     }
 }

@@ -2,6 +2,7 @@ package org.littoral.scenarios.cli;
 
 import java.util.concurrent.Callable;
 import org.littoral.scenarios.bench.BenchCommand;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.validate.ValidateCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;

@@ -9,7 +9,7 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import org.littoral.model.sounding.VirtualSite;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 
 /**

@@ -11,7 +11,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import org.littoral.model.coast.Coast;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.ScenarioFile;
 

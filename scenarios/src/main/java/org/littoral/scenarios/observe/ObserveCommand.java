@@ -18,7 +18,7 @@ import org.littoral.scenarios.analysis.ingest.DayTableReader;
 import org.littoral.scenarios.analysis.ingest.IngestResult;
 import org.littoral.scenarios.analysis.ingest.ProfileCsvReader;
 import org.littoral.scenarios.analysis.ingest.QcLog;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;

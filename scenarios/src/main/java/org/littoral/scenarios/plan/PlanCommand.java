@@ -15,7 +15,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.littoral.model.coast.SurfaceMap;
 import org.littoral.scenarios.analysis.AnalysisSettings;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.sweep.Member;

@@ -17,7 +17,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.TreeSet;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.sweep.ScenarioMemberRunner;
 import org.littoral.scenarios.sweep.SweepFile;
 import org.littoral.scenarios.sweep.SweepSpec;

@@ -2,7 +2,7 @@ package org.littoral.scenarios.run;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.Scenario;
 import picocli.CommandLine.Command;

@@ -19,7 +19,7 @@ import org.littoral.model.sounding.SoundingSampler;
 import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.thermo.Thermo;
 import org.littoral.scenarios.analysis.ingest.ProfileColumns;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**

@@ -10,7 +10,7 @@ public interface Solver {
 
     /**
      * The solver littoral uses: the model named by the scenario's {@code kind}. A nonlinear blow-up
-     * surfaces as a {@link org.littoral.scenarios.cli.UserInputException} (one line, exit code 2).
+     * surfaces as a {@link org.littoral.scenarios.input.UserInputException} (one line, exit code 2).
      */
     static Solver standard() {
         return scenario -> {

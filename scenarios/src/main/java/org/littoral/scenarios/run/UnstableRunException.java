@@ -1,7 +1,7 @@
 package org.littoral.scenarios.run;
 
 import org.littoral.model.nonlinear.ModelBlowUpException;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * A nonlinear run that went unstable, with the snapshots it stored before (as the run pipeline reads them), so

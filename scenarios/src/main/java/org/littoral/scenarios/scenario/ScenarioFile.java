@@ -33,7 +33,7 @@ import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.surface.SolarGeometry;
 import org.littoral.model.surface.SurfaceEnergyBalance;
 import org.littoral.model.thermo.Thermo;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Reads a scenario file (YAML, or JSON when the name ends in .json), validates it against

@@ -12,7 +12,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.function.Function;
 import java.util.stream.Stream;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.BuiltinScenarios;

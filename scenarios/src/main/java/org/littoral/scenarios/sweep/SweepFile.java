@@ -17,7 +17,7 @@ import java.util.Map;
 import java.util.Set;
 import org.apache.commons.math3.special.Erf;
 import org.littoral.scenarios.analysis.stats.BreezeTyping;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Reads sweep files (YAML or JSON; the schema is in {@code docs/sweeps.md}). Every problem is a

@@ -11,7 +11,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;

@@ -9,7 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeSet;
 import org.littoral.scenarios.analysis.ingest.CsvTable;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Reads observed passage times for one day from either of two tables (docs/timing-checks.md):

@@ -17,7 +17,7 @@ import org.littoral.scenarios.analysis.ingest.QcLog;
 import org.littoral.scenarios.analysis.ingest.RawFlight;
 import org.littoral.scenarios.analysis.stats.BreezeType;
 import org.littoral.scenarios.bench.SyntheticAscents;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /** End-to-end behaviour of the façade on invented days (SyntheticAscents; not data). */
 class AnalysisChainTest {

@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.littoral.model.sounding.Profile;
 import org.littoral.scenarios.analysis.AnalysisSettings;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.observe.ObserveCommand;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 class PlanFileTest {
     private static final String OK = "base: classic-45N\nensemble: {members: 4, seed: 1, draws: {ambient_wind.speed_m_per_s: {uniform: {from: 0, to: 5}}}}\n"

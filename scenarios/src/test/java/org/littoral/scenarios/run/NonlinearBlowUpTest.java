@@ -17,7 +17,7 @@ import org.littoral.model.nonlinear.NonlinearConfig;
 import org.littoral.model.nonlinear.NonlinearModel;
 import org.littoral.model.nonlinear.NonlinearSolution;
 import org.littoral.scenarios.analysis.ingest.ProfileColumns;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
 

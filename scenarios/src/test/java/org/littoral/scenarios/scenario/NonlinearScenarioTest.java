@@ -12,7 +12,7 @@ import org.littoral.model.nonlinear.Forcing;
 import org.littoral.model.nonlinear.NonlinearConfig;
 import org.littoral.model.nonlinear.ThetaProfile;
 import org.littoral.model.surface.SurfaceEnergyBalance;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Scenario files of kind nonlinear and their mapping to the nonlinear model's configuration. Direction

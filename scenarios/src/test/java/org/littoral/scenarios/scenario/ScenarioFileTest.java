@@ -11,7 +11,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.littoral.model.linear.HeatingSpec;
 import org.littoral.model.linear.LinearConfig;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 class ScenarioFileTest {
 

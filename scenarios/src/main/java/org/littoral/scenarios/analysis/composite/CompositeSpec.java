@@ -2,7 +2,7 @@ package org.littoral.scenarios.analysis.composite;
 
 import org.littoral.scenarios.analysis.Layer;
 import org.littoral.scenarios.analysis.Variable;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * One composite: a layer-mean variable binned by time relative to the passage or by hour of day,

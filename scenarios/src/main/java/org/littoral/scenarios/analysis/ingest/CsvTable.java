@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * A minimal comma-separated reader that keeps file line numbers for error messages. Handles

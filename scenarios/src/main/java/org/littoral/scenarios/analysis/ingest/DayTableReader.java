@@ -3,7 +3,7 @@ package org.littoral.scenarios.analysis.ingest;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Reads a per-day attribute table: CSV with a {@code day} column, an optional {@code site} column,

@@ -1,6 +1,6 @@
 package org.littoral.scenarios.analysis.ingest;
 
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Settings of ingest and quality control. Public fields with documented defaults (see docs/analysis.md).

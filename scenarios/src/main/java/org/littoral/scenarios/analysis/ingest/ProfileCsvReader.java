@@ -18,7 +18,7 @@ import java.util.TreeMap;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.sounding.Profile;
 import org.littoral.model.thermo.Thermo;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Reads the tidy profile CSV defined by {@link ProfileColumns}: already-binned profiles, or raw

@@ -3,7 +3,7 @@ package org.littoral.scenarios.analysis.metrics;
 import java.util.List;
 import org.littoral.scenarios.analysis.Layer;
 import org.littoral.scenarios.analysis.Variable;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /** Settings of the response metrics. Public fields; defaults and reasons in docs/analysis.md. */
 public final class MetricSettings {

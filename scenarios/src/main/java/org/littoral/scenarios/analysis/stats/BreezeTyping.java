@@ -1,7 +1,7 @@
 package org.littoral.scenarios.analysis.stats;
 
 import org.littoral.model.coast.Coast;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /**
  * Classifies the ambient wind into a {@link BreezeType}. The wind is resolved into cross-shore

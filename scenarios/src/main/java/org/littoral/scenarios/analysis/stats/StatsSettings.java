@@ -1,7 +1,7 @@
 package org.littoral.scenarios.analysis.stats;
 
 import java.util.List;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 /** Settings of group comparisons. Public fields; defaults and reasons in docs/analysis.md. */
 public final class StatsSettings {

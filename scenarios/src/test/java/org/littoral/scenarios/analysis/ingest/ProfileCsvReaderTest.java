@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.littoral.model.sounding.Profile;
 import org.littoral.model.thermo.Thermo;
-import org.littoral.scenarios.cli.UserInputException;
+import org.littoral.scenarios.input.UserInputException;
 
 class ProfileCsvReaderTest {
     @TempDir

@@ -1,4 +1,4 @@
-package org.littoral.scenarios.cli;
+package org.littoral.scenarios.input;
 
 /**
  * A problem with what the user gave us (a file, a key, a value). The message is one line that names
