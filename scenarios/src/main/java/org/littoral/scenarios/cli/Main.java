@@ -11,7 +11,7 @@ import picocli.CommandLine.ScopeType;
 
 /** The {@code littoral} command line. */
 @Command(name = "littoral", mixinStandardHelpOptions = true, scope = ScopeType.INHERIT,
-        version = "littoral 0.1.0",
+        version = org.littoral.scenarios.LittoralVersion.LABEL,
         description = "Idealised coastal-circulation simulator for scenario comparison.%n"
                 + "Idealised model: not a forecast; never use its output for aviation, marine or public-safety decisions.",
         subcommands = {

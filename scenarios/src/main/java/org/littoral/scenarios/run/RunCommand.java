@@ -11,7 +11,8 @@ import picocli.CommandLine.Parameters;
 
 /** {@code littoral run SCENARIO --out DIR}. */
 @Command(name = "run", description = {"Run a scenario (a built-in name or a YAML/JSON file): model, synthetic soundings, "
-        + "diagnostics, figures.", "Writes summary.json, soundings.csv, near_surface_breeze.csv and PNG figures to --out."})
+        + "diagnostics, figures.", "Writes summary.json, soundings.csv and soundings.nc, fields.nc (CF-1.8 netCDF), "
+        + "near_surface_breeze.csv and PNG figures to --out."})
 public final class RunCommand implements Callable<Integer> {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SCENARIO", description = "Built-in scenario name or path to a scenario file.")
@@ -19,6 +20,9 @@ public final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR", description = "Output directory (default: out/<scenario name>).")
     Path out;
+
+    @Option(names = "--no-fields-nc", description = "Do not write fields.nc (the model fields on time, height and distance).")
+    boolean noFieldsNc;
 
     @Option(names = "--list", description = "List the built-in scenarios and exit.")
     boolean list;
@@ -35,7 +39,8 @@ public final class RunCommand implements Callable<Integer> {
         }
         Scenario s = BuiltinScenarios.resolve(scenario);
         Path dir = out != null ? out : Path.of("out", s.name());
-        new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null).run(dir);
+        new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null).fieldsNetcdf(!noFieldsNc)
+                .command("run " + scenario + " --out " + dir).run(dir);
         System.out.println("littoral: wrote " + dir.resolve("summary.json") + " and the other outputs of " + s.name());
         return 0;
     }

@@ -20,6 +20,9 @@ import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.thermo.Thermo;
 import org.littoral.scenarios.analysis.ingest.ProfileColumns;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.netcdf.CfFile;
+import org.littoral.scenarios.netcdf.FieldsNetcdf;
+import org.littoral.scenarios.netcdf.SoundingsNetcdf;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**
@@ -34,6 +37,8 @@ public final class ScenarioRun {
     private final Solver solver;
     private final PrintStream progress;
     private boolean figures = true;
+    private boolean fieldsNetcdf = false;
+    private String command = "run";
 
     /** Everything a run produced, for callers and tests. */
     public record Outcome(BreezeSolution solution, List<Profile> profiles, FieldSections sections,
@@ -51,6 +56,21 @@ public final class ScenarioRun {
     /** Whether to draw the PNG figures (default true; sweeps switch them off for speed). Returns this. */
     public ScenarioRun figures(boolean draw) {
         this.figures = draw;
+        return this;
+    }
+
+    /**
+     * Whether to write {@code fields.nc}, the model fields on (time, z, x) at the output times (default false:
+     * {@code littoral run} and sweeps with {@code --fields-nc} switch it on). Returns this.
+     */
+    public ScenarioRun fieldsNetcdf(boolean write) {
+        this.fieldsNetcdf = write;
+        return this;
+    }
+
+    /** The command line recorded in the netCDF files' history attribute (default "run"). Returns this. */
+    public ScenarioRun command(String commandLine) {
+        this.command = commandLine;
         return this;
     }
 
@@ -96,6 +116,22 @@ public final class ScenarioRun {
         Path soundings = outDir.resolve("soundings.csv");
         AtomicWrite.write(soundings, soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
         files.add(soundings);
+        CfFile.Provenance prov = new CfFile.Provenance("littoral " + scenario.name() + ": " + scenario.description(), scenario.name(),
+                sol.modelName(), scenario.inputs().toString(), coast, command);
+        Path soundingsNc = outDir.resolve(SoundingsNetcdf.FILE_NAME);
+        if (!profiles.isEmpty()) {
+            java.util.Map<String, Double> inland = new java.util.HashMap<>();
+            sites.forEach(site -> inland.put(site.name(), site.inlandDistanceM()));
+            SoundingsNetcdf.write(soundingsNc, profiles, name -> inland.getOrDefault(name, Double.NaN),
+                    scenario.flights().sounding().dayIndex(), prov);
+            files.add(soundingsNc);
+        }
+        if (fieldsNetcdf) {
+            say("writing " + FieldsNetcdf.FILE_NAME + " (" + fs.clockH.length + " times)");
+            Path fieldsNc = outDir.resolve(FieldsNetcdf.FILE_NAME);
+            FieldsNetcdf.write(fieldsNc, sol, scenario.surface(), fs.clockH, fs.modelSec, prov);
+            files.add(fieldsNc);
+        }
         Path section = outDir.resolve("near_surface_breeze.csv");
         AtomicWrite.write(section, timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
         files.add(section);

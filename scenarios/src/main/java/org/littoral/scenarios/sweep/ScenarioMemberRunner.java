@@ -30,6 +30,7 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
     private final String sweepSource;
     private final Path runsDir;
     private final Solver solver;
+    private boolean fieldsNetcdf;
 
     /**
      * @param sweepSource the sweep file, for messages
@@ -40,6 +41,12 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
         this.sweepSource = sweepSource;
         this.runsDir = runsDir;
         this.solver = solver;
+    }
+
+    /** Whether each member's run also writes fields.nc (only useful with a runs folder). Returns this. */
+    public ScenarioMemberRunner fieldsNetcdf(boolean write) {
+        this.fieldsNetcdf = write;
+        return this;
     }
 
     /** Base scenarios as the scenario reader sees them: every default filled in, so every key can be swept. */
@@ -81,7 +88,8 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
         try {
             dir = scratch ? Files.createTempDirectory("littoral-member-") : runsDir.resolve(m.id());
             Files.createDirectories(dir);
-            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).run(dir);
+            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).fieldsNetcdf(fieldsNetcdf)
+                    .command("sweep " + sweepSource + " member " + m.id()).run(dir);
             return new MemberResult(trim(o.summary()));
         } catch (IOException e) {
             throw new UncheckedIOException("member " + m.id() + ": cannot write its run files to " + dir, e);

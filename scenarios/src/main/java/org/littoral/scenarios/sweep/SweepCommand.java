@@ -3,6 +3,7 @@ package org.littoral.scenarios.sweep;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.run.Solver;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -32,6 +33,10 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--no-run-files", description = "Do not keep each member's run files (soundings, sections) under DIR/runs.")
     boolean noRunFiles;
 
+    @Option(names = "--fields-nc", description = "Also write each member's model fields as runs/<id>/fields.nc (CF-1.8 netCDF; "
+            + "tens to hundreds of MB per member).")
+    boolean fieldsNc;
+
     @Option(names = "--list", description = "List the built-in sweeps and exit.")
     boolean list;
 
@@ -42,9 +47,15 @@ public final class SweepCommand implements Callable<Integer> {
     /** Runs a sweep into {@code dir} (progress on a terminal), then writes the comparison table and figures. */
     public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles)
             throws Exception {
+        return run(spec, dir, threads, resume, retryFailed, keepRunFiles, false);
+    }
+
+    /** As {@link #run(SweepSpec, Path, int, boolean, boolean, boolean)}; {@code fieldsNc} keeps each member's fields.nc. */
+    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles,
+                             boolean fieldsNc) throws Exception {
         List<Member> members = MemberExpander.expand(spec);
         ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), keepRunFiles ? dir.resolve("runs") : null,
-                Solver.standard());
+                Solver.standard()).fieldsNetcdf(fieldsNc && keepRunFiles);
         runner.checkAll(members);
         SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner,
                 SweepExecutor.Options.forCommandLine(threads, resume, retryFailed));
@@ -69,7 +80,11 @@ public final class SweepCommand implements Callable<Integer> {
         SweepSpec spec = SweepFile.load(sweep, ScenarioMemberRunner.scenarioSource());
         Path dir = out != null ? out : Path.of("out", "sweeps", spec.name());
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles);
+        if (fieldsNc && noRunFiles) {
+            throw new UserInputException("littoral sweep: --fields-nc keeps fields.nc among each member's run files, which "
+                    + "--no-run-files drops; give one of the two");
+        }
+        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc);
         SweepExecutor.Outcome o = r.outcome();
         System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed); wrote "
                 + dir.resolve("comparison.csv") + ", comparison.json" + (r.figures().isEmpty() ? "" : " and " + r.figures().size() + " figure(s)"));
