@@ -62,17 +62,15 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
     }
 
     /**
-     * The model's onshore-flow arrival (local clock h, NaN = none) at every candidate distance, read at the
-     * middle of the layer the wind-shift detector watches (100-300 m by default, so at 200 m): the slab
-     * heating confines the early-morning onshore flow to a shallow layer near the ground, and a campaign's
-     * detector sees the breeze when it reaches its layer, so that is the arrival to score against.
+     * The model's arrival (local clock h, NaN = none) at every candidate distance: THE definition of
+     * {@link org.littoral.model.front.FrontTrack#arrivalAt} (a front passage for the nonlinear model, the onset of
+     * onshore flow for linear theory), at the scenario's near-surface level like every other job.
      */
     public double[] truths(Scenario s, BreezeSolution sol) {
         double[] x = candidateXM();
         List<String> names = siteNames();
         boolean periodic = s.kind() == Scenario.Kind.LINEAR;
-        double truthHeightM = 0.5 * (analysis.detection.windLayer.bottomM() + analysis.detection.windLayer.topM());
-        FieldSections fs = FieldSections.evaluate(sol, s.coast(), s.output().clockHours(), truthHeightM, x, periodic,
+        FieldSections fs = FieldSections.evaluate(sol, s.coast(), s.output().clockHours(), s.output().nearSurfaceM(), x, periodic,
                 null);
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, x, s.output().onshoreThresholdMPerS());
         double[] out = new double[x.length];

@@ -4,37 +4,37 @@ import java.util.ArrayList;
 import java.util.List;
 import org.littoral.model.field.Background;
 import org.littoral.model.field.Snapshot;
+import org.littoral.model.front.Arrival;
+import org.littoral.model.front.Extent;
+import org.littoral.model.front.FrontCriteria;
+import org.littoral.model.front.FrontTrack;
+import org.littoral.model.front.FrontTracker;
+import org.littoral.model.front.ImpliedSpeed;
 
 /**
- * The headline numbers of a run, all from the near-surface cross-shore breeze wind u' (model wind
- * minus ambient wind) unless stated: peak onshore breeze, onset at the coast, arrival at each site,
- * maximum inland penetration, and the depth of the circulation at its peak.
- *
- * <p>Definitions (ours): <b>onset</b> is the first time u' at x = 0 rises through the onshore
- * threshold within the output window (linear interpolation between output times); <b>arrival</b> at a
- * site is the first such rise at the site; <b>penetration</b> is the farthest x inland to which u'
- * exceeds the threshold continuously from the coast; the <b>onshore-layer depth</b> is the height at
- * which u' first changes sign above the near-surface level, in the column of peak onshore breeze at the
- * peak time, and the <b>circulation depth</b> the top of the return flow above it (where u' comes
- * back above -10 % of the return-flow peak).
- *
- * <p>For a nonlinear run the searches keep to the interior clear of the far-field sponges
- * ({@link FieldSections#interiorFromM}), and arrival at a site inland only counts once the breeze's
- * onshore reach from the coast has come near it ({@link #onshoreAfterFront}), because resolved
- * convection over land makes brief onshore gusts ahead of the front. The <b>front</b> at each time is
- * where the near-surface convergence of the total wind peaks within {@link #FRONT_WINDOW_M} of the
- * onshore reach.
+ * The headline numbers of a run: peak onshore breeze, onset at the coast, arrival at each site, maximum inland
+ * penetration, implied speeds between sites, and the depth of the circulation at its peak. The timing
+ * definitions are not written here: they are THE definitions of {@link FrontTrack} (model layer,
+ * docs/fronts.md), which every job uses; this class only lays them out for a run and its sites.
  */
 public final class BreezeDiagnostics {
     private BreezeDiagnostics() {
     }
 
     /** Timing and strength at one site. */
-    public record SiteTiming(String name, double xM, Double arrivalClockH, double peakBreezeMPerS, double peakClockH) {
+    public record SiteTiming(String name, double xM, Arrival arrival, double peakBreezeMPerS, double peakClockH) {
+        /** The arrival time, local clock hours, or null when there is none ({@link Arrival#note()} says why). */
+        public Double arrivalClockH() {
+            return arrival.timeH();
+        }
     }
 
-    /** Speed implied by arrivals at two sites. */
-    public record ImpliedSpeed(String from, String to, double speedMPerS) {
+    /** Speed implied by the arrivals at two neighbouring sites (nearer the coast first). */
+    public record SpeedBetween(String from, String to, ImpliedSpeed speed) {
+        /** m/s, or NaN when not resolved. */
+        public double speedMPerS() {
+            return speed.resolved() ? speed.mPerS() : Double.NaN;
+        }
     }
 
     /** Column structure at the peak. */
@@ -43,154 +43,106 @@ public final class BreezeDiagnostics {
     }
 
     /**
-     * @param reachM per output time, the onshore reach of the breeze wind from the coast, m (NaN where the
-     *        coast is not onshore)
-     * @param frontXM per output time, the front: where the near-surface convergence -du/dx of the total wind
-     *        peaks within {@link #FRONT_WINDOW_M} of the reach, m (NaN without a reach)
-     * @param frontConvergencePerS that peak convergence, 1/s (NaN without a reach)
+     * @param track the leading edge through time and THE definitions
+     * @param peak the largest breeze wind in the searched zone (a lower bound when at its edge)
+     * @param peakTotalMPerS the total cross-shore wind there and then
+     * @param peakTimeIndex output-time index of the peak
+     * @param onset the onset at the coast ({@link FrontTrack#onsetAtCoast()})
+     * @param penetration the maximum inland penetration ({@link FrontTrack#maxPenetration()})
      */
-    public record Result(double thresholdMPerS, double peakBreezeMPerS, double peakTotalMPerS, double peakClockH, double peakXM,
-                         int peakTimeIndex, Double onsetClockH, boolean onshoreAtOutputStart, double maxPenetrationM,
-                         Double penetrationClockH, List<SiteTiming> sites, List<ImpliedSpeed> speeds, double[] reachM,
-                         double[] frontXM, double[] frontConvergencePerS) {
-    }
+    public record Result(FrontTrack track, Extent peak, double peakTotalMPerS, int peakTimeIndex, Arrival onset, Extent penetration,
+                         List<SiteTiming> sites, List<SpeedBetween> speeds) {
+        public double thresholdMPerS() {
+            return track.criteria().onshoreThresholdMPerS();
+        }
 
-    /** Half-width of the search for the front's convergence maximum around the onshore reach, m. */
-    public static final double FRONT_WINDOW_M = 10_000.0;
-    /** A nonlinear run's arrival at a site counts once the onshore reach from the coast is this close, m. */
-    public static final double ARRIVAL_WINDOW_M = 5_000.0;
+        public double peakBreezeMPerS() {
+            return peak.value();
+        }
+
+        public double peakClockH() {
+            return peak.timeH();
+        }
+
+        public double peakXM() {
+            return peak.xM();
+        }
+
+        /** Onset time at the coast, local clock hours, or null. */
+        public Double onsetClockH() {
+            return onset.timeH();
+        }
+
+        /** True when the coast is already onshore (or behind the front) at the first output time. */
+        public boolean onshoreAtOutputStart() {
+            return !onset.exists() && onset.note() != null && onset.note().startsWith("already");
+        }
+
+        /** Farthest inland position of the leading edge, m; NaN when none (a lower bound when at the search limit). */
+        public double maxPenetrationM() {
+            return penetration.exists() ? penetration.value() : Double.NaN;
+        }
+
+        public Double penetrationClockH() {
+            return penetration.timeH();
+        }
+
+        /** Per output time: the onshore reach, m (NaN = the coast is not onshore). Allocates. */
+        public double[] reachM() {
+            double[] r = new double[track.section().times()];
+            for (int n = 0; n < r.length; n++) {
+                r[n] = track.reachM(n);
+            }
+            return r;
+        }
+
+        /** Per output time: the front, m (NaN = none). Allocates. */
+        public double[] frontXM() {
+            double[] r = new double[track.section().times()];
+            for (int n = 0; n < r.length; n++) {
+                r[n] = track.frontXM(n);
+            }
+            return r;
+        }
+    }
 
     public static Result compute(FieldSections fs, List<String> siteNames, double[] siteXM, double threshold) {
         int nt = fs.clockH.length;
         if (nt == 0) {
             throw new IllegalArgumentException("no output times inside the solution's span; widen output.start_h..end_h");
         }
-        int nx = fs.xM.length;
-        int iLo = 0;
-        while (iLo < nx - 1 && fs.xM[iLo] < fs.interiorFromM) {
-            iLo++;
-        }
-        int iHi = nx - 1;
-        while (iHi > 0 && fs.xM[iHi] > fs.interiorToM) {
-            iHi--;
-        }
-        double best = Double.NEGATIVE_INFINITY;
+        FrontTrack track = FrontTracker.track(fs.section(), FrontCriteria.standard(threshold));
+        Extent peak = track.peakBreeze();
         int bn = 0;
-        int bi = iLo;
-        for (int n = 0; n < nt; n++) {
-            for (int i = iLo; i <= iHi; i++) {
-                if (fs.nearSurfaceU[n][i] > best) {
-                    best = fs.nearSurfaceU[n][i];
-                    bn = n;
-                    bi = i;
-                }
-            }
+        while (bn < nt - 1 && fs.clockH[bn] != peak.timeH()) {
+            bn++;
         }
-        // Onset and arrivals are read from the TOTAL near-surface cross-shore wind (ambient included): the
-        // wind a site sees turn onshore, which is what a profiling campaign (and the analysis chain) detects.
-        // With an onshore ambient wind the total is onshore from the start and there is no arrival.
-        double[] atCoast = seriesAt(fs.nearSurfaceTotalU, fs, 0.0);
-        Double onset = firstRise(fs.clockH, atCoast, threshold);
-        boolean onshoreAtStart = atCoast[0] >= threshold;
-
-        int i0 = FieldSections.bracket(fs.xM, 0.0);
-        double pen = 0;
-        Double penTime = null;
-        double[] reachM = new double[nt];
-        double[] frontX = new double[nt];
-        double[] frontC = new double[nt];
-        for (int n = 0; n < nt; n++) {
-            double reach = Double.NaN;
-            for (int i = i0; i <= iHi; i++) {
-                if (fs.nearSurfaceU[n][i] >= threshold) {
-                    reach = fs.xM[i];
-                } else if (fs.xM[i] >= 0) {
-                    break;
-                }
-            }
-            reachM[n] = reach;
-            frontX[n] = Double.NaN;
-            frontC[n] = Double.NaN;
-            if (!Double.isNaN(reach)) {
-                double c = Double.NEGATIVE_INFINITY;
-                for (int i = Math.max(1, iLo); i <= Math.min(nx - 2, iHi); i++) {
-                    if (Math.abs(fs.xM[i] - reach) > FRONT_WINDOW_M) {
-                        continue;
-                    }
-                    double conv = -(fs.nearSurfaceTotalU[n][i + 1] - fs.nearSurfaceTotalU[n][i - 1]) / (fs.xM[i + 1] - fs.xM[i - 1]);
-                    if (conv > c) {
-                        c = conv;
-                        frontX[n] = fs.xM[i];
-                    }
-                }
-                frontC[n] = c;
-            }
-            if (!Double.isNaN(reach) && reach > pen) {
-                pen = reach;
-                penTime = fs.clockH[n];
-            }
+        int bi = FieldSections.bracket(fs.xM, peak.xM());
+        if (fs.xM[bi + 1] == peak.xM()) {
+            bi++;
         }
-
         List<SiteTiming> sites = new ArrayList<>();
         for (int s = 0; s < siteXM.length; s++) {
             double[] series = seriesAt(fs, siteXM[s]);
-            double[] total = seriesAt(fs.nearSurfaceTotalU, fs, siteXM[s]);
-            double[] along = seriesAt(fs.nearSurfaceTotalV, fs, siteXM[s]);
             int pk = 0;
             for (int n = 1; n < nt; n++) {
                 if (series[n] > series[pk]) {
                     pk = n;
                 }
             }
-            Double arrival = fs.arrivalFollowsFront && siteXM[s] > 0
-                    ? onshoreAfterFront(fs.clockH, total, along, threshold, reachM, siteXM[s])
-                    : firstOnshore(fs.clockH, total, along, threshold);
-            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], arrival, series[pk], fs.clockH[pk]));
+            sites.add(new SiteTiming(siteNames.get(s), siteXM[s], track.arrivalAt(siteXM[s]), series[pk], fs.clockH[pk]));
         }
         List<SiteTiming> byX = new ArrayList<>(sites);
         byX.sort((a, b) -> Double.compare(a.xM(), b.xM()));
-        List<ImpliedSpeed> speeds = new ArrayList<>();
+        List<SpeedBetween> speeds = new ArrayList<>();
         for (int s = 1; s < byX.size(); s++) {
             SiteTiming a = byX.get(s - 1);
             SiteTiming b = byX.get(s);
-            if (a.arrivalClockH() != null && b.arrivalClockH() != null && b.arrivalClockH() > a.arrivalClockH()) {
-                speeds.add(new ImpliedSpeed(a.name(), b.name(), (b.xM() - a.xM()) / ((b.arrivalClockH() - a.arrivalClockH()) * 3600.0)));
+            if (a.arrival().exists() || b.arrival().exists()) {
+                speeds.add(new SpeedBetween(a.name(), b.name(), FrontTrack.impliedSpeed(a.arrival(), a.xM(), b.arrival(), b.xM())));
             }
         }
-        return new Result(threshold, best, fs.nearSurfaceTotalU[bn][bi], fs.clockH[bn], fs.xM[bi], bn, onset, onshoreAtStart, pen,
-                penTime, sites, speeds, reachM, frontX, frontC);
-    }
-
-    /**
-     * Arrival at an inland site of a nonlinear run: as {@link #firstOnshore}, but only once the breeze's
-     * onshore reach from the coast has come within {@link #ARRIVAL_WINDOW_M} of the site, so that a gust of
-     * resolved convection ahead of the front does not count. If the total wind is already in the onshore
-     * sector when the front comes near (a gust that stayed), the arrival is that time. Null when the reach
-     * never comes near, or the wind never turns onshore after it has.
-     */
-    static Double onshoreAfterFront(double[] t, double[] cross, double[] along, double threshold, double[] reachM, double x) {
-        int n0 = -1;
-        for (int n = 0; n < t.length; n++) {
-            if (!Double.isNaN(reachM[n]) && reachM[n] >= x - ARRIVAL_WINDOW_M) {
-                n0 = n;
-                break;
-            }
-        }
-        if (n0 < 0) {
-            return null;
-        }
-        double tan = Math.tan(Math.toRadians(ONSHORE_HALF_WIDTH_DEG));
-        int from = Math.max(0, n0 - 1);
-        if (from > 0 && inSector(cross[from], along[from], threshold, tan)) {
-            if (inSector(cross[from - 1], along[from - 1], threshold, tan)) {
-                return t[from];
-            }
-            from--;
-        }
-        double[] tt = java.util.Arrays.copyOfRange(t, from, t.length);
-        double[] cc = java.util.Arrays.copyOfRange(cross, from, t.length);
-        double[] aa = java.util.Arrays.copyOfRange(along, from, t.length);
-        return firstOnshore(tt, cc, aa, threshold);
+        return new Result(track, peak, fs.nearSurfaceTotalU[bn][bi], bn, track.onsetAtCoast(), track.maxPenetration(), sites, speeds);
     }
 
     /** u' along the output times at position x (linear in x). */
@@ -207,51 +159,6 @@ public final class BreezeDiagnostics {
             out[n] = (1 - w) * section[n][i] + w * section[n][i + 1];
         }
         return out;
-    }
-
-    /**
-     * Half-width of the onshore sector, degrees either side of the inland direction: the same default as
-     * the analysis chain's (analysis.detect.DetectionSettings.onshoreHalfWidthDeg), so the model's own arrival
-     * and what the chain detects in its synthetic soundings mean the same thing.
-     */
-    public static final double ONSHORE_HALF_WIDTH_DEG = 60.0;
-
-    /**
-     * Arrival of the onshore flow at a site: the first time the TOTAL near-surface wind, having been outside,
-     * enters the onshore sector (cross-shore component at least the threshold and within
-     * {@link #ONSHORE_HALF_WIDTH_DEG} of the inland direction); interpolated between output times on the
-     * cross-shore component; null when it never does (e.g. onshore from the start, or never onshore).
-     */
-    static Double firstOnshore(double[] t, double[] cross, double[] along, double threshold) {
-        double tan = Math.tan(Math.toRadians(ONSHORE_HALF_WIDTH_DEG));
-        boolean prevIn = inSector(cross[0], along[0], threshold, tan);
-        for (int n = 1; n < cross.length; n++) {
-            boolean in = inSector(cross[n], along[n], threshold, tan);
-            if (!prevIn && in) {
-                // the sector edge is reached when cross = max(threshold, |along| / tan): interpolate on that margin
-                double m0 = cross[n - 1] - Math.max(threshold, Math.abs(along[n - 1]) / tan);
-                double m1 = cross[n] - Math.max(threshold, Math.abs(along[n]) / tan);
-                double f = m1 > m0 ? Math.max(0, Math.min(1, -m0 / (m1 - m0))) : 1.0;
-                return t[n - 1] + f * (t[n] - t[n - 1]);
-            }
-            prevIn = in;
-        }
-        return null;
-    }
-
-    private static boolean inSector(double cross, double along, double threshold, double tanHalfWidth) {
-        return cross >= threshold && Math.abs(along) <= cross * tanHalfWidth;
-    }
-
-    /** First time the series rises through the threshold (interpolated), or null. */
-    static Double firstRise(double[] t, double[] v, double threshold) {
-        for (int n = 1; n < v.length; n++) {
-            if (v[n - 1] < threshold && v[n] >= threshold) {
-                double f = (threshold - v[n - 1]) / (v[n] - v[n - 1]);
-                return t[n - 1] + f * (t[n] - t[n - 1]);
-            }
-        }
-        return null;
     }
 
     /** The vertical structure of the breeze in the column of the peak, from a snapshot at the peak time. */

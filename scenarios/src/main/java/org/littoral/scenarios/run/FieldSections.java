@@ -7,6 +7,10 @@ import org.littoral.model.field.Background;
 import org.littoral.model.field.BreezeSolution;
 import org.littoral.model.field.FieldSampling;
 import org.littoral.model.field.Snapshot;
+import org.littoral.model.front.FrontTrack;
+import org.littoral.model.front.NearSurfaceSection;
+import org.littoral.model.front.SearchZone;
+import org.littoral.model.thermo.Thermo;
 
 /**
  * The solution evaluated at the output times and reduced to what the diagnostics and plots need:
@@ -30,6 +34,8 @@ public final class FieldSections {
     public final double[][] nearSurfaceTotalU;
     /** [time][x] near-surface total alongshore wind, m/s (ambient included). */
     public final double[][] nearSurfaceTotalV;
+    /** [time][x] near-surface virtual potential temperature, K (nonlinear runs; null for linear theory). */
+    public double[][] nearSurfaceThetaV;
     /** [site][time][level]. */
     public final double[][][] siteU;
     public final double[][][] siteV;
@@ -43,10 +49,12 @@ public final class FieldSections {
     public double interiorFromM;
     public double interiorToM;
     /**
-     * True for a nonlinear run: arrival inland is when the onshore flow connected to the coast reaches the
-     * site (the front), not the first gust above the threshold (resolved convection over land makes those).
+     * True for a nonlinear run, which makes fronts: arrivals are front passages ({@link FrontTrack}); false for
+     * linear theory, which has none: arrivals are the onset of onshore flow.
      */
-    public boolean arrivalFollowsFront;
+    public boolean fronts;
+    /** What the diagnostics may search, and what lies beyond each end. */
+    public SearchZone zone;
 
     private FieldSections(double[] clockH, double[] modelSec, double[] xM, double[] zM, double nearSurfaceM, int sites,
                           List<Double> dropped) {
@@ -65,6 +73,12 @@ public final class FieldSections {
         this.dropped = dropped;
         this.interiorFromM = xM[0];
         this.interiorToM = xM[xM.length - 1];
+    }
+
+    /** The near-surface section the front diagnostics read (shares this object's arrays). */
+    public NearSurfaceSection section() {
+        return new NearSurfaceSection(clockH, xM, nearSurfaceM, nearSurfaceTotalU, nearSurfaceU, nearSurfaceTotalV, nearSurfaceThetaV, fronts,
+                zone);
     }
 
     /**
@@ -122,7 +136,18 @@ public final class FieldSections {
             fs.interiorFromM = far.interiorFromM();
             // the landward end of the search is where the reference band begins
             fs.interiorToM = Math.min(far.interiorToM(), far.referenceBandM()[0]);
-            fs.arrivalFollowsFront = true;
+            fs.fronts = true;
+            fs.nearSurfaceThetaV = new double[nt][nx];
+            fs.zone = new SearchZone(fs.interiorFromM, fs.interiorToM, String.format(java.util.Locale.ROOT,
+                    "far-field sponge (and a %.0f km margin)", FarFieldSolution.MARGIN_M / 1000.0),
+                    "reference band of the far-field wind");
+        } else if (periodic) {
+            // a periodic domain repeats the coast with land and sea swapped at +-L/2: search half-way to it
+            fs.zone = SearchZone.periodic(nx * (xM[1] - xM[0]));
+            fs.interiorFromM = Math.max(xM[0], fs.zone.fromM());
+            fs.interiorToM = Math.min(xM[nx - 1], fs.zone.toM());
+        } else {
+            fs.zone = new SearchZone(Math.min(0, xM[0]), Math.max(0, xM[nx - 1]), "end of the domain", "end of the domain");
         }
         if (far == null && sol instanceof FieldSampling fast) {
             // Fast path (the linear model): four one-level syntheses for the near-surface section and two cached
@@ -170,6 +195,15 @@ public final class FieldSections {
                 fs.nearSurfaceTotalU[n][i] = total;
                 fs.nearSurfaceTotalV[n][i] = (1 - wz) * v[k0 * nx + i] + wz * v[(k0 + 1) * nx + i];
                 fs.nearSurfaceU[n][i] = total - ambientNear;
+            }
+            if (fs.nearSurfaceThetaV != null) {
+                double[] th = s.thetaK();
+                double[] r = s.mixingRatioKgPerKg();
+                for (int i = 0; i < nx; i++) {
+                    int a = k0 * nx + i;
+                    fs.nearSurfaceThetaV[n][i] = (1 - wz) * Thermo.virtualPotentialTemperatureK(th[a], r[a])
+                            + wz * Thermo.virtualPotentialTemperatureK(th[a + nx], r[a + nx]);
+                }
             }
             for (int site = 0; site < col.length; site++) {
                 int i = col[site];

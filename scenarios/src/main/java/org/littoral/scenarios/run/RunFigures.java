@@ -78,7 +78,7 @@ final class RunFigures {
             }
         }
         String note = "Idealised " + model + " model (not a forecast). u' = wind minus "
-                + (fs.arrivalFollowsFront ? "far-field reference" : "ambient wind") + ", onshore > 0; black line: u' = "
+                + (fs.fronts ? "far-field reference" : "ambient wind") + ", onshore > 0; black line: u' = "
                 + fmt(d.thresholdMPerS()) + " m/s.";
         FieldFigure.Builder b = FieldFigure.builder().size(1000, 640)
                 .title(String.format(Locale.ROOT, "%s: near-surface (%s m) cross-shore breeze wind", scenario, fmt(fs.nearSurfaceM)))
@@ -90,7 +90,7 @@ final class RunFigures {
                 b.verticalLine(siteXM[s] / 1000.0, siteNames.get(s));
             }
         }
-        if (fs.arrivalFollowsFront) {
+        if (fs.fronts) {
             List<double[]> pts = new ArrayList<>();
             for (int n = 0; n < nt; n++) {
                 if (!Double.isNaN(d.frontXM()[n]) && d.frontXM()[n] > 0) {
@@ -104,7 +104,7 @@ final class RunFigures {
                     px[k] = pts.get(k)[0];
                     py[k] = pts.get(k)[1];
                 }
-                b.polyline("front (max convergence)", px, py, new Color(0x1B7837), LineStyle.SOLID, Marker.CIRCLE);
+                b.polyline("front (docs/fronts.md)", px, py, new Color(0x1B7837), LineStyle.SOLID, Marker.CIRCLE);
             }
         }
         Path td = outDir.resolve("near_surface_breeze.png");

@@ -302,20 +302,28 @@ public final class ScenarioRun {
         derived.put("profiles", profiles.size());
 
         ObjectNode dg = root.putObject("diagnostics");
-        dg.put("definitions", "breeze wind = model wind minus ambient wind, cross-shore, onshore positive, at "
-                + fs.nearSurfaceM + " m; onshore means breeze wind >= " + d.thresholdMPerS() + " m/s; times are local clock");
+        dg.put("definitions", "breeze wind = model wind minus " + (sol instanceof FarFieldSolution ? "the far-field reference wind"
+                : "the ambient wind") + ", cross-shore, onshore positive; " + d.track().definitions()
+                + "; definitions in docs/fronts.md; times are local clock");
+        dg.put("arrival_kind", d.track().fronts() ? "front passage" : "onset of onshore flow (linear theory has no front)");
+        ObjectNode zone = dg.putObject("searched_zone");
+        zone.put("from_km", round(fs.zone.fromM() / 1000.0, 3));
+        zone.put("to_km", round(fs.zone.toM() / 1000.0, 3));
+        zone.put("beyond_seaward_end", fs.zone.seawardLimit());
+        zone.put("beyond_landward_end", fs.zone.landwardLimit());
         ObjectNode pk = dg.putObject("peak_onshore_wind");
         pk.put("breeze_m_per_s", round(d.peakBreezeMPerS(), 3));
         pk.put("total_cross_shore_m_per_s", round(d.peakTotalMPerS(), 3));
         pk.put("time_local", clock(d.peakClockH()));
         pk.put("time_local_h", round(d.peakClockH(), 4));
         pk.put("x_km", round(d.peakXM() / 1000.0, 3));
-        ObjectNode on = dg.putObject("onshore_flow_onset_at_coast");
-        putTime(on, d.onsetClockH());
-        if (d.onsetClockH() == null) {
-            on.put("note", d.onshoreAtOutputStart() ? "the breeze wind at the coast is already onshore at the first output time and does not rise through the threshold later"
-                    : "the breeze wind at the coast never reaches the threshold in the output window");
+        if (d.peak().atSearchLimit()) {
+            pk.put("at_search_limit", true);
+            pk.put("text", String.format(Locale.ROOT, "at least %.1f m/s at the edge of the search, %.0f km (limit of the search: %s)",
+                    d.peakBreezeMPerS(), d.peakXM() / 1000.0, d.peak().limit()));
         }
+        ObjectNode on = dg.putObject("onshore_flow_onset_at_coast");
+        putArrival(on, d.onset(), d.track().fronts());
         ObjectNode ci = dg.putObject("circulation_at_peak");
         ci.put("time_local", clock(c.clockH()));
         ci.put("x_km", round(c.xM() / 1000.0, 3));
@@ -324,33 +332,29 @@ public final class ScenarioRun {
         putNumber(ci, "return_flow_m_per_s", c.returnFlowMPerS(), 3);
         putNumber(ci, "return_flow_height_m", c.returnFlowHeightM(), 1);
         ObjectNode pen = dg.putObject("max_inland_penetration");
-        pen.put("km", round(d.maxPenetrationM() / 1000.0, 3));
-        putTime(pen, d.penetrationClockH());
+        org.littoral.model.front.Extent penetration = d.penetration();
+        if (!penetration.exists()) {
+            pen.putNull("km");
+            pen.putNull("time_local");
+            pen.putNull("time_local_h");
+            pen.put("note", penetration.note());
+        } else if (penetration.atSearchLimit()) {
+            pen.putNull("km");
+            pen.put("at_least_km", round(penetration.value() / 1000.0, 1));
+            putTime(pen, penetration.timeH());
+            pen.put("text", String.format(Locale.ROOT, "at least %.0f km (limit of the search: %s)", penetration.value() / 1000.0, penetration.limit()));
+        } else {
+            pen.put("km", round(penetration.value() / 1000.0, 3));
+            putTime(pen, penetration.timeH());
+        }
         if (sol instanceof FarFieldSolution far) {
-            for (int n = 0; d.penetrationClockH() != null && n < fs.clockH.length; n++) {
-                if (fs.clockH[n] == d.penetrationClockH() && !Double.isNaN(d.frontXM()[n])) {
-                    pen.put("front_x_km", round(d.frontXM()[n] / 1000.0, 3));
-                    pen.put("front_convergence_per_s", d.frontConvergencePerS()[n]);
-                    pen.put("front_note", "front = strongest near-surface convergence of the total wind within "
-                            + round(BreezeDiagnostics.FRONT_WINDOW_M / 1000.0, 1) + " km of the onshore reach");
-                }
-            }
-            if (d.maxPenetrationM() >= fs.interiorToM - 2 * (fs.xM[1] - fs.xM[0])) {
-                pen.put("note", "the onshore flow reached the landward end of the searched interior (the reference band): later times "
-                        + "there are not measured correctly; widen the domain (grid.points) to follow it farther");
-            }
-            ObjectNode area = dg.putObject("searched_interior");
-            area.put("from_km", round(fs.interiorFromM / 1000.0, 3));
-            area.put("to_km", round(fs.interiorToM / 1000.0, 3));
             double[] band = far.referenceBandM();
-            area.put("reference_band_from_km", round(band[0] / 1000.0, 3));
-            area.put("reference_band_to_km", round(band[1] / 1000.0, 3));
-            area.put("note", "peak, penetration and front are searched here, clear of the far-field sponges and seaward of "
-                    + "the reference band; the breeze wind is the run "
-                    + "minus its far-field reference (the run's median wind over the reference band at each time and height, so it "
-                    + "has the same drag, turning and spin-up; valid while the front has not reached the band); arrival at an inland site "
-                    + "counts only once the onshore breeze connected to the coast has come within "
-                    + round(BreezeDiagnostics.ARRIVAL_WINDOW_M / 1000.0, 1) + " km of it (convective gusts ahead of the front do not)");
+            zone.put("reference_band_from_km", round(band[0] / 1000.0, 3));
+            zone.put("reference_band_to_km", round(band[1] / 1000.0, 3));
+            zone.put("note", "peak, penetration and fronts are searched here, clear of the far-field sponges and seaward of "
+                    + "the reference band; the breeze wind is the run minus its far-field reference (the run's median wind over the "
+                    + "reference band at each time and height, so it has the same drag, turning and diurnal cycle; valid while the "
+                    + "front has not reached the band)");
         }
         ArrayNode sites = dg.putArray("sites");
         for (BreezeDiagnostics.SiteTiming s : d.sites()) {
@@ -358,16 +362,21 @@ public final class ScenarioRun {
             o.put("name", s.name());
             o.put("inland_km", s.xM() / 1000.0);
             ObjectNode a = o.putObject("onshore_arrival");
-            putTime(a, s.arrivalClockH());
+            putArrival(a, s.arrival(), d.track().fronts());
             o.put("peak_breeze_m_per_s", round(s.peakBreezeMPerS(), 3));
             o.put("peak_time_local", clock(s.peakClockH()));
         }
         ArrayNode speeds = dg.putArray("implied_speeds_between_sites");
-        for (BreezeDiagnostics.ImpliedSpeed s : d.speeds()) {
+        for (BreezeDiagnostics.SpeedBetween s : d.speeds()) {
             ObjectNode o = speeds.addObject();
             o.put("from", s.from());
             o.put("to", s.to());
-            o.put("speed_m_per_s", round(s.speedMPerS(), 3));
+            if (s.speed().resolved()) {
+                o.put("speed_m_per_s", round(s.speed().mPerS(), 3));
+            } else {
+                o.putNull("speed_m_per_s");
+                o.put("note", s.speed().note());
+            }
         }
         if (!fs.dropped.isEmpty()) {
             root.put("note", fs.dropped.size() + " output times lie outside the solution's span and were skipped");
@@ -377,6 +386,16 @@ public final class ScenarioRun {
             f.add(outDir.relativize(p).toString());
         }
         return root;
+    }
+
+    private static void putArrival(ObjectNode o, org.littoral.model.front.Arrival a, boolean fronts) {
+        putTime(o, a.timeH());
+        o.put("kind", fronts ? "front passage" : "onset of onshore flow");
+        if (a.exists()) {
+            o.put("uncertainty_min", round(a.uncertaintyH() * 60.0, 1));
+        } else {
+            o.put("note", a.note());
+        }
     }
 
     private static void putTime(ObjectNode o, Double h) {

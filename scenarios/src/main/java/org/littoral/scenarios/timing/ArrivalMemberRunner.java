@@ -18,9 +18,9 @@ import org.littoral.scenarios.sweep.ScenarioMemberRunner;
 
 /**
  * One member of a check-timing ensemble: solves the member's scenario (the model named by its {@code kind},
- * through the given solver) and records the model's front arrival — the near-surface wind entering the onshore
- * sector, the same definition as {@code littoral run} and the planner — at every site and at a row of inland
- * distances for the fan chart, plus the onset at the coast.
+ * through the given solver) and records the model's arrival — THE definition of
+ * {@link org.littoral.model.front.FrontTrack#arrivalAt}, the same as {@code littoral run}, sweeps, the planner and
+ * compare — at every site and at a row of inland distances for the fan chart, plus the onset at the coast.
  */
 public final class ArrivalMemberRunner implements Function<Member, MemberResult> {
     private final ScenarioMemberRunner scenarios;
@@ -69,6 +69,7 @@ public final class ArrivalMemberRunner implements Function<Member, MemberResult>
             out.put("onset_h", Math.round(d.onsetClockH() * 1e6) / 1e6);
         }
         out.put("onshore_at_output_start", d.onshoreAtOutputStart());
+        out.put("arrival_kind", d.track().fronts() ? "front passage" : "onset of onshore flow (linear theory has no front)");
         out.put("model", sol.modelName());
         return new MemberResult(out);
     }

@@ -26,14 +26,14 @@ import org.littoral.scenarios.validate.ValidationSuite;
 /**
  * The model against itself through the analysis chain: on a built-in scenario's synthetic soundings the
  * chain's onshore passage must fall within one flight interval of the model's own front arrival
- * (BreezeDiagnostics) at every site the breeze reaches; a scenario compared with its own soundings has zero
+ * (model.front.FrontTrack, docs/fronts.md) at every site the breeze reaches; a scenario compared with its own soundings has zero
  * error; and direction differences are circular.
  */
 public final class CompareSuite implements ValidationSuite {
     /** An offshore ambient wind opposes the breeze, so the onshore flow arrives as a shift rather than a slow turn. */
     static final String SCENARIO = "offshore-ambient";
-    static final String SOURCE = "consistency of littoral's two definitions: front arrival (run.BreezeDiagnostics: total "
-            + "near-surface wind entering the onshore sector) and the analysis chain's passage (docs/analysis.md), on the same model run";
+    static final String SOURCE = "consistency of littoral's two definitions: the model's arrival (model.front.FrontTrack, "
+            + "docs/fronts.md) and the analysis chain's passage (docs/analysis.md), on the same model run";
 
     @Override
     public String title() {
