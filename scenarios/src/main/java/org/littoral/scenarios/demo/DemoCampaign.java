@@ -178,8 +178,8 @@ public record DemoCampaign(long seed, List<DemoDay> days) {
             if (kind.bayFirst()) {
                 onset = Math.max(onset, uniform(r, 10.9, 11.75));
             }
-            double x0 = DemoCoast.BAYSHORE.inlandDistanceM();
-            double x1 = DemoCoast.INLAND.inlandDistanceM();
+            double x0 = DemoCoast.MARSH_4KM.inlandDistanceM();
+            double x1 = DemoCoast.PLAIN_25KM.inlandDistanceM();
             double arrival0 = onset + x0 / speedFront / 3600.0;
             // Late afternoon is the end of operations: a front that would pass the inland site after
             // 16:30 is made faster, so that every inland passage has flights after it.

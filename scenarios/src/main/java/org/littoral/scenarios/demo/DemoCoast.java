@@ -34,10 +34,10 @@ public final class DemoCoast {
     public record Site(String name, double inlandDistanceM, String description) {
     }
 
-    public static final Site BAYSHORE = new Site("bayshore", 4000.0,
+    public static final Site MARSH_4KM = new Site("marsh-4km", 4000.0,
             "mainland shore of the bay, 300 m inland of the bay's landward shore");
-    public static final Site INLAND = new Site("inland", 25000.0, "farmland on the mainland plain");
-    public static final List<Site> SITES = List.of(BAYSHORE, INLAND);
+    public static final Site PLAIN_25KM = new Site("plain-25km", 25000.0, "farmland on the mainland plain");
+    public static final List<Site> SITES = List.of(MARSH_4KM, PLAIN_25KM);
 
     private DemoCoast() {
     }

@@ -153,7 +153,7 @@ public final class DemoCommand implements Callable<Integer> {
     private static void intro(HtmlReport rep, Path dataDir) {
         rep.section("What was run and why");
         rep.paragraph("Quillmarsh Reach is an INVENTED coast (sea, a 1.2 km barrier strip, a 2.5 km bay, the mainland) with two "
-                + "profiling sites, 'bayshore' 4 km and 'inland' 25 km from the sea shore, and an INVENTED campaign of 36 days "
+                + "profiling sites, 'marsh-4km' 4 km and 'plain-25km' 25 km from the sea shore, and an INVENTED campaign of 36 days "
                 + "of drone-like profiles to 600 m, every 30 min and every 15 min around the expected front. The days were made "
                 + "by a generator that is independent of littoral's models (smooth background profiles plus a prescribed front "
                 + "with a wind shift, cooling and moistening of random size, sensor noise and missing flights), so the true "

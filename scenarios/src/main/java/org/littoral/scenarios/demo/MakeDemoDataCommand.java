@@ -58,7 +58,7 @@ public final class MakeDemoDataCommand implements Callable<Integer> {
                     dates.add(date);
                 } catch (DateTimeParseException e) {
                     throw new UserInputException("--raw-days: '" + s + "' is not an ISO date; give dates like 2031-06-20, "
-                            + "2031-06-20:bayshore, 'all' or 'none'");
+                            + "2031-06-20:marsh-4km, 'all' or 'none'");
                 } catch (IllegalArgumentException e) {
                     throw new UserInputException("--raw-days: " + e.getMessage());
                 }
@@ -71,7 +71,7 @@ public final class MakeDemoDataCommand implements Callable<Integer> {
                 }
             }
             if (siteName != null && DemoCoast.SITES.stream().noneMatch(x -> x.name().equals(v.trim().split(":", 2)[1]))) {
-                throw new UserInputException("--raw-days: unknown site in '" + s + "'; the sites are bayshore and inland");
+                throw new UserInputException("--raw-days: unknown site in '" + s + "'; the sites are marsh-4km and plain-25km");
             }
         }
         return out;

@@ -85,7 +85,7 @@ public final class AnalysisFigures {
                 b.series(panels.size() % DAYS_PER_GRID == 0 ? line : line.hideInLegend());
                 for (Passage p : d.passages()) {
                     // label only the breeze passages (onshore turns); other changes are unlabelled dashed lines
-                    b.event(p.timeHours(), p.turnsOnshore() ? shortName(d.siteDay().site()) : "");
+                    b.event(p.timeHours(), p.turnsOnshore() ? d.siteDay().site() : "");
                 }
             }
             panels.add(b.build());
@@ -110,10 +110,6 @@ public final class AnalysisFigures {
 
     private static String breezeType(List<SiteDayResult> ds) {
         return ds.isEmpty() ? "" : ds.get(0).breezeType().name().toLowerCase(Locale.ROOT);
-    }
-
-    private static String shortName(String site) {
-        return site.length() <= 4 ? site : site.substring(0, 3);
     }
 
     /** Meteorological direction of the layer-mean wind vector, NaN where the layer has too few valid levels. */

@@ -80,7 +80,7 @@ class DemoCampaignTest {
 
     @Test
     void theInlandPassageIsLaterByTheDistanceOverTheFrontSpeed() {
-        double dx = DemoCoast.INLAND.inlandDistanceM() - DemoCoast.BAYSHORE.inlandDistanceM();
+        double dx = DemoCoast.PLAIN_25KM.inlandDistanceM() - DemoCoast.MARSH_4KM.inlandDistanceM();
         int pairs = 0;
         for (DemoDay d : CAMPAIGN.days()) {
             DemoDay.Front coastal = null;

@@ -65,11 +65,11 @@ class DemoCommandTest {
     @Test
     void theAnswerKeyGroupsTruePassagesBySiteDay(@TempDir Path tmp) throws Exception {
         Path csv = tmp.resolve("p.csv");
-        Files.writeString(csv, "# INVENTED\nday,site,passage,time_hours\n2031-06-25,bayshore,1,9.5\n2031-06-25,bayshore,2,12.0\n"
-                + "2031-06-25,inland,1,13.25\n");
+        Files.writeString(csv, "# INVENTED\nday,site,passage,time_hours\n2031-06-25,marsh-4km,1,9.5\n2031-06-25,marsh-4km,2,12.0\n"
+                + "2031-06-25,plain-25km,1,13.25\n");
         Map<String, double[]> t = DemoCommand.readTruth(csv);
-        assertArrayEquals(new double[] {9.5, 12.0}, t.get("2031-06-25/bayshore"), 0);
-        assertArrayEquals(new double[] {13.25}, t.get("2031-06-25/inland"), 0);
+        assertArrayEquals(new double[] {9.5, 12.0}, t.get("2031-06-25/marsh-4km"), 0);
+        assertArrayEquals(new double[] {13.25}, t.get("2031-06-25/plain-25km"), 0);
     }
 
     @Test
