@@ -144,7 +144,7 @@ public final class DemoCommand implements Callable<Integer> {
         String dayFile = "check-timing-" + CHECK_DAY + ".yaml";
         try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/" + dayFile)) {
             if (in != null) {
-                org.littoral.scenarios.report.AtomicFiles.write(fallback.resolve(dayFile), in.readAllBytes());
+                org.littoral.scenarios.output.AtomicFile.write(fallback.resolve(dayFile), in.readAllBytes());
             }
         }
         return fallback;

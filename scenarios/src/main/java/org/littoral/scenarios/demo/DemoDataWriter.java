@@ -2,13 +2,11 @@ package org.littoral.scenarios.demo;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -16,6 +14,8 @@ import java.util.Locale;
 import java.util.zip.GZIPOutputStream;
 import org.littoral.model.thermo.Thermo;
 import org.littoral.scenarios.analysis.ingest.ProfileColumns;
+import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.output.Csv;
 
 /**
  * Writes the INVENTED demo campaign as tidy CSV (one row per sample, units in the column names), each
@@ -335,50 +335,27 @@ public final class DemoDataWriter {
         });
     }
 
-    private interface Body {
-        void write(Writer w) throws IOException;
-    }
-
-    private static void writeGzip(Path file, Body body) throws IOException {
-        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-        try (OutputStream os = new GZIPOutputStream(Files.newOutputStream(tmp), 1 << 16);
-             Writer w = new BufferedWriter(new OutputStreamWriter(os, StandardCharsets.UTF_8), 1 << 16)) {
-            body.write(w);
-        }
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+    private static void writeGzip(Path file, AtomicFile.TextBody body) throws IOException {
+        AtomicFile.writeStream(file, out -> {
+            GZIPOutputStream gz = new GZIPOutputStream(out, 1 << 16);
+            Writer w = new BufferedWriter(new OutputStreamWriter(gz, StandardCharsets.UTF_8), 1 << 16);
+            body.writeTo(w);
+            w.flush();
+            gz.finish();
+        });
     }
 
     private static void writeText(Path file, String text) throws IOException {
-        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-        Files.writeString(tmp, text, StandardCharsets.UTF_8);
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        AtomicFile.writeString(file, text);
     }
 
-    /** Fast fixed-decimal formatting (String.format is too slow for millions of values); NaN is empty. */
+    /** Fixed decimals through the project's CSV dialect ({@link Csv#fixed}); clock times as HH:MM:SS. */
     static final class Fmt {
-        private static final long[] POW = {1, 10, 100, 1000, 10000, 100000};
-
         private Fmt() {
         }
 
         static StringBuilder fixed(StringBuilder b, double v, int decimals) {
-            if (Double.isNaN(v) || Double.isInfinite(v)) {
-                return b;
-            }
-            long scaled = Math.round(Math.abs(v) * POW[decimals]);
-            if (v < 0 && scaled != 0) {
-                b.append('-');
-            }
-            b.append(scaled / POW[decimals]);
-            if (decimals > 0) {
-                b.append('.');
-                String frac = Long.toString(scaled % POW[decimals]);
-                for (int i = frac.length(); i < decimals; i++) {
-                    b.append('0');
-                }
-                b.append(frac);
-            }
-            return b;
+            return Csv.fixed(b, v, decimals);
         }
 
         static StringBuilder clock(StringBuilder b, double hours) {

@@ -14,7 +14,7 @@ import org.littoral.scenarios.analysis.AnalysisResult;
 import org.littoral.scenarios.analysis.SiteDayResult;
 import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.analysis.ingest.QcLog;
-import org.littoral.scenarios.run.AtomicWrite;
+import org.littoral.scenarios.output.AtomicFile;
 
 /** Writes everything the analysis chain produced: tables first (each atomically), then the summary and report. */
 public final class AnalysisOutputs {
@@ -60,14 +60,14 @@ public final class AnalysisOutputs {
             }
         }
         Path summary = out.resolve("analysis.json");
-        AtomicWrite.write(summary, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
+        AtomicFile.write(summary, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
         files.add(summary);
         files.addAll(AnalysisReport.write(out, r, qc, what, coast, settings));
         return files;
     }
 
     static Path text(Path p, String s) throws IOException {
-        AtomicWrite.write(p, s.getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(p, s.getBytes(StandardCharsets.UTF_8));
         return p;
     }
 }

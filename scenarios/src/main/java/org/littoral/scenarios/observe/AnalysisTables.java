@@ -10,6 +10,7 @@ import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.analysis.metrics.DistributionRow;
 import org.littoral.scenarios.analysis.metrics.PassageResponse;
 import org.littoral.scenarios.analysis.stats.ComparisonRow;
+import org.littoral.scenarios.output.Csv;
 
 /**
  * The analysis chain's result as tidy CSV tables (units in the column names). The same tables are
@@ -27,12 +28,12 @@ public final class AnalysisTables {
             double[] t = d.siteDay().timeHours();
             Passage p = d.firstOnshorePassage();
             long onshore = d.passages().stream().filter(Passage::turnsOnshore).count();
-            sb.append(csv(d.siteDay().day())).append(',').append(csv(d.siteDay().site())).append(',').append(t.length).append(',')
+            sb.append(Csv.field(d.siteDay().day())).append(',').append(Csv.field(d.siteDay().site())).append(',').append(t.length).append(',')
                     .append(num(t.length == 0 ? Double.NaN : t[0])).append(',').append(num(t.length == 0 ? Double.NaN : t[t.length - 1]))
                     .append(',').append(d.passages().size()).append(',').append(onshore).append(',')
                     .append(num(p == null ? Double.NaN : p.timeHours())).append(',').append(d.breezeType().name()).append(',')
                     .append(num(d.ambientWind()[0])).append(',').append(num(d.ambientWind()[1])).append(',').append(d.ambientSource())
-                    .append(',').append(csv(d.attributes().entrySet().stream().map(e -> e.getKey() + "=" + e.getValue())
+                    .append(',').append(Csv.field(d.attributes().entrySet().stream().map(e -> e.getKey() + "=" + e.getValue())
                             .collect(Collectors.joining("; ")))).append('\n');
         }
         return sb.toString();
@@ -42,9 +43,9 @@ public final class AnalysisTables {
         StringBuilder sb = new StringBuilder("day,site,ordinal,time_local_h,uncertainty_h,confidence,detectors,turns_onshore,kind,"
                 + "direction_before_deg,direction_after_deg,cross_shore_before_m_per_s,cross_shore_after_m_per_s\n");
         for (Passage p : r.passages()) {
-            sb.append(csv(p.day())).append(',').append(csv(p.site())).append(',').append(p.ordinal()).append(',')
+            sb.append(Csv.field(p.day())).append(',').append(Csv.field(p.site())).append(',').append(p.ordinal()).append(',')
                     .append(num(p.timeHours())).append(',').append(num(p.uncertaintyHours())).append(',').append(num(p.confidence()))
-                    .append(',').append(csv(String.join(" ", p.detectors()))).append(',').append(p.turnsOnshore()).append(',')
+                    .append(',').append(Csv.field(String.join(" ", p.detectors()))).append(',').append(p.turnsOnshore()).append(',')
                     .append(p.kind().name()).append(',').append(num(p.directionBeforeDeg())).append(',').append(num(p.directionAfterDeg()))
                     .append(',').append(num(p.crossShoreBeforeMPerS())).append(',').append(num(p.crossShoreAfterMPerS())).append('\n');
         }
@@ -56,9 +57,9 @@ public final class AnalysisTables {
                 + "change,tendency_per_h,reference,anomaly,change_standardised\n");
         for (PassageResponse x : r.responses()) {
             Passage p = x.passage();
-            sb.append(csv(p.day())).append(',').append(csv(p.site())).append(',').append(p.ordinal()).append(',')
+            sb.append(Csv.field(p.day())).append(',').append(Csv.field(p.site())).append(',').append(p.ordinal()).append(',')
                     .append(num(p.timeHours())).append(',').append(x.layer().label()).append(',').append(x.variable().column()).append(',')
-                    .append(csv(x.variable().unit())).append(',').append(x.nPre()).append(',').append(x.nPost()).append(',')
+                    .append(Csv.field(x.variable().unit())).append(',').append(x.nPre()).append(',').append(x.nPost()).append(',')
                     .append(num(x.preMean())).append(',').append(num(x.postMean())).append(',').append(num(x.change())).append(',')
                     .append(num(x.tendencyPerHour())).append(',').append(num(x.referenceValue())).append(',').append(num(x.anomaly()))
                     .append(',').append(num(x.changeStandardised())).append('\n');
@@ -69,7 +70,7 @@ public final class AnalysisTables {
     public static String distributions(AnalysisResult r) {
         StringBuilder sb = new StringBuilder("layer_m,variable,metric,n,mean,sd,skewness,excess_kurtosis\n");
         for (DistributionRow d : r.distributions()) {
-            sb.append(d.layer().label()).append(',').append(d.variable().column()).append(',').append(csv(d.metric())).append(',')
+            sb.append(d.layer().label()).append(',').append(d.variable().column()).append(',').append(Csv.field(d.metric())).append(',')
                     .append(d.moments().n()).append(',').append(num(d.moments().mean())).append(',').append(num(d.moments().sd()))
                     .append(',').append(num(d.moments().skewness())).append(',').append(num(d.moments().excessKurtosis())).append('\n');
         }
@@ -81,8 +82,8 @@ public final class AnalysisTables {
                 + "whisker_low,whisker_high,outliers\n");
         for (CompositeRow c : r.composites()) {
             BoxStats b = c.box();
-            sb.append(csv(c.spec().label())).append(',').append(c.spec().axis().name()).append(',').append(c.spec().variable().column())
-                    .append(',').append(c.spec().layer().label()).append(',').append(c.spec().anomaly()).append(',').append(csv(c.group()))
+            sb.append(Csv.field(c.spec().label())).append(',').append(c.spec().axis().name()).append(',').append(c.spec().variable().column())
+                    .append(',').append(c.spec().layer().label()).append(',').append(c.spec().anomaly()).append(',').append(Csv.field(c.group()))
                     .append(',').append(num(c.binCentreHours())).append(',').append(b.n()).append(',').append(num(b.mean())).append(',')
                     .append(num(b.min())).append(',').append(num(b.q1())).append(',').append(num(b.median())).append(',')
                     .append(num(b.q3())).append(',').append(num(b.max())).append(',').append(num(b.whiskerLow())).append(',')
@@ -95,8 +96,8 @@ public final class AnalysisTables {
         StringBuilder sb = new StringBuilder("metric,attribute,group_a,group_b,n_a,n_b,mean_a,mean_b,difference,test,statistic,"
                 + "degrees_of_freedom,p_value,p_holm,skewness_a,skewness_b,jarque_bera_p_a,jarque_bera_p_b,why\n");
         for (ComparisonRow c : r.comparisons()) {
-            sb.append(csv(c.metric())).append(',').append(csv(c.attribute())).append(',').append(csv(c.groupA())).append(',')
-                    .append(csv(c.groupB())).append(',').append(c.nA()).append(',').append(c.nB()).append(',').append(num(c.meanA()))
+            sb.append(Csv.field(c.metric())).append(',').append(Csv.field(c.attribute())).append(',').append(Csv.field(c.groupA())).append(',')
+                    .append(Csv.field(c.groupB())).append(',').append(c.nA()).append(',').append(c.nB()).append(',').append(num(c.meanA()))
                     .append(',').append(num(c.meanB())).append(',').append(num(c.difference())).append(',').append(c.test().name())
                     .append(',').append(num(c.statistic())).append(',').append(num(c.degreesOfFreedom())).append(',')
                     .append(num(c.pValue())).append(',').append(num(c.pHolm())).append(',')
@@ -104,7 +105,7 @@ public final class AnalysisTables {
                     .append(num(c.diagnosticsB() == null ? Double.NaN : c.diagnosticsB().skewness())).append(',')
                     .append(num(c.diagnosticsA() == null ? Double.NaN : c.diagnosticsA().jarqueBeraP())).append(',')
                     .append(num(c.diagnosticsB() == null ? Double.NaN : c.diagnosticsB().jarqueBeraP())).append(',')
-                    .append(csv(c.why())).append('\n');
+                    .append(Csv.field(c.why())).append('\n');
         }
         return sb.toString();
     }
@@ -113,10 +114,4 @@ public final class AnalysisTables {
         return Double.isNaN(v) ? "" : String.format(Locale.ROOT, "%.5g", v);
     }
 
-    static String csv(String s) {
-        if (s == null) {
-            return "";
-        }
-        return s.contains(",") || s.contains("\"") || s.contains("\n") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
-    }
 }

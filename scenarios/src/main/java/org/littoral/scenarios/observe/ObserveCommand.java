@@ -101,6 +101,6 @@ public final class ObserveCommand implements Callable<Integer> {
     }
 
     static void write(Path p, String text) throws IOException {
-        org.littoral.scenarios.run.AtomicWrite.write(p, text.getBytes(StandardCharsets.UTF_8));
+        org.littoral.scenarios.output.AtomicFile.write(p, text.getBytes(StandardCharsets.UTF_8));
     }
 }

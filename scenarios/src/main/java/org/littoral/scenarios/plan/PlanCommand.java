@@ -16,6 +16,7 @@ import java.util.concurrent.Future;
 import org.littoral.model.coast.SurfaceMap;
 import org.littoral.scenarios.analysis.AnalysisSettings;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.AtomicFile;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.sweep.Member;
@@ -206,6 +207,6 @@ public final class PlanCommand implements Callable<Integer> {
                         + "(candidates, cadences, hours, ceiling, model or windows differ); use a new --out folder");
             }
         }
-        PlanOutputs.atomic(f, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(inputs));
+        AtomicFile.write(f, json.writerWithDefaultPrettyPrinter().writeValueAsBytes(inputs));
     }
 }

@@ -6,12 +6,12 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.output.Csv;
 import org.littoral.scenarios.scenario.Scenario;
 
 /** Writes a plan's tables (CSV, JSON) and prints its summary. */
@@ -26,9 +26,9 @@ public final class PlanOutputs {
 
     static void write(Path dir, PlanSpec plan, String model, Scenario base, PlanResult r, DenseWindow[][] windows, double wallSeconds)
             throws IOException {
-        atomic(dir.resolve("site-capture.csv"), siteCsv(r).getBytes(StandardCharsets.UTF_8));
-        atomic(dir.resolve("recommendations.csv"), recommendationsCsv(r, r.ranked.size()).getBytes(StandardCharsets.UTF_8));
-        atomic(dir.resolve("arrival-fan.csv"), fanCsv(r).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(dir.resolve("site-capture.csv"), siteCsv(r).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(dir.resolve("recommendations.csv"), recommendationsCsv(r, r.ranked.size()).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(dir.resolve("arrival-fan.csv"), fanCsv(r).getBytes(StandardCharsets.UTF_8));
         ObjectMapper json = new ObjectMapper();
         ObjectNode root = json.createObjectNode();
         root.put("plan", plan.ensemble().name());
@@ -86,7 +86,7 @@ public final class PlanOutputs {
         }
         root.set("notes", json.valueToTree(r.notes));
         root.set("files", json.valueToTree(List.of("site-capture.csv", "recommendations.csv", "arrival-fan.csv", "members/")));
-        atomic(dir.resolve("plan.json"), json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
+        AtomicFile.write(dir.resolve("plan.json"), json.writerWithDefaultPrettyPrinter().writeValueAsBytes(root));
         PlanReport.write(dir, plan, model.equals("scenario") ? base.kind().name().toLowerCase(Locale.ROOT) : model, r, windows);
     }
 
@@ -113,7 +113,7 @@ public final class PlanOutputs {
                 + "arrival_p90_local_h,p_captured,p_captured_low95,p_captured_high95,mean_flights_per_day,feasible,"
                 + "dense_window_start_local_h,dense_window_end_local_h\n");
         for (PlanResult.SiteRow s : r.sites) {
-            sb.append(String.format(Locale.ROOT, "%.3f,%s,%.4f,%s,%s,%s,%.4f,%.4f,%.4f,%.1f,%s,%s,%s%n", s.distanceKm(), csv(s.cadence()),
+            sb.append(String.format(Locale.ROOT, "%.3f,%s,%.4f,%s,%s,%s,%.4f,%.4f,%.4f,%.1f,%s,%s,%s%n", s.distanceKm(), Csv.field(s.cadence()),
                     s.frontArrives().estimate(), num(s.arrivalP10H()), num(s.arrivalMedianH()), num(s.arrivalP90H()),
                     s.captured().estimate(), s.captured().lower(), s.captured().upper(), s.meanFlights(), s.feasible(),
                     num(s.denseStartH()), num(s.denseEndH())));
@@ -128,7 +128,7 @@ public final class PlanOutputs {
             SiteSetScore s = r.ranked.get(i);
             sb.append(String.format(Locale.ROOT, "%d,\"%s\",%s,%.4f,%.4f,%.4f,%.4f,%.4f,%.4f,%.4f,%s,%.3f,%d%n", i + 1,
                     s.distancesKm().stream().map(d -> String.format(Locale.ROOT, "%.2f", d)).collect(Collectors.joining(";")),
-                    csv(s.cadence()), s.score(), s.anyCaptured().estimate(), s.anyCaptured().lower(), s.anyCaptured().upper(),
+                    Csv.field(s.cadence()), s.score(), s.anyCaptured().estimate(), s.anyCaptured().lower(), s.anyCaptured().upper(),
                     s.speedResolved().estimate(), s.speedResolved().lower(), s.speedResolved().upper(),
                     s.bayAndSeaSeparated() == null ? "" : String.format(Locale.ROOT, "%.4f", s.bayAndSeaSeparated().estimate()),
                     s.expectedSitesCaptured(), s.flightsPerDay()));
@@ -193,15 +193,5 @@ public final class PlanOutputs {
         return Double.isNaN(v) ? "" : String.format(Locale.ROOT, "%.4f", v);
     }
 
-    private static String csv(String s) {
-        return s.contains(",") || s.contains("\"") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
-    }
 
-    static void atomic(Path target, byte[] bytes) throws IOException {
-        Path parent = target.toAbsolutePath().getParent();
-        Files.createDirectories(parent);
-        Path tmp = Files.createTempFile(parent, "." + target.getFileName(), ".tmp");
-        Files.write(tmp, bytes);
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-    }
 }

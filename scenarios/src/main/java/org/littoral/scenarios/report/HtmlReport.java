@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.Base64;
 import java.util.List;
 import java.util.Map;
+import org.littoral.scenarios.output.AtomicFile;
 
 /**
  * A self-contained HTML report: one file, inline CSS, figures embedded as base64 PNG, no scripts and
@@ -250,7 +251,7 @@ public final class HtmlReport {
 
     /** Writes the document atomically (UTF-8). */
     public void write(Path target) throws IOException {
-        AtomicFiles.writeString(target, toHtml());
+        AtomicFile.writeString(target, toHtml());
     }
 
     private static final class SectionBlock implements Block {

@@ -2,6 +2,7 @@ package org.littoral.scenarios.report;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import org.littoral.scenarios.output.AtomicFile;
 
 /** Writes figures as PNG files atomically (temporary file in the same folder, then rename). */
 public final class PngWriter {
@@ -9,6 +10,6 @@ public final class PngWriter {
     }
 
     public static void write(Figure figure, Path target) throws IOException {
-        AtomicFiles.write(target, figure.toPngBytes());
+        AtomicFile.write(target, figure.toPngBytes());
     }
 }

@@ -11,11 +11,13 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.nio.file.Path;
 import java.util.List;
+import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.output.Csv;
 
 /**
- * Writes {@link Table}s as CSV (RFC 4180: comma separated, CRLF line ends, a field quoted when it
- * holds a comma, a double quote, CR or LF, and inner quotes doubled) and as pretty JSON (an array of
- * objects, keys in column order, NaN as null). Every write is atomic (temporary file, then rename).
+ * Writes {@link Table}s as CSV in the project's one dialect ({@link Csv}: comma separated, LF line ends, RFC 4180
+ * quoting, a missing number as an empty field) and as pretty JSON (an array of objects, keys in column order, NaN
+ * as null). Every write is atomic ({@link AtomicFile}).
  */
 public final class TableWriter {
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
@@ -26,33 +28,15 @@ public final class TableWriter {
 
     public static String toCsv(Table t) {
         StringBuilder sb = new StringBuilder();
-        line(sb, t.columns());
+        Csv.line(sb, t.columns());
         for (List<Object> r : t.rows()) {
             String[] cells = new String[r.size()];
             for (int i = 0; i < cells.length; i++) {
                 cells[i] = Table.csvText(r.get(i));
             }
-            line(sb, List.of(cells));
+            Csv.line(sb, List.of(cells));
         }
         return sb.toString();
-    }
-
-    private static void line(StringBuilder sb, List<String> cells) {
-        for (int i = 0; i < cells.size(); i++) {
-            if (i > 0) {
-                sb.append(',');
-            }
-            sb.append(csvField(cells.get(i)));
-        }
-        sb.append("\r\n");
-    }
-
-    /** RFC 4180 section 2, rules 5-7. */
-    public static String csvField(String s) {
-        if (s.indexOf(',') < 0 && s.indexOf('"') < 0 && s.indexOf('\n') < 0 && s.indexOf('\r') < 0) {
-            return s;
-        }
-        return '"' + s.replace("\"", "\"\"") + '"';
     }
 
     public static JsonNode toJsonNode(Table t) {
@@ -102,16 +86,16 @@ public final class TableWriter {
     }
 
     public static void writeCsv(Table t, Path target) throws IOException {
-        AtomicFiles.writeString(target, toCsv(t));
+        AtomicFile.writeString(target, toCsv(t));
     }
 
     public static void writeJson(Table t, Path target) throws IOException {
-        AtomicFiles.writeString(target, toJson(t));
+        AtomicFile.writeString(target, toJson(t));
     }
 
     /** Any Jackson-serialisable value (records, maps, lists) as pretty JSON, atomically. */
     public static void writeJsonValue(Object value, Path target) throws IOException {
-        AtomicFiles.writeString(target, JSON.writeValueAsString(value) + "\n");
+        AtomicFile.writeString(target, JSON.writeValueAsString(value) + "\n");
     }
 
     /** Records as CSV, columns in component order. */

@@ -23,6 +23,8 @@ import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.netcdf.CfFile;
 import org.littoral.scenarios.netcdf.FieldsNetcdf;
 import org.littoral.scenarios.netcdf.SoundingsNetcdf;
+import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.output.Csv;
 import org.littoral.scenarios.scenario.Scenario;
 
 /**
@@ -114,7 +116,7 @@ public final class ScenarioRun {
 
         List<Path> files = new ArrayList<>();
         Path soundings = outDir.resolve("soundings.csv");
-        AtomicWrite.write(soundings, soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(soundings, soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
         files.add(soundings);
         CfFile.Provenance prov = new CfFile.Provenance("littoral " + scenario.name() + ": " + scenario.description(), scenario.name(),
                 sol.modelName(), scenario.inputs().toString(), coast, command);
@@ -133,7 +135,7 @@ public final class ScenarioRun {
             files.add(fieldsNc);
         }
         Path section = outDir.resolve("near_surface_breeze.csv");
-        AtomicWrite.write(section, timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(section, timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
         files.add(section);
         if (figures) {
             files.addAll(RunFigures.write(fs, d, names, siteX, scenario.name(), sol.modelName(), outDir));
@@ -143,7 +145,7 @@ public final class ScenarioRun {
         files.add(summaryPath);
         ObjectNode summary = summary(sol, profiles, fs, d, circ, outDir, files);
         ObjectMapper json = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-        AtomicWrite.write(summaryPath, json.writeValueAsBytes(summary));
+        AtomicFile.write(summaryPath, json.writeValueAsBytes(summary));
         say(String.format(Locale.ROOT, "done in %.2f s: %s", (System.nanoTime() - t0) / 1e9, outDir));
         return new Outcome(sol, profiles, fs, d, circ, peak, summary, files);
     }
@@ -177,12 +179,12 @@ public final class ScenarioRun {
             Scenario.Output out = scenario.output();
             FieldSections fs = FieldSections.evaluate(part, coast, out.clockHours(), out.nearSurfaceM(), siteX, false, null);
             List<String> written = new ArrayList<>();
-            AtomicWrite.write(dir.resolve("soundings.csv"), soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
+            AtomicFile.write(dir.resolve("soundings.csv"), soundingsCsv(profiles).getBytes(StandardCharsets.UTF_8));
             written.add("soundings.csv");
-            AtomicWrite.write(dir.resolve("near_surface_breeze.csv"), timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
+            AtomicFile.write(dir.resolve("near_surface_breeze.csv"), timeDistanceCsv(fs).getBytes(StandardCharsets.UTF_8));
             written.add("near_surface_breeze.csv");
             Snapshot last = part.snapshotAt(part.endSec());
-            AtomicWrite.write(dir.resolve("last_state.csv"), stateCsv(last, part.xM(), part.zM(), coast.clockHoursFromSolar(
+            AtomicFile.write(dir.resolve("last_state.csv"), stateCsv(last, part.xM(), part.zM(), coast.clockHoursFromSolar(
                     last.timeSec() / 3600.0 - scenario.flights().sounding().dayIndex() * 24.0)).getBytes(StandardCharsets.UTF_8));
             written.add("last_state.csv");
             ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -207,7 +209,7 @@ public final class ScenarioRun {
             written.add("instability.json");
             ArrayNode f = rec.putArray("files");
             written.forEach(f::add);
-            AtomicWrite.write(dir.resolve("instability.json"), m.writeValueAsBytes(rec));
+            AtomicFile.write(dir.resolve("instability.json"), m.writeValueAsBytes(rec));
             return new UserInputException(e.getMessage() + "; what it computed up to " + clock(endClock) + " local ("
                     + part.run().snapshotCount() + " snapshots, " + profiles.size() / Math.max(1, sites.size()) + " flights) is in "
                     + dir + " (" + String.join(", ", written) + "); files already in the output folder are kept", e);
@@ -249,7 +251,7 @@ public final class ScenarioRun {
         sb.append(ProfileColumns.binnedHeader()).append('\n');
         for (Profile p : profiles) {
             for (int k = 0; k < p.size(); k++) {
-                sb.append(csvText(p.day())).append(',').append(csvText(p.site())).append(',');
+                sb.append(Csv.field(p.day())).append(',').append(Csv.field(p.site())).append(',');
                 sb.append(String.format(Locale.ROOT, "%.4f,%.1f,%.2f,%.3f,%.2f,%.3f,%.3f,%.2f,%.1f,%.3f,%.3f,%.3f%n",
                         p.timeHours(), p.heightM()[k], p.pressurePa()[k] / 100.0, p.temperatureK()[k] - Thermo.T0,
                         p.relativeHumidity()[k] * 100.0, p.mixingRatioKgPerKg()[k] * 1000.0, p.dewpointK()[k] - Thermo.T0,
@@ -257,10 +259,6 @@ public final class ScenarioRun {
             }
         }
         return sb.toString().replace("NaN", "");
-    }
-
-    private static String csvText(String s) {
-        return s.contains(",") || s.contains("\"") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
     }
 
     /** The time-distance section behind the figure, long format. */

@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
-import org.littoral.scenarios.report.AtomicFiles;
 import org.littoral.scenarios.report.BoxPlotFigure;
 import org.littoral.scenarios.report.Figure;
 import org.littoral.scenarios.report.ScatterFigure;

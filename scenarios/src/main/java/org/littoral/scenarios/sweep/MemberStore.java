@@ -5,17 +5,13 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.TreeSet;
+import org.littoral.scenarios.output.AtomicFile;
 
 /**
  * The per-member result files of a sweep, {@code <out>/members/<id>.json}. Each is written to a temporary
@@ -29,7 +25,6 @@ public final class MemberStore {
 
     public static final String STATUS_OK = "ok";
     public static final String STATUS_FAILED = "failed";
-    private static final String TMP_SUFFIX = ".tmp";
 
     private final Path dir;
 
@@ -79,36 +74,9 @@ public final class MemberStore {
 
     /** Writes a member record atomically (temp file in the same folder, fsync, rename). */
     public void write(String id, ObjectNode record) throws IOException {
-        writeAtomically(fileOf(id), CanonicalJson.prettyBytes(record));
+        AtomicFile.write(fileOf(id), CanonicalJson.prettyBytes(record));
     }
 
-    static void writeAtomically(Path target, byte[] bytes) throws IOException {
-        Path tmp = Files.createTempFile(target.getParent(), "." + target.getFileName() + ".", TMP_SUFFIX);
-        try {
-            readableByAll(tmp);
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer b = ByteBuffer.wrap(bytes);
-                while (b.hasRemaining()) {
-                    ch.write(b);
-                }
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
-    }
-
-    /** Temp files are created owner-only; results are ordinary files that colleagues may read (rw-r--r--). */
-    private static void readableByAll(Path p) throws IOException {
-        if (p.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-            Files.setPosixFilePermissions(p, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-        }
-    }
 
     /** Whether member m has a complete result computed from exactly its current inputs. */
     public State check(Member m) {
@@ -157,7 +125,7 @@ public final class MemberStore {
         if (!Files.isDirectory(dir)) {
             return 0;
         }
-        try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, ".*" + TMP_SUFFIX)) {
+        try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, ".*" + AtomicFile.TMP_SUFFIX)) {
             for (Path p : ds) {
                 Files.deleteIfExists(p);
                 n++;

@@ -20,6 +20,7 @@ import java.util.function.Function;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.AtomicFile;
 
 /**
  * Runs the members of a sweep on a fixed pool of threads and writes each result the moment it finishes (see
@@ -224,7 +225,7 @@ public final class SweepExecutor {
             spec.ensemble().draws().forEach(x -> d.add(x.path().toString()));
         }
         try {
-            MemberStore.writeAtomically(outDir.resolve("sweep.json"), CanonicalJson.prettyBytes(m));
+            AtomicFile.write(outDir.resolve("sweep.json"), CanonicalJson.prettyBytes(m));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + outDir.resolve("sweep.json"), e);
         }

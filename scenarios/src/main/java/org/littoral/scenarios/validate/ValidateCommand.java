@@ -3,6 +3,7 @@ package org.littoral.scenarios.validate;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.littoral.scenarios.output.AtomicFile;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -30,7 +31,7 @@ public final class ValidateCommand implements Callable<Integer> {
         }
         ValidationReport r = ValidationReport.runAll(suites, System.err);
         System.out.print(r.table());
-        ValidationReport.writeAtomically(report, r.markdown());
+        AtomicFile.writeString(report, r.markdown());
         System.out.println("report written to " + report);
         return r.allPassed() ? 0 : 1;
     }

@@ -1,9 +1,5 @@
 package org.littoral.scenarios.validate;
 
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -103,14 +99,4 @@ public final class ValidationReport {
         return s.replace("|", "\\|").replace("\n", " ");
     }
 
-    /** Writes atomically (temp file and rename). */
-    public static void writeAtomically(Path target, String content) throws IOException {
-        Path parent = target.toAbsolutePath().getParent();
-        if (parent != null) {
-            Files.createDirectories(parent);
-        }
-        Path tmp = Files.createTempFile(parent, target.getFileName().toString(), ".tmp");
-        Files.writeString(tmp, content);
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-    }
 }

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.Iterator;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.littoral.scenarios.output.Csv;
 import org.junit.jupiter.api.io.TempDir;
 
 class TableWriterTest {
@@ -18,23 +19,24 @@ class TableWriterTest {
     // quoted field is escaped by preceding it with another double quote.
     @Test
     void innerDoubleQuoteIsDoubledAndTheFieldQuoted() {
-        assertEquals("\"b\"\"bb\"", TableWriter.csvField("b\"bb"));
+        assertEquals("\"b\"\"bb\"", Csv.field("b\"bb"));
     }
 
     // RFC 4180 section 2, rule 6: fields containing line breaks (CRLF), double quotes and commas
     // should be enclosed in double quotes: "aaa","b CRLF bb","ccc".
     @Test
     void fieldsWithLineBreaksOrCommasAreQuoted() {
-        assertEquals("\"b\r\nbb\"", TableWriter.csvField("b\r\nbb"));
-        assertEquals("\"a,b\"", TableWriter.csvField("a,b"));
-        assertEquals("plain", TableWriter.csvField("plain"));
+        assertEquals("\"b\r\nbb\"", Csv.field("b\r\nbb"));
+        assertEquals("\"a,b\"", Csv.field("a,b"));
+        assertEquals("plain", Csv.field("plain"));
     }
 
-    // RFC 4180 section 2, rules 1-3: records end with CRLF and an optional header line of the same form.
+    // RFC 4180 section 2, rules 1-3: one record per line and an optional header line of the same form; the project
+    // ends lines with LF (common practice on Unix; every CSV reader accepts it) rather than the RFC's CRLF.
     @Test
-    void csvHasAHeaderAndCrlfLineEndsInColumnOrder() {
+    void csvHasAHeaderAndLfLineEndsInColumnOrder() {
         Table t = Table.of("zeta_K", "alpha_m").row(1.5, 2.0).row(Double.NaN, -0.25);
-        assertEquals("zeta_K,alpha_m\r\n1.5,2\r\n,-0.25\r\n", TableWriter.toCsv(t));
+        assertEquals("zeta_K,alpha_m\n1.5,2\n,-0.25\n", TableWriter.toCsv(t));
     }
 
     record Row(String site, double distanceKm, double arrivalLocalH) {
@@ -45,8 +47,8 @@ class TableWriterTest {
         Path csv = dir.resolve("rows.csv");
         TableWriter.writeCsv(List.of(new Row("A", 5, 12.5), new Row("B, inland", 12, Double.NaN)), Row.class, csv);
         String s = Files.readString(csv);
-        assertTrue(s.startsWith("site,distanceKm,arrivalLocalH\r\n"), s);
-        assertTrue(s.contains("\"B, inland\",12,\r\n"), s);
+        assertTrue(s.startsWith("site,distanceKm,arrivalLocalH\n"), s);
+        assertTrue(s.contains("\"B, inland\",12,\n"), s);
     }
 
     @Test

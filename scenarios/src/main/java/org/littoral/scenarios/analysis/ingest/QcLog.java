@@ -2,8 +2,6 @@ package org.littoral.scenarios.analysis.ingest;
 
 import java.io.IOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -11,6 +9,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.output.Csv;
 
 /**
  * Everything quality control removed, changed or flagged, and why: nothing is dropped silently.
@@ -84,23 +84,12 @@ public final class QcLog {
         }
     }
 
-    /** Writes the log atomically (temporary file, then move). */
+    /** Writes the log atomically. */
     public void writeCsv(Path file) throws IOException {
-        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-        try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-            writeCsv(w);
-        }
-        Files.move(tmp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+        AtomicFile.writeText(file, this::writeCsv);
     }
 
     private static String q(String s) {
-        if (s == null) {
-            return "";
-        }
-        if (s.indexOf(',') >= 0 || s.indexOf('"') >= 0) {
-            return '"' + s.replace("\"", "\"\"") + '"';
-        }
-        return s;
+        return Csv.field(s);
     }
 }
