@@ -22,7 +22,7 @@ package org.littoral.model.mixedlayer;
  *                        marine-layer depth over water)
  */
 public record SlabMixedLayer(double entrainmentRatio, double lapseRateKPerM, double collapsedDepthM) {
-    /** Usual entrainment ratio (Tennekes 1973; from memory, REFERENCES.md section 5). */
+    /** Usual entrainment ratio (Tennekes 1973; from memory, docs/references.md section 5). */
     public static final double USUAL_ENTRAINMENT_RATIO = 0.2;
 
     public SlabMixedLayer {

@@ -7,7 +7,7 @@ import org.littoral.model.thermo.Thermo;
  *
  * <p>Neutral drag from the logarithmic wind profile, C_DN = (kappa / ln(z_a / z0))^2. Over water the
  * neutral heat and moisture coefficients at 10 m are those of Large &amp; Pond (1982), J. Phys. Oceanogr.
- * 12, 464-482: C_HN = 1.13e-3, C_EN = 1.15e-3 (from memory, REFERENCES.md section 10), carried to
+ * 12, 464-482: C_HN = 1.13e-3, C_EN = 1.15e-3 (from memory, docs/references.md section 10), carried to
  * other heights through a scalar roughness length chosen to reproduce them at 10 m.
  *
  * <p>Stability: Louis (1979), Boundary-Layer Meteorol. 17, 187-202, functions of the bulk Richardson

@@ -8,7 +8,7 @@ import org.littoral.model.thermo.Thermo;
  * minimum (and equal to it above h).
  *
  * <p>Velocity scale: convective (upward heat flux) w_s = (u*^3 + 0.6 w*^3)^(1/3), the mixed-layer form of
- * Holtslag &amp; Boville (1993), J. Climate 6, 1825-1842 (from memory, REFERENCES.md section 5), with the
+ * Holtslag &amp; Boville (1993), J. Climate 6, 1825-1842 (from memory, docs/references.md section 5), with the
  * convective velocity w* = (g/theta w'theta'_s h)^(1/3) (Deardorff 1970). Stable or neutral (downward or
  * zero heat flux, including a shallow marine layer over cool water): w_s = u* / phi_m(z/L) with the
  * Businger-Dyer phi_m = 1 + 5 z/L (Dyer 1974, from memory) and the Obukhov length

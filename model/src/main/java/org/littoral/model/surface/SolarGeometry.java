@@ -6,7 +6,7 @@ import org.littoral.model.coast.Coast;
  * Position of the sun from latitude, day of year and local solar time.
  *
  * <p>Declination: Cooper (1969), Solar Energy 12, 333-346: delta = 23.45 deg sin(360 (284 + n) / 365)
- * (from memory, as in REFERENCES.md section 10). Elevation: the spherical-astronomy identity
+ * (from memory, as in docs/references.md section 10). Elevation: the spherical-astronomy identity
  * sin(alpha) = sin(phi) sin(delta) + cos(phi) cos(delta) cos(omega), hour angle omega = 15 deg per hour
  * from solar noon. Sunrise and sunset: cos(omega_s) = -tan(phi) tan(delta) (geometric sun centre, no
  * refraction).

@@ -10,8 +10,8 @@ package org.littoral.model.thermo;
  * temperature as in Wallace &amp; Hobbs (2006), Atmospheric Science, ch. 3 (common practice).
  *
  * <p>Equation numbers of the LCL forms checked against a secondary source (NCAR Command Language
- * documentation of its Bolton-based functions): the T, Td form is eq. 15; REFERENCES.md's "eq. 22"
- * (marked from memory) is the T, RH form.
+ * documentation of its Bolton-based functions): the T, Td form is eq. 15; the "eq. 22" often quoted for it
+ * is the T, RH form (docs/references.md section 6).
  */
 public final class Thermo {
     /** Gas constant of dry air, J/(kg K) (Bolton 1980 uses 287.04). */

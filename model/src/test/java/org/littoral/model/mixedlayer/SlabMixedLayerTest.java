@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import org.junit.jupiter.api.Test;
 
 class SlabMixedLayerTest {
-    // REFERENCES.md section 5 (C): H = 200 W/m2 for 6 h, rho c_p = 1206 J/m3/K, gamma = 5 K/km.
+    // docs/references.md section 5 (C): H = 200 W/m2 for 6 h, rho c_p = 1206 J/m3/K, gamma = 5 K/km.
     private static final double RHO_CP = 1206.0;
     private static final double GAMMA = 0.005;
     private static final double FLUX = 200.0 / RHO_CP;

@@ -60,7 +60,7 @@ class NonlinearModelTest {
         assertTrue(s.complete());
     }
 
-    /** Inertial period 2 pi / f (REFERENCES 7: 23.93 h at 30 deg, 16.92 h at 45 deg, recomputed here). */
+    /** Inertial period 2 pi / f (docs/references.md section 7: 23.93 h at 30 deg, 16.92 h at 45 deg, recomputed here). */
     @ParameterizedTest
     @ValueSource(doubles = {30.0, 45.0, -45.0})
     void uniformWindPerturbationOscillatesWithTheInertialPeriod(double lat) {

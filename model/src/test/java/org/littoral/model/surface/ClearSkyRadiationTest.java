@@ -13,7 +13,7 @@ class ClearSkyRadiationTest {
 
     @Test
     void kastenCzeplakClearSkyAt30DegreesIs425() {
-        // Kasten & Czeplak (1980); REFERENCES.md section 10 (C): 910 sin 30 - 30.
+        // Kasten & Czeplak (1980); docs/references.md section 10 (C): 910 sin 30 - 30.
         assertEquals(425.0, g(30), 0.05);
     }
 

@@ -10,7 +10,7 @@ class SolarGeometryTest {
 
     @Test
     void noonElevationAtLatitude45WithDeclination2344Is6844Degrees() {
-        // REFERENCES.md section 10 (C): at noon alpha = 90 - |lat - decl| = 90 - 45 + 23.44.
+        // docs/references.md section 10 (C): at noon alpha = 90 - |lat - decl| = 90 - 45 + 23.44.
         double alpha = SolarGeometry.elevationDeg(45.0, Math.toRadians(23.44), 12.0);
         assertEquals(68.44, alpha, 1e-9);
     }

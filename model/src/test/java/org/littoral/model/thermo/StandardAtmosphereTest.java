@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import org.junit.jupiter.api.Test;
 
 class StandardAtmosphereTest {
-    // US Standard Atmosphere 1976, table values as in REFERENCES.md section 6 (C, matches the tables).
+    // US Standard Atmosphere 1976, table values as in docs/references.md section 6 (C, matches the tables).
 
     @Test
     void seaLevelIs288Point15Kelvin101325PascalAnd1Point225KilogramsPerCubicMetre() {

@@ -9,7 +9,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 class ThermoTest {
-    // Worked example of REFERENCES.md section 6 (C): p = 850 hPa, T = 20 C, Td = 18 C.
+    // Worked example of docs/references.md section 6 (C): p = 850 hPa, T = 20 C, Td = 18 C.
     private static final double P = 85000.0;
     private static final double T = 293.15;
     private static final double TD = 291.15;
@@ -17,7 +17,7 @@ class ThermoTest {
     @ParameterizedTest(name = "e_s({0} C) within Bolton''s 0.1 % of IAPWS {1} hPa")
     @CsvSource({"0, 6.1121", "10, 12.2818", "20, 23.3921", "30, 42.4669"})
     void boltonSaturationVapourPressureIsWithinItsStatedAccuracyOfIapws(double celsius, double iapwsHPa) {
-        // IAPWS-IF97 saturation pressure (REFERENCES.md section 6, C); Bolton (1980): 0.1 % from -30 to 35 C.
+        // IAPWS-IF97 saturation pressure (docs/references.md section 6, C); Bolton (1980): 0.1 % from -30 to 35 C.
         double es = Thermo.saturationVapourPressurePa(celsius + Thermo.T0) / 100.0;
         assertEquals(iapwsHPa, es, 0.001 * iapwsHPa);
     }
@@ -25,7 +25,7 @@ class ThermoTest {
     @ParameterizedTest(name = "Bolton eq. 10 at {0} C is {1} hPa")
     @CsvSource({"0, 6.1120", "10, 12.2717", "20, 23.3695", "30, 42.4558"})
     void boltonSaturationVapourPressureReproducesItsOwnFormula(double celsius, double boltonHPa) {
-        // REFERENCES.md section 6 (C): 6.112 exp(17.67 T / (T + 243.5)).
+        // docs/references.md section 6 (C): 6.112 exp(17.67 T / (T + 243.5)).
         assertEquals(boltonHPa, Thermo.saturationVapourPressurePa(celsius + Thermo.T0) / 100.0, 5e-4);
     }
 
@@ -72,7 +72,7 @@ class ThermoTest {
 
     @Test
     void saturatedMixingRatioAt20CAnd1000HectoPascalsIs14Point90GramsPerKilogram() {
-        // REFERENCES.md section 6 (C) computes 14.90 g/kg with the IAPWS e_s = 23.3921 hPa; Bolton's e_s is
+        // docs/references.md section 6 (C) computes 14.90 g/kg with the IAPWS e_s = 23.3921 hPa; Bolton's e_s is
         // 0.1 % lower, which lowers r by about 0.015 g/kg.
         double iapwsR = 0.622 * 2339.21 / (100000.0 - 2339.21);
         assertEquals(14.90, iapwsR * 1000.0, 5e-3);
@@ -81,7 +81,7 @@ class ThermoTest {
 
     @Test
     void virtualPotentialTemperatureExampleIs301Point805Kelvin() {
-        // REFERENCES.md section 6 (C): theta = 300 K, r = 0.010 kg/kg.
+        // docs/references.md section 6 (C): theta = 300 K, r = 0.010 kg/kg.
         assertEquals(301.805, Thermo.virtualPotentialTemperatureK(300.0, 0.010), 5e-4);
     }
 

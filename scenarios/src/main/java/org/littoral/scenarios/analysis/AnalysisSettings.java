@@ -33,7 +33,7 @@ public final class AnalysisSettings {
     public BreezeTyping breezeTyping = BreezeTyping.defaults();
     /**
      * Layer for the ambient wind, m above ground. Default 300-600 m: above the shallow morning
-     * breeze inflow yet within reach of a drone (profiles to about 600 m, REFERENCES.md section 9).
+     * breeze inflow yet within reach of a drone (profiles to about 600 m, docs/references.md section 9).
      */
     public Layer ambientLayer = new Layer(300, 600);
     /** Morning window (local clock hours) for the ambient wind; only profiles before the first passage count. */

@@ -10,7 +10,7 @@ package org.littoral.scenarios.validate;
  * @param tolerance tolerance as text
  * @param result what littoral gives, as text
  * @param passed whether the result is within tolerance
- * @param fromMemory true when the expected value is marked "from memory" (unverified) in REFERENCES.md
+ * @param fromMemory true when the expected value is marked "from memory" (unverified) in docs/references.md
  * @param note optional remark (how it was measured, why a value differs)
  */
 public record ValidationCase(String id, String source, String quantity, String expected, String tolerance,

@@ -38,7 +38,7 @@ class TimingCheckTest {
     @Test
     void benjaminsFroudeNumberIs1point0247AtAQuarterDepth() {
         assertEquals(benjaminRatio(0.25), DensityCurrent.benjaminFroude(0.25), 1e-12);
-        assertEquals(1.0247, benjaminRatio(0.25), 5e-5); // REFERENCES.md section 4 (C)
+        assertEquals(1.0247, benjaminRatio(0.25), 5e-5); // docs/references.md section 4 (C)
         // Dimensional: g' = 0.08 m/s2, h = 250 m, H = 1000 m.
         assertEquals(benjaminRatio(0.25) * Math.sqrt(0.08 * 250.0), DensityCurrent.benjaminSpeedMPerS(0.08, 250.0, 1000.0), 1e-12);
     }

@@ -66,7 +66,7 @@ public final class AnalysisChainSuite implements ValidationSuite {
 
     static void peltWorkedExample(List<ValidationCase> out) {
         Segmentation s = Pelt.segment(new NormalMeanCost(new double[][] {EXAMPLE}), Penalty.bic(), 1);
-        String src = KILLICK + "; REFERENCES.md section 8 worked example (C)";
+        String src = KILLICK + "; docs/references.md section 8 worked example (C)";
         out.add(new ValidationCase("analysis.pelt-example-change", src, "change locations (after sample k)", "[5]", "exact",
                 Arrays.toString(s.changeEnds()), Arrays.equals(s.changeEnds(), new int[] {5}), false,
                 "y = [1.0 .. 2.9], sigma = 1, penalty 2 ln 10"));

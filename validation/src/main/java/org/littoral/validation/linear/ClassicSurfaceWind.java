@@ -21,7 +21,7 @@ import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactor
  *
  * The alpha -&gt; 0+ limit of the principal root is Rotunno's upward-radiating choice for omega &gt; f. At x = 0
  * with U = 0 the integral is elementary: u(0, 0) = Qc G(c) / (N sqrt(den)), G(c) = exp(c) E1(c),
- * c = x0 sqrt(den) / (N H) = x0 / L (L the complex horizontal scale of REFERENCES.md 1).
+ * c = x0 sqrt(den) / (N H) = x0 / L (L the complex horizontal scale of docs/references.md section 1).
  *
  * <p>The integrals are done by 20-point Gauss-Legendre on geometric panels in k (fine near k = 0 where
  * the integrand varies on the scale 1/L, capped in width where exp(i k x) oscillates or where the

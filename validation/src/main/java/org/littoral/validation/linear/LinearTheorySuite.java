@@ -19,7 +19,7 @@ import org.littoral.scenarios.validate.ValidationSuite;
  * The linear spectral model ({@link LinearBreezeModel}) against closed-form linear land/sea-breeze
  * theory: Rotunno (1983), J. Atmos. Sci. 40, 1999-2009 (horizontal scale, ray slope, phase of the
  * onshore flow), its frictional extension (Dalu &amp; Pielke 1989, J. Atmos. Sci. 46, 1815-1825; the
- * complex scale of REFERENCES.md 1) and the Doppler-shifted response to a uniform cross-shore wind
+ * complex scale of docs/references.md section 1) and the Doppler-shifted response to a uniform cross-shore wind
  * (Jiang 2012, J. Atmos. Sci. 69). Every run uses the classic heating
  * Q = Q0 (pi/2 + arctan(x/x0)) exp(-z/H) sin(omega (t - 6 h)), N = 0.01 1/s, H = 1 km, hydrostatic,
  * one diurnal harmonic, on a 1 km periodic grid 16384 km long (the second shoreline that periodicity
@@ -87,9 +87,9 @@ public final class LinearTheorySuite implements ValidationSuite {
             ClassicSurfaceWind th = new ClassicSurfaceWind(N, H, f, OMEGA, TINY, 0.0, x0);
             double thWidth = theoryHalfMaximumWidth(th, l) / l;
             String lbl = (int) lat + "N";
-            out.add(ValidationCase.relative("linear.scale-width-" + lbl, ROTUNNO + "; L = N H / sqrt(f^2 - omega^2) (REFERENCES.md 1, C)",
+            out.add(ValidationCase.relative("linear.scale-width-" + lbl, ROTUNNO + "; L = N H / sqrt(f^2 - omega^2) (docs/references.md section 1, C)",
                     "full width at half maximum of the surface onshore wind at its peak / L, " + lbl, thWidth, 0.01, widths[i], false,
-                    String.format(Locale.ROOT, "L = %.1f km (REFERENCES: 35 N 241.9, 45 N 136.8, 60 N 96.8 km), x0 = %.2f L; "
+                    String.format(Locale.ROOT, "L = %.1f km (docs/references.md: 35 N 241.9, 45 N 136.8, 60 N 96.8 km), x0 = %.2f L; "
                             + "expected from the closed-form Fourier integral on the unbounded axis; tolerance 1 %%: grid (dx = x0/10 at 60 N), "
                             + "Riemann-sum (dk = 2 pi / 16384 km) and periodic-image errors are estimated below 0.5 %%", l / 1000, WIDTH_RATIO)));
             out.add(ValidationCase.relative("linear.scale-peak-" + lbl, ROTUNNO + " (hydrostatic, inviscid); closed form at the coast",
@@ -143,12 +143,12 @@ public final class LinearTheorySuite implements ValidationSuite {
         double slopeSea = -1.0 / fitSlope(z, xSea);
         String note = String.format(Locale.ROOT, "20 N, x0 = 10 km, friction 1e-8 1/s; x of the maximum diurnal amplitude |u| at "
                         + "13 heights 3-9 km (above 3 H, where the forced part exp(-z/H) has faded), least-squares dx/dz; land side "
-                        + "%.4e, sea side %.4e; REFERENCES: 5.29e-3; tolerance 1 %%: the beam is ~%.0f km wide, its centre is located "
+                        + "%.4e, sea side %.4e; docs/references.md: 5.29e-3; tolerance 1 %%: the beam is ~%.0f km wide, its centre is located "
                         + "to a fraction of the 1 km grid (parabolic refinement) over a 1134 km run, and a constant offset of the "
                         + "beam centre (sources spread over depth H) cancels in the fitted slope", slopeLand, slopeSea, H / expected / 1000);
-        out.add(ValidationCase.relative("linear.ray-slope-20N-land", ROTUNNO + " (energy on rays, f < omega; REFERENCES.md 1, C)",
+        out.add(ValidationCase.relative("linear.ray-slope-20N-land", ROTUNNO + " (energy on rays, f < omega; docs/references.md section 1, C)",
                 "ray slope dz/dx inland of the coast at 20 N", expected, 0.01, slopeLand, false, note));
-        out.add(ValidationCase.relative("linear.ray-slope-20N-sea", ROTUNNO + " (energy on rays, f < omega; REFERENCES.md 1, C)",
+        out.add(ValidationCase.relative("linear.ray-slope-20N-sea", ROTUNNO + " (energy on rays, f < omega; docs/references.md section 1, C)",
                 "ray slope -dz/dx seaward of the coast at 20 N", expected, 0.01, slopeSea, false, note));
     }
 
@@ -166,8 +166,8 @@ public final class LinearTheorySuite implements ValidationSuite {
             boolean elliptic = f > OMEGA;
             // f > omega: exactly noon (in phase with the heating); f < omega: the closed form at the coast
             double tTheory = elliptic ? 12.0 : peakTimeSec(ta[0], ta[1]) / 3600.0;
-            String src = elliptic ? ROTUNNO + " (f > omega: in phase with the heating, onshore flow peaks at noon; REFERENCES.md 1, V)"
-                    : ROTUNNO + " (f < omega: lags the heating; sunset at f = 0 for a sharp coast, REFERENCES.md 1, V)";
+            String src = elliptic ? ROTUNNO + " (f > omega: in phase with the heating, onshore flow peaks at noon; docs/references.md section 1, V)"
+                    : ROTUNNO + " (f < omega: lags the heating; sunset at f = 0 for a sharp coast, docs/references.md section 1, V)";
             String note = elliptic
                     ? "heating sin(omega (t - 6 h)) peaks at 12 h; the inviscid elliptic response is real (in phase) for every k, "
                     + "so theory gives exactly 12 h; friction 1e-8 1/s shifts it by ~1e-4 h; tolerance 0.05 h"
@@ -205,7 +205,7 @@ public final class LinearTheorySuite implements ValidationSuite {
         double[] ta = forcedAmplitude(th, 0.0);
         double quad = Math.hypot(ta[0], ta[1]);
         out.add(ValidationCase.relative("linear.critical-latitude-amplitude",
-                ROTUNNO + "; friction: Dalu & Pielke (1989), J. Atmos. Sci. 46, 1815-1825 (complex scale, REFERENCES.md 1, C; "
+                ROTUNNO + "; friction: Dalu & Pielke (1989), J. Atmos. Sci. 46, 1815-1825 (complex scale, docs/references.md section 1, C; "
                         + "Dalu & Pielke from memory)",
                 String.format(Locale.ROOT, "diurnal amplitude of surface u at the coast at %.2f deg (f = omega), alpha = 1e-5 1/s, m/s", latC),
                 closed, 0.01, ampModel, true,
@@ -241,7 +241,7 @@ public final class LinearTheorySuite implements ValidationSuite {
             double thShift = thPos[i] - thPos[0];
             String lbl = winds[i] > 0 ? "onshore" : "offshore";
             out.add(ValidationCase.absolute("linear.doppler-shift-" + lbl + "-5ms",
-                    ROTUNNO + " with d/dt -> d/dt + U d/dx (Jiang 2012, J. Atmos. Sci. 69; REFERENCES.md 1, abstract V)",
+                    ROTUNNO + " with d/dt -> d/dt + U d/dx (Jiang 2012, J. Atmos. Sci. 69; docs/references.md section 1, abstract V)",
                     String.format(Locale.ROOT, "downwind shift of the maximum diurnal amplitude of surface u, U = %+.0f m/s, 45 N, km", winds[i]),
                     thShift / 1000, 1.0, shift / 1000, false,
                     String.format(Locale.ROOT, "alpha = 1e-5 1/s, x0 = 10 km; theory from the Doppler-shifted closed-form integral "

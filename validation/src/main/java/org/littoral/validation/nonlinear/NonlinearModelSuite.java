@@ -65,7 +65,7 @@ public final class NonlinearModelSuite implements ValidationSuite {
                 .initialUPerturbation((x, z) -> 1.0).build();
         double period = InertialPeriod.measureHours(NonlinearModel.run(c), 0, 0);
         out.add(ValidationCase.relative("nonlinear.inertial-period-" + (int) lat + "deg",
-                "2 pi / f, f = 2 Omega sin(lat) (REFERENCES 7: 23.93 h at 30 deg, 16.92 h at 45 deg)",
+                "2 pi / f, f = 2 Omega sin(lat) (docs/references.md section 7: 23.93 h at 30 deg, 16.92 h at 45 deg)",
                 "inertial oscillation period, h", expectedH, 0.01, period, false,
                 "uniform 1 m/s cross-shore perturbation, no friction; period from upward zero crossings of u"));
     }

@@ -16,8 +16,8 @@ import org.littoral.scenarios.validate.ValidationCase;
 import org.littoral.scenarios.validate.ValidationSuite;
 
 /**
- * Surface and mixed-layer slab physics against published formulas and values (REFERENCES.md sections 5
- * and 10). Formulas that REFERENCES.md marks as recalled are flagged "from memory" even where the check
+ * Surface and mixed-layer slab physics against published formulas and values (docs/references.md sections 5
+ * and 10). Formulas that docs/references.md marks as recalled are flagged "from memory" even where the check
  * value is computed from them.
  */
 public final class SurfacePhysicsSuite implements ValidationSuite {
@@ -46,7 +46,7 @@ public final class SurfacePhysicsSuite implements ValidationSuite {
 
     private static void solar(List<ValidationCase> out) {
         out.add(ValidationCase.absolute("surface.noon-elevation-45N", "sin(alpha) = sin(lat) sin(decl) + cos(lat) cos(decl) cos(h)"
-                        + " (spherical astronomy); REFERENCES.md 10 (C)",
+                        + " (spherical astronomy); docs/references.md section 10 (C)",
                 "solar elevation at noon, lat 45, decl 23.44 deg, deg", 68.44, 0.01,
                 SolarGeometry.elevationDeg(45.0, Math.toRadians(23.44), 12.0), false, "90 - 45 + 23.44"));
         out.add(ValidationCase.absolute("surface.cooper-declination-solstice", "Cooper (1969), Solar Energy 12, 333-346",
@@ -63,7 +63,7 @@ public final class SurfacePhysicsSuite implements ValidationSuite {
         double[] elev = {30, 45, 60};
         double[] expected = {425.0, 613.5, 758.1};
         for (int i = 0; i < elev.length; i++) {
-            out.add(ValidationCase.absolute("surface.kasten-czeplak-" + (int) elev[i] + "deg", KC + "; REFERENCES.md 10 (C)",
+            out.add(ValidationCase.absolute("surface.kasten-czeplak-" + (int) elev[i] + "deg", KC + "; docs/references.md section 10 (C)",
                     "clear-sky global irradiance at " + (int) elev[i] + " deg elevation, W/m2", expected[i], 0.05,
                     ClearSkyRadiation.clearSkyGlobalWm2(Math.sin(Math.toRadians(elev[i]))), true,
                     "910 sin(alpha) - 30; the fit itself is from memory"));
@@ -80,7 +80,7 @@ public final class SurfacePhysicsSuite implements ValidationSuite {
     }
 
     private static void mixedLayer(List<ValidationCase> out) {
-        // REFERENCES.md 5 (C): H = 200 W/m2 for 6 h, rho c_p = 1206 J/m3/K, gamma = 5 K/km, h0 = 0.
+        // docs/references.md section 5 (C): H = 200 W/m2 for 6 h, rho c_p = 1206 J/m3/K, gamma = 5 K/km, h0 = 0.
         double rhoCp = 1206.0;
         double gamma = 0.005;
         double flux = 200.0 / rhoCp;
@@ -89,7 +89,7 @@ public final class SurfacePhysicsSuite implements ValidationSuite {
             String tag = a == 0 ? "encroachment" : "A0.2";
             double published = a == 0 ? 1197.0 : 1416.0;
             double closed = ZeroOrderJump.depthM(0.0, a, gamma, flux * duration);
-            out.add(ValidationCase.relative("mixedlayer.closed-form-" + tag, TENNEKES + "; REFERENCES.md 5 (C)",
+            out.add(ValidationCase.relative("mixedlayer.closed-form-" + tag, TENNEKES + "; docs/references.md section 5 (C)",
                     "h after 6 h of 200 W/m2, m", published, 0.01, closed, a > 0,
                     a > 0 ? "A = 0.2 is from memory" : "h = sqrt(2 Integral(H dt) / (rho c_p gamma))"));
             SlabMixedLayer ml = new SlabMixedLayer(a, gamma, 0.0);

@@ -38,7 +38,7 @@ public final class ThermodynamicsSuite implements ValidationSuite {
     }
 
     private static void workedExample(List<ValidationCase> out) {
-        // Worked example p = 850 hPa, T = 20 C, Td = 18 C; expected values recomputed from Bolton eq. 10 (REFERENCES 6, C).
+        // Worked example p = 850 hPa, T = 20 C, Td = 18 C; expected values recomputed from Bolton eq. 10 (docs/references.md section 6, C).
         double p = 85000.0;
         double t = 293.15;
         double td = 291.15;
@@ -50,7 +50,7 @@ public final class ThermodynamicsSuite implements ValidationSuite {
                 "mixing ratio, g/kg", 15.469, 0.005, r * 1000.0, false, "same worked example"));
         out.add(ValidationCase.absolute("thermo.bolton-TL-example", BOLTON + ", eq. 15 (LCL temperature from T and Td)",
                 "T_L, K", 290.678, 0.01, Thermo.lclTemperatureK(t, td), false,
-                "same worked example; REFERENCES.md gives eq. 22 from memory, but the T, Td form is eq. 15 and eq. 22 is "
+                "same worked example; the T, Td form is often quoted as eq. 22 from memory, but it is eq. 15 and eq. 22 is "
                         + "the T, RH form (NCAR Command Language documentation of its Bolton functions)"));
         out.add(ValidationCase.absolute("thermo.bolton-theta-e-eq39", BOLTON + ", eq. 39",
                 "theta-e, K", 353.92, 0.05, Thermo.equivalentPotentialTemperatureK(t, p, r), false,
@@ -95,7 +95,7 @@ public final class ThermodynamicsSuite implements ValidationSuite {
     }
 
     private static void mixingRatioAndThetaV(List<ValidationCase> out) {
-        // REFERENCES.md 6 (C): 14.90 g/kg uses the IAPWS e_s = 23.3921 hPa; Bolton's e_s is 0.1 % lower, which
+        // docs/references.md section 6 (C): 14.90 g/kg uses the IAPWS e_s = 23.3921 hPa; Bolton's e_s is 0.1 % lower, which
         // lowers r by about 0.016 g/kg; tolerance 0.02 g/kg.
         out.add(ValidationCase.absolute("thermo.saturated-r-20C-1000hPa", "r = eps e_s / (p - e_s), eps = 0.622; e_s Bolton eq. 10",
                 "saturation mixing ratio at 20 C, 1000 hPa, g/kg", 14.90, 0.02,

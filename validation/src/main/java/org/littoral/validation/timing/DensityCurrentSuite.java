@@ -21,7 +21,7 @@ public final class DensityCurrentSuite implements ValidationSuite {
         return 80;
     }
 
-    /** Benjamin's Froude number U / sqrt(g' h) from the closed form, a = h/H (REFERENCES.md section 4, C). */
+    /** Benjamin's Froude number U / sqrt(g' h) from the closed form, a = h/H (docs/references.md section 4, C). */
     private static double ratio(double a) {
         return Math.sqrt((2 - a) * (1 - a) / (1 + a));
     }
@@ -44,7 +44,7 @@ public final class DensityCurrentSuite implements ValidationSuite {
         out.add(ValidationCase.relative("timing.benjamin-lock-exchange", BENJAMIN + " (energy-conserving lock exchange; M)",
                 "half-depth current speed vs 0.5 sqrt(g' H), m/s", 0.5 * Math.sqrt(gp * bigH), 1e-9,
                 DensityCurrent.benjaminSpeedMPerS(gp, 500.0, bigH), true,
-                "REFERENCES.md section 4: front speed ~0.5 sqrt(g' H) in the energy-conserving limit (from memory)"));
+                "docs/references.md section 4: front speed ~0.5 sqrt(g' H) in the energy-conserving limit (from memory)"));
         double gpSea = DensityCurrent.reducedGravity(2.0, 300.0);
         double calm = 0.87 * Math.sqrt(gpSea * 500.0);
         out.add(ValidationCase.absolute("timing.simpson-britter-opposing-wind", SB + " (from memory)",

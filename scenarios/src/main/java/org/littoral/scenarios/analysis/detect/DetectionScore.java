@@ -5,7 +5,7 @@ import java.util.Arrays;
 /**
  * Skill of a detector against known passage times (invented campaigns, model front arrivals): a
  * true passage is found when a detection lies within one local flight interval of it (the spacing
- * of the two flights around the true time, REFERENCES.md section 9: timing from profiles is good to
+ * of the two flights around the true time, docs/references.md section 9: timing from profiles is good to
  * about one flight interval). Each detection matches at most one truth, closest first.
  */
 public record DetectionScore(int truths, int detections, int hits, int falseDetections) {

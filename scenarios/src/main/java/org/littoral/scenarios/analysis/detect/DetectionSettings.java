@@ -47,7 +47,7 @@ public final class DetectionSettings {
 
     /**
      * Report only passages the wind-shift detector finds (default true: the wind shift is the most
-     * reliable passage signal, REFERENCES.md section 9); other detectors then add confidence and
+     * reliable passage signal, docs/references.md section 9); other detectors then add confidence and
      * timing spread, and their unmatched changes are listed as unconfirmed.
      */
     public boolean requirePrimary = true;

@@ -4,7 +4,7 @@ package org.littoral.scenarios.analysis.detect;
  * Normal mean-change segment cost for a p-dimensional series with unit noise variance in every
  * dimension (scale the data first): C(y_a..y_{b-1}) = Sum_d Sum_i (y_di - mean_d)^2.
  * This is twice the negative log-likelihood up to a constant (Killick, Fearnhead &amp; Eckley 2012,
- * JASA 107, 1590-1598, section 1; REFERENCES.md section 8). Computed in O(1) per segment from
+ * JASA 107, 1590-1598, section 1; docs/references.md section 8). Computed in O(1) per segment from
  * prefix sums; splitting a segment never increases it, so PELT may prune with K = 0.
  *
  * <p>Allocates its prefix sums (2 p (n + 1) doubles) once in the constructor.

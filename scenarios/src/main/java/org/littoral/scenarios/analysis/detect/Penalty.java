@@ -9,7 +9,7 @@ import java.util.Locale;
  * <ul>
  *   <li>{@link Kind#BIC}: Schwarz (1978) information criterion, (p + 1) ln n per change for a change
  *       in p means (p new mean parameters plus the change location); for p = 1 this is the
- *       2 ln n of REFERENCES.md section 8 and of Killick et al. (2012) (their "SIC").</li>
+ *       2 ln n of docs/references.md section 8 and of Killick et al. (2012) (their "SIC").</li>
  *   <li>{@link Kind#MBIC}: modified BIC of Zhang &amp; Siegmund (2007), Biometrics 63, 22-32:
  *       3 ln n per change plus Sum_j ln(n_j / n) over the segments, for p = 1. For p &gt; 1 we use
  *       (p + 2) ln n per change with the same segment-length term (our extension; it reduces to

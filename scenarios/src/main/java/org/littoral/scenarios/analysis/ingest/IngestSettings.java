@@ -6,7 +6,7 @@ import org.littoral.scenarios.input.UserInputException;
  * Settings of ingest and quality control. Public fields with documented defaults (see docs/analysis.md).
  */
 public final class IngestSettings {
-    /** Height step of the bins, m. Default 5 m: the usual drone-profile bin (REFERENCES.md section 9). */
+    /** Height step of the bins, m. Default 5 m: the usual drone-profile bin (docs/references.md section 9). */
     public double binStepM = 5.0;
     /** RH above 100 % up to this value is capped at 100 % and logged (sensor overshoot); above it the value is removed. */
     public double rhRemoveAbovePercent = 110.0;

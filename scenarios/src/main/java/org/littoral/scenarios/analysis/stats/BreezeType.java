@@ -3,7 +3,7 @@ package org.littoral.scenarios.analysis.stats;
 /**
  * Breeze type of a day from the ambient wind relative to the coast (Miller et al. 2003, Rev.
  * Geophys. 41(3), 1011; Steele et al. 2013, ACP 13, 443-461; Steele et al. 2015, QJRMS 141,
- * 1821-1835; REFERENCES.md section 3).
+ * 1821-1835; docs/references.md section 3).
  */
 public enum BreezeType {
     /** Offshore or weak ambient flow. */

@@ -6,7 +6,7 @@ import org.littoral.scenarios.input.UserInputException;
 /**
  * Classifies the ambient wind into a {@link BreezeType}. The wind is resolved into cross-shore
  * (onshore positive) and alongshore (+y, 90 degrees left of inland) components with {@link Coast}.
- * Sectors are quadrants relative to the coastline by default (REFERENCES.md section 3 marks the
+ * Sectors are quadrants relative to the coastline by default (docs/references.md section 3 marks the
  * boundaries as a choice): onshore within +-45 degrees of the inland direction is SYNOPTIC, offshore
  * within +-45 degrees of the seaward direction is PURE, the rest is shore-parallel. Looking downwind
  * along +y the land (+x) is on the right, so in the Northern Hemisphere +y flow is BACKDOOR and -y

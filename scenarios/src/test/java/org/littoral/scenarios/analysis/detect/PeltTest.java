@@ -9,7 +9,7 @@ import org.junit.jupiter.api.RepeatedTest;
 import org.junit.jupiter.api.Test;
 
 class PeltTest {
-    // REFERENCES.md section 8 worked example (C): Killick et al. (2012) normal mean cost, sigma = 1.
+    // docs/references.md section 8 worked example (C): Killick et al. (2012) normal mean cost, sigma = 1.
     static final double[] EXAMPLE = {1.0, 1.2, 0.8, 1.1, 0.9, 3.0, 3.2, 2.8, 3.1, 2.9};
 
     static double ss(double[] y, int a, int b) {
