@@ -21,6 +21,21 @@ public final class PlanOutputs {
             + "(altitude ceilings, airspace near airports, flying near convective storms) and licensed practice; where this plan "
             + "differs from them, those rules win.";
 
+    /**
+     * The ceiling caution shown beside the altitude ceiling. Our own wording of common practice: many aviation
+     * authorities cap small uncrewed aircraft at about 120 m (400 ft) above ground unless the operator holds a
+     * permission, and field teams stop flying when convection comes near.
+     */
+    public static String ceilingCaution(double ceilingM) {
+        String over = ceilingM > 120.0
+                ? String.format(Locale.ROOT, " This plan's profiles reach %.0f m, above that limit: fly them only with the permission your "
+                        + "authority requires.", ceilingM)
+                : "";
+        return "Many jurisdictions limit small uncrewed aircraft to about 120 m (400 ft) above ground unless the operator holds a "
+                + "permission or waiver; check the rule where you fly." + over + " Stop flights and land when convection is near "
+                + "(towering cumulus, thunder or lightning, gust fronts, sudden wind shifts): a storm's outflow can arrive within minutes.";
+    }
+
     private PlanOutputs() {
     }
 
@@ -33,6 +48,7 @@ public final class PlanOutputs {
         ObjectNode root = json.createObjectNode();
         root.put("plan", plan.ensemble().name());
         root.put("caution", CAUTION);
+        root.put("ceiling_caution", ceilingCaution(plan.ceilingM()));
         root.put("base_scenario", plan.ensemble().baseLabel());
         root.put("model", model.equals("scenario") ? base.kind().name().toLowerCase(Locale.ROOT) : model);
         root.put("members", r.members);
@@ -106,6 +122,7 @@ public final class PlanOutputs {
             out.println("note: " + n);
         }
         out.println("CAUTION: " + CAUTION);
+        out.println("CAUTION (altitude ceiling " + Math.round(plan.ceilingM()) + " m): " + ceilingCaution(plan.ceilingM()));
     }
 
     static String siteCsv(PlanResult r) {

@@ -38,6 +38,7 @@ public final class PlanReport {
         rep.meta("model", model);
         rep.meta("members", r.members + (r.failedMembers > 0 ? " (" + r.failedMembers + " failed)" : ""));
         rep.caution("Planning advice, not a forecast.", PlanOutputs.CAUTION);
+        rep.caution("Altitude ceiling and convection.", PlanOutputs.ceilingCaution(plan.ceilingM()));
         addSections(rep, plan, r, windows, figs, false);
         rep.cautions();
         rep.write(dir.resolve("report.html"));
@@ -107,6 +108,7 @@ public final class PlanReport {
                 PlanOutputs.clock(plan.operatingEndH()), plan.ceilingM(), r.hasBay
                         ? "0.5 P(speed resolved) + 0.3 P(passage captured at one site or more) + 0.2 P(bay and sea breeze separated)"
                         : "0.6 P(speed resolved) + 0.4 P(passage captured at one site or more)"));
+        rep.paragraph(String.format(Locale.ROOT, "Altitude ceiling %.0f m. ", plan.ceilingM()) + PlanOutputs.ceilingCaution(plan.ceilingM()));
         List<String> cols = new ArrayList<>(List.of("rank", "sites (km inland)", "cadence", "score", "P(capture)", "P(speed)"));
         if (r.hasBay) {
             cols.add("P(bay/sea)");

@@ -21,30 +21,55 @@ public final class CsvTable {
     private final Map<String, Integer> index = new HashMap<>();
     private final List<String[]> rows;
     private final int[] lineNumbers;
+    /** What a tidy column was made from (a column map or a netCDF variable), for messages; absent for a plain file. */
+    private final Map<String, String> origins;
+    /** "line" for text files, "record" for tables built from netCDF variables. */
+    private final String rowWord;
 
     private CsvTable(String fileName, List<String> header, List<String[]> rows, int[] lineNumbers) {
+        this(fileName, header, rows, lineNumbers, Map.of(), "line");
+    }
+
+    private CsvTable(String fileName, List<String> header, List<String[]> rows, int[] lineNumbers, Map<String, String> origins,
+                     String rowWord) {
         this.fileName = fileName;
         this.header = header;
         this.rows = rows;
         this.lineNumbers = lineNumbers;
+        this.origins = origins;
+        this.rowWord = rowWord;
         for (int i = 0; i < header.size(); i++) {
             index.put(header.get(i), i);
         }
     }
 
     public static CsvTable read(Path file) {
+        return read(file, '\0');
+    }
+
+    /**
+     * Reads a delimited text file.
+     *
+     * @param delimiter ',', ';' or '\t'; '\0' detects it from the header line (the one of the three that splits it most)
+     */
+    public static CsvTable read(Path file, char delimiter) {
         // Gzipped CSV (name ending in .gz) is read transparently: the demo campaign ships that way.
         try (BufferedReader r = file.getFileName().toString().endsWith(".gz")
                 ? new BufferedReader(new java.io.InputStreamReader(
                         new java.util.zip.GZIPInputStream(Files.newInputStream(file), 1 << 16), StandardCharsets.UTF_8))
                 : Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return read(file.getFileName().toString(), r);
+            return read(file.getFileName().toString(), r, delimiter);
         } catch (IOException e) {
             throw new UserInputException(file + ": cannot read (" + e.getMessage() + "); check the path");
         }
     }
 
     public static CsvTable read(String fileName, BufferedReader r) throws IOException {
+        return read(fileName, r, '\0');
+    }
+
+    public static CsvTable read(String fileName, BufferedReader r, char delimiter) throws IOException {
+        char delim = delimiter;
         String line;
         int lineNo = 0;
         List<String> header = null;
@@ -59,7 +84,10 @@ public final class CsvTable {
             if (line.isBlank() || line.startsWith("#")) {
                 continue;
             }
-            String[] cells = split(line);
+            if (delim == '\0') {
+                delim = detectDelimiter(line);
+            }
+            String[] cells = split(line, delim);
             if (header == null) {
                 header = new ArrayList<>();
                 for (String c : cells) {
@@ -92,9 +120,58 @@ public final class CsvTable {
         return new CsvTable(fileName, header, rows, ln);
     }
 
+    /**
+     * A tidy table built in memory from another layout (a column map, a netCDF file): rows keep the line (or
+     * record) numbers of their source, and {@code origins} says for each tidy column where it came from.
+     */
+    public static CsvTable of(String fileName, List<String> header, List<String[]> rows, int[] lineNumbers,
+                              Map<String, String> origins, String rowWord) {
+        return new CsvTable(fileName, List.copyOf(header), rows, lineNumbers, Map.copyOf(origins), rowWord);
+    }
+
+    /** "column 'x'", or for a mapped column "column 'x' (from ...)". */
+    public String describe(int column) {
+        String h = header.get(column);
+        String o = origins.get(h);
+        return o == null ? "column '" + h + "'" : "column '" + h + "' (" + o + ")";
+    }
+
+    /** Where the tidy column came from, or null for a plain file's own column. */
+    public String origin(String column) {
+        return origins.get(column);
+    }
+
+    /** The one of comma, semicolon and tab that splits a header line into the most fields (comma on a tie). */
+    static char detectDelimiter(String headerLine) {
+        char best = ',';
+        int most = count(headerLine, ',');
+        for (char c : new char[] {';', '\t'}) {
+            int n = count(headerLine, c);
+            if (n > most) {
+                most = n;
+                best = c;
+            }
+        }
+        return best;
+    }
+
+    private static int count(String s, char c) {
+        int n = 0;
+        for (int i = 0; i < s.length(); i++) {
+            if (s.charAt(i) == c) {
+                n++;
+            }
+        }
+        return n;
+    }
+
     static String[] split(String line) {
+        return split(line, ',');
+    }
+
+    static String[] split(String line, char delim) {
         if (line.indexOf('"') < 0) {
-            String[] parts = line.split(",", -1);
+            String[] parts = line.split(java.util.regex.Pattern.quote(String.valueOf(delim)), -1);
             for (int i = 0; i < parts.length; i++) {
                 parts[i] = parts[i].trim();
             }
@@ -118,7 +195,7 @@ public final class CsvTable {
                 }
             } else if (c == '"') {
                 quoted = true;
-            } else if (c == ',') {
+            } else if (c == delim) {
                 out.add(sb.toString().trim());
                 sb.setLength(0);
             } else {
@@ -162,7 +239,7 @@ public final class CsvTable {
 
     /** "file line N". */
     public String where(int row) {
-        return fileName + " line " + lineNumbers[row];
+        return fileName + " " + rowWord + " " + lineNumbers[row];
     }
 
     /** True for an empty cell or a conventional missing-value token (NA, NaN, null, -). */
@@ -180,7 +257,7 @@ public final class CsvTable {
         try {
             return Double.parseDouble(c);
         } catch (NumberFormatException e) {
-            throw new UserInputException(where(row) + ": column '" + header.get(column) + "' value '" + c
+            throw new UserInputException(where(row) + ": " + describe(column) + " value '" + c
                     + "' is not a number; write a decimal number (point as separator) or leave the cell empty for missing");
         }
     }

@@ -20,6 +20,14 @@ public final class IngestSettings {
     public double pressureMaxHPa = 1100.0;
     /** Wind speed above this (m/s) is removed with its direction. */
     public double windSpeedMaxMPerS = 80.0;
+    /**
+     * A binned wind speed further than this (m/s) from the median of its neighbours is a spike and is removed
+     * with its direction. Default 10 m/s: a low-level jet changes speed by a few m/s per 10 m, an attitude or
+     * logging glitch by much more (common practice for drone and sonde profiles; from memory).
+     */
+    public double windSpikeMPerS = 10.0;
+    /** Neighbours either side (bins) of the spike test's median. Default 3 (15 m at 5 m bins). */
+    public int windSpikeHalfWindowBins = 3;
     /** Mixing ratio above this (g/kg) is removed. */
     public double mixingRatioMaxGPerKg = 50.0;
     /** A raw flight with fewer ascending samples than this is removed (logged). */
@@ -31,6 +39,10 @@ public final class IngestSettings {
         }
         if (!(rhRemoveAbovePercent >= 100)) {
             throw new UserInputException("ingest.rhRemoveAbovePercent = " + rhRemoveAbovePercent + " must be >= 100 (default 110)");
+        }
+        if (!(windSpikeMPerS > 0) || windSpikeHalfWindowBins < 1) {
+            throw new UserInputException("ingest.windSpikeMPerS = " + windSpikeMPerS + " must be > 0 (default 10) and "
+                    + "ingest.windSpikeHalfWindowBins = " + windSpikeHalfWindowBins + " >= 1 (default 3)");
         }
         return this;
     }

@@ -39,7 +39,37 @@ public final class ProfileCsvReader {
     }
 
     public IngestResult read(CsvTable t) {
-        return t.has(ProfileColumns.FLIGHT_ID) ? readRaw(t) : readBinned(t);
+        QcLog sniffed = new QcLog();
+        UnitSniffer.check(t, w -> sniffed.add(t.fileName(), 0, "", "", "", ProfileColumns.WIND_SPEED_M_PER_S, "",
+                QcLog.Action.FLAGGED, "wind-speed-implausible", w));
+        IngestResult r = t.has(ProfileColumns.FLIGHT_ID) ? readRaw(t) : readBinned(t);
+        if (!sniffed.isEmpty()) {
+            QcLog all = new QcLog();
+            all.addAll(sniffed);
+            all.addAll(r.qc());
+            return new IngestResult(r.profiles(), all, r.raw(), r.dayAttributes());
+        }
+        return r;
+    }
+
+    /**
+     * The spike test of every path ({@link WindSpikes}) on a binned profile's wind: spikes become missing (both
+     * components) and are logged, with the file line of the bin's row when known ({@code lines}, else {@code line0}).
+     */
+    void despikeWind(Profile p, String file, int[] lines, int line0, String prof, QcLog log) {
+        int n = p.size();
+        double[] sp = new double[n];
+        for (int k = 0; k < n; k++) {
+            sp[k] = p.windSpeed(k);
+        }
+        for (int k : WindSpikes.find(sp, settings.windSpikeHalfWindowBins, settings.windSpikeMPerS)) {
+            log.add(file, lines != null ? lines[k] : line0, p.day(), p.site(), prof, ProfileColumns.WIND_SPEED_M_PER_S,
+                    fmt(sp[k]), QcLog.Action.REMOVED_VALUE, "wind-speed-spike",
+                    String.format(Locale.ROOT, "wind speed at %.1f m departs from its neighbours' median by more than %.1f m/s "
+                            + "(direction removed with it)", p.heightM()[k], settings.windSpikeMPerS));
+            p.windEastMPerS()[k] = Double.NaN;
+            p.windNorthMPerS()[k] = Double.NaN;
+        }
     }
 
     // ------------------------------------------------------------------ binned
@@ -52,6 +82,8 @@ public final class ProfileCsvReader {
         String humName = t.header().get(cHum);
         Cols c = new Cols(t);
         int cT = t.column(ProfileColumns.TEMPERATURE_C);
+        // RH is checked whenever the file has it, even when another humidity column is the one used (same QC as raw).
+        int cRh = humName.equals(ProfileColumns.RH_PERCENT) ? -1 : t.column(ProfileColumns.RH_PERCENT);
         QcLog log = new QcLog();
         List<Profile> out = new ArrayList<>();
         Map<String, int[]> seen = new HashMap<>();
@@ -90,8 +122,10 @@ public final class ProfileCsvReader {
             double[] r = new double[n];
             double[] ue = new double[n];
             double[] vn = new double[n];
+            int[] lines = new int[n];
             for (int j = 0; j < n; j++) {
                 int row = start + order[j];
+                lines[j] = t.line(row);
                 z[j] = zRaw[order[j]];
                 if (j > 0 && z[j] == z[j - 1]) {
                     throw new UserInputException(t.where(row) + ": height_m " + fmt(z[j]) + " appears twice in profile (day "
@@ -102,11 +136,21 @@ public final class ProfileCsvReader {
                 p[j] = q.pressurePa(c.pressure);
                 tk[j] = q.temperatureK(cT);
                 r[j] = q.mixingRatio(cHum, humName, tk[j], p[j]);
+                if (cRh >= 0) {
+                    double rh = q.rhFraction(cRh);
+                    if (Double.isNaN(rh) && !Double.isNaN(t.number(row, cRh))) {
+                        r[j] = Double.NaN; // a removed RH condemns the humidity of that bin
+                    } else if (rh == 1.0 && !Double.isNaN(r[j]) && !Double.isNaN(tk[j]) && !Double.isNaN(p[j])) {
+                        r[j] = Math.min(r[j], Thermo.mixingRatioFromRelativeHumidity(1.0, tk[j], p[j]));
+                    }
+                }
                 double[] w = q.wind(c.speed, c.dir);
                 ue[j] = w[0];
                 vn[j] = w[1];
             }
-            out.add(ProfileDerivation.profile(site, day, hours, z, p, tk, r, ue, vn));
+            Profile built = ProfileDerivation.profile(site, day, hours, z, p, tk, r, ue, vn);
+            despikeWind(built, t.fileName(), lines, 0, prof, log);
+            out.add(built);
             start = end;
         }
         return new IngestResult(out, log, false, extraAttributes(t, c, log));
@@ -202,6 +246,7 @@ public final class ProfileCsvReader {
             RawFlight f = new RawFlight(site, day, flight, h0, ts, z, p, tk, rh, r, ue, vn, t.fileName(), t.line(start));
             Profile prof2 = AscentBinner.bin(f, settings, log);
             if (prof2 != null) {
+                despikeWind(prof2, t.fileName(), null, t.line(start), prof, log);
                 String lk = day + "\u0000" + site + "\u0000" + String.format(Locale.ROOT, "%.6f", prof2.timeHours());
                 Integer other = launchSeen.putIfAbsent(lk, t.line(start));
                 if (other != null) {
