@@ -47,6 +47,12 @@ public final class AnalysisSettings {
      */
     public Map<String, Map<String, String>> dayAttributes = new LinkedHashMap<>();
 
+    /**
+     * The campaign's local clock (a column map's time zone, else the coast's UTC offset); when set, outputs carry
+     * UTC beside local time. Null for synthetic runs whose days are labels.
+     */
+    public java.time.ZoneId localZone;
+
     public AnalysisSettings validate() {
         ingest.validate();
         detection.validate();

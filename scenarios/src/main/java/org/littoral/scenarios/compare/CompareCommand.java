@@ -43,6 +43,10 @@ public final class CompareCommand implements Callable<Integer> {
     @Option(names = "--days", paramLabel = "DAYS.csv", description = "Per-day attribute table (breeze_type, ...), as for observe.")
     Path days;
 
+    @Option(names = "--columns", paramLabel = "MAP.yaml",
+            description = "Column map of the observations (your column names, units, delimiter, time zone), as for observe.")
+    Path columns;
+
     @Option(names = "--breeze-type", paramLabel = "TYPE", defaultValue = "scenario",
             description = "Observed days to compare: 'scenario' (days of the scenario's own breeze type, default), 'all', "
                     + "or pure, corkscrew, backdoor, synoptic.")
@@ -70,7 +74,7 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Outcome o = run(scenario, obs, coastRef, days, breezeType, out, System.console() != null ? System.err : null);
+        Outcome o = run(scenario, obs, coastRef, days, columns, breezeType, out, System.console() != null ? System.err : null);
         Comparison.Result r = o.result();
         System.out.println("littoral: compared " + r.scenarioName() + " with " + r.days().size() + " observed day(s) at "
                 + r.sites().size() + " site(s) (" + r.pairs() + " paired profiles); wrote " + o.written().files().size()
@@ -90,10 +94,19 @@ public final class CompareCommand implements Callable<Integer> {
      */
     public static Outcome run(String scenarioRef, Path obs, String coastRef, Path days, String breezeType, Path out,
                               PrintStream progress) throws IOException {
+        return run(scenarioRef, obs, coastRef, days, null, breezeType, out, progress);
+    }
+
+    /** As above, with a column map of the observations ({@code columns}, may be null). */
+    public static Outcome run(String scenarioRef, Path obs, String coastRef, Path days, Path columns, String breezeType, Path out,
+                              PrintStream progress) throws IOException {
         Scenario sc = BuiltinScenarios.resolve(scenarioRef);
         Coast coast = coastRef == null ? sc.coast() : CoastFile.load(coastRef);
         AnalysisSettings settings = new AnalysisSettings();
-        ObserveCommand.Observed o = ObserveCommand.ingest(obs, settings);
+        org.littoral.scenarios.analysis.ingest.ColumnMap map = columns == null ? null
+                : org.littoral.scenarios.analysis.ingest.ColumnMap.load(columns);
+        settings.localZone = ObserveCommand.localZone(map, coast);
+        ObserveCommand.Observed o = ObserveCommand.ingest(obs, settings, map);
         if (days != null) {
             settings.dayAttributes.putAll(DayTableReader.read(days));
         }

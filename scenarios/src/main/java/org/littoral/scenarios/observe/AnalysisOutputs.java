@@ -26,7 +26,7 @@ public final class AnalysisOutputs {
             throws IOException {
         List<Path> files = new ArrayList<>();
         files.add(text(out.resolve("site-days.csv"), AnalysisTables.siteDays(r)));
-        files.add(text(out.resolve("passages.csv"), AnalysisTables.passages(r)));
+        files.add(text(out.resolve("passages.csv"), AnalysisTables.passages(r, settings.localZone)));
         files.add(text(out.resolve("responses.csv"), AnalysisTables.responses(r)));
         files.add(text(out.resolve("distributions.csv"), AnalysisTables.distributions(r)));
         files.add(text(out.resolve("composites.csv"), AnalysisTables.composites(r)));
@@ -35,6 +35,9 @@ public final class AnalysisOutputs {
         ObjectMapper json = new ObjectMapper();
         ObjectNode root = json.createObjectNode();
         root.put("analysed", what);
+        if (settings.localZone != null) {
+            root.put("local_clock", settings.localZone.getId());
+        }
         root.put("profiles", profiles.size());
         root.put("site_days", r.siteDays().size());
         root.put("passages", r.passages().size());
@@ -53,6 +56,11 @@ public final class AnalysisOutputs {
             for (Passage p : d.passages()) {
                 ObjectNode po = ps.addObject();
                 po.put("time_local_h", Math.round(p.timeHours() * 1e4) / 1e4);
+                if (settings.localZone != null) {
+                    String[] lu = AnalysisTables.localAndUtc(p.day(), p.timeHours(), settings.localZone);
+                    po.put("time_local", lu[0]);
+                    po.put("time_utc", lu[1]);
+                }
                 po.put("uncertainty_h", Math.round(p.uncertaintyHours() * 1e4) / 1e4);
                 po.put("confidence", p.confidence());
                 po.put("turns_onshore", p.turnsOnshore());

@@ -40,16 +40,42 @@ public final class AnalysisTables {
     }
 
     public static String passages(AnalysisResult r) {
+        return passages(r, null);
+    }
+
+    /**
+     * The passage table; with the campaign's local clock ({@code zone}) each passage also carries its ISO-8601 local
+     * time with offset and its UTC time (days that are ISO dates only).
+     */
+    public static String passages(AnalysisResult r, java.time.ZoneId zone) {
         StringBuilder sb = new StringBuilder("day,site,ordinal,time_local_h,uncertainty_h,confidence,detectors,turns_onshore,kind,"
-                + "direction_before_deg,direction_after_deg,cross_shore_before_m_per_s,cross_shore_after_m_per_s\n");
+                + "direction_before_deg,direction_after_deg,cross_shore_before_m_per_s,cross_shore_after_m_per_s"
+                + (zone != null ? ",time_local,time_utc" : "") + "\n");
         for (Passage p : r.passages()) {
             sb.append(Csv.field(p.day())).append(',').append(Csv.field(p.site())).append(',').append(p.ordinal()).append(',')
                     .append(num(p.timeHours())).append(',').append(num(p.uncertaintyHours())).append(',').append(num(p.confidence()))
                     .append(',').append(Csv.field(String.join(" ", p.detectors()))).append(',').append(p.turnsOnshore()).append(',')
                     .append(p.kind().name()).append(',').append(num(p.directionBeforeDeg())).append(',').append(num(p.directionAfterDeg()))
-                    .append(',').append(num(p.crossShoreBeforeMPerS())).append(',').append(num(p.crossShoreAfterMPerS())).append('\n');
+                    .append(',').append(num(p.crossShoreBeforeMPerS())).append(',').append(num(p.crossShoreAfterMPerS()));
+            if (zone != null) {
+                String[] lu = localAndUtc(p.day(), p.timeHours(), zone);
+                sb.append(',').append(lu[0]).append(',').append(lu[1]);
+            }
+            sb.append('\n');
         }
         return sb.toString();
+    }
+
+    /** {ISO local date-time with offset, ISO UTC} of a local clock time on an ISO day; empty cells for other day labels. */
+    public static String[] localAndUtc(String day, double hours, java.time.ZoneId zone) {
+        try {
+            java.time.LocalDateTime t = java.time.LocalDate.parse(day).atStartOfDay().plusNanos(Math.round(hours * 3.6e12));
+            java.time.ZonedDateTime z = t.atZone(zone);
+            return new String[] {z.toOffsetDateTime().withNano(0).toString(),
+                    z.toInstant().atOffset(java.time.ZoneOffset.UTC).withNano(0).toString()};
+        } catch (java.time.format.DateTimeParseException e) {
+            return new String[] {"", ""};
+        }
     }
 
     public static String responses(AnalysisResult r) {

@@ -14,7 +14,10 @@ import org.littoral.model.sounding.Profile;
 import org.littoral.scenarios.analysis.AnalysisChain;
 import org.littoral.scenarios.analysis.AnalysisResult;
 import org.littoral.scenarios.analysis.AnalysisSettings;
+import org.littoral.scenarios.analysis.ingest.ColumnMap;
 import org.littoral.scenarios.analysis.ingest.DayTableReader;
+import org.littoral.scenarios.analysis.ingest.MappedProfileFile;
+import org.littoral.scenarios.analysis.ingest.NetcdfProfileFile;
 import org.littoral.scenarios.analysis.ingest.IngestResult;
 import org.littoral.scenarios.analysis.ingest.ProfileCsvReader;
 import org.littoral.scenarios.analysis.ingest.QcLog;
@@ -26,11 +29,17 @@ import picocli.CommandLine.Parameters;
 /** {@code littoral observe OBS --coast COAST --out DIR}: the analysis chain on observed profiles. */
 @Command(name = "observe", description = {"Analyse observed profiles: ingest and QC, passage detection, response metrics, "
         + "composites and group statistics; tables (CSV/JSON), figures and a self-contained report.html.",
-        "OBS is a tidy profile CSV or a folder of them (columns: docs/analysis.md). The same chain analyses the model's synthetic soundings."})
+        "OBS is a tidy profile CSV, a netCDF profile file (one flight, or a CF profile collection), or a folder of them "
+                + "(docs/analysis.md). Your own column names, units, delimiter and time zone: --columns MAP.yaml. "
+                + "The same chain analyses the model's synthetic soundings."})
 public final class ObserveCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "OBS", description = "Profile CSV file, or a folder of *.csv files.")
+    @Parameters(index = "0", paramLabel = "OBS", description = "Profile CSV or netCDF file, or a folder of *.csv, *.csv.gz and *.nc files.")
     Path obs;
+
+    @Option(names = "--columns", paramLabel = "MAP.yaml",
+            description = "Column map: your column names and units, delimiter, timestamp form, local time zone, site (docs/analysis.md section 1b).")
+    Path columns;
 
     @Option(names = "--coast", required = true, paramLabel = "COAST",
             description = "Coast file (latitude_deg, bearing_land_to_sea_deg, ...), a scenario file, or a built-in scenario name.")
@@ -46,7 +55,9 @@ public final class ObserveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Coast coast = CoastFile.load(coastRef);
         AnalysisSettings settings = new AnalysisSettings();
-        Observed o = ingest(obs, settings);
+        ColumnMap map = columns == null ? null : ColumnMap.load(columns);
+        settings.localZone = localZone(map, coast);
+        Observed o = ingest(obs, settings, map);
         if (days != null) {
             settings.dayAttributes.putAll(DayTableReader.read(days));
         }
@@ -66,14 +77,37 @@ public final class ObserveCommand implements Callable<Integer> {
     public record Observed(List<Profile> profiles, QcLog qc) {
     }
 
+    /** The campaign's local clock: the column map's zone, else the coast's UTC offset. */
+    public static java.time.ZoneId localZone(ColumnMap map, Coast coast) {
+        if (map != null) {
+            return map.localZone;
+        }
+        return java.time.ZoneOffset.ofTotalSeconds((int) Math.round(coast.utcOffsetHours() * 3600.0));
+    }
+
     public static Observed ingest(Path obs, AnalysisSettings settings) throws IOException {
+        return ingest(obs, settings, null);
+    }
+
+    static boolean isNetcdf(Path p) {
+        String n = p.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+        return n.endsWith(".nc") || n.endsWith(".nc4") || n.endsWith(".cdf");
+    }
+
+    /** Profiles from a file or folder; a column map (may be null) applies to every text file and names netCDF variables. */
+    public static Observed ingest(Path obs, AnalysisSettings settings, ColumnMap map) throws IOException {
         List<Path> files = new ArrayList<>();
         if (Files.isDirectory(obs)) {
             try (Stream<Path> s = Files.list(obs)) {
-                s.filter(p -> p.getFileName().toString().endsWith(".csv") || p.getFileName().toString().endsWith(".csv.gz")).sorted().forEach(files::add);
+                s.filter(p -> {
+                    String n = p.getFileName().toString();
+                    return n.endsWith(".csv") || n.endsWith(".csv.gz") || isNetcdf(p)
+                            || map != null && (n.endsWith(".txt") || n.endsWith(".tsv"));
+                }).sorted().forEach(files::add);
             }
             if (files.isEmpty()) {
-                throw new UserInputException("observations folder " + obs + " holds no *.csv files; give a profile CSV or a folder of them");
+                throw new UserInputException("observations folder " + obs + " holds no *.csv, *.csv.gz or *.nc files; give a profile "
+                        + "file or a folder of them");
             }
         } else if (Files.isRegularFile(obs)) {
             files.add(obs);
@@ -84,7 +118,9 @@ public final class ObserveCommand implements Callable<Integer> {
         List<Profile> profiles = new ArrayList<>();
         QcLog qc = new QcLog();
         for (Path f : files) {
-            IngestResult ir = reader.read(f);
+            java.time.ZoneId zone = settings.localZone != null ? settings.localZone : java.time.ZoneOffset.UTC;
+            IngestResult ir = isNetcdf(f) ? reader.read(NetcdfProfileFile.read(f, map, zone))
+                    : map != null ? reader.read(MappedProfileFile.read(f, map)) : reader.read(f);
             profiles.addAll(ir.profiles());
             qc.addAll(ir.qc());
             for (Map.Entry<String, Map<String, String>> e : ir.dayAttributes().entrySet()) {

@@ -47,6 +47,10 @@ public final class CheckTimingCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads for the ensemble (default: all cores).")
     Integer threads;
 
+    @Option(names = "--columns", paramLabel = "MAP.yaml",
+            description = "Column map of a user passage table: delimiter, timestamp column and form, local time zone, site (docs/analysis.md section 1b).")
+    Path columns;
+
     @Option(names = "--resume", description = "Keep ensemble members already computed in DIR from the same inputs.")
     boolean resume;
 
@@ -55,7 +59,7 @@ public final class CheckTimingCommand implements Callable<Integer> {
         DaySpec spec = DayFile.read(day);
         Path dir = out != null ? out : Path.of("out", "check-timing", spec.date());
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null),
+        CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null, columns),
                 Solver.standard());
         PrintStream o = System.out;
         o.printf("littoral: %s: %d passage(s) checked against %d ensemble member(s) (%s model): %d flag(s)%n", spec.date(),
@@ -73,7 +77,11 @@ public final class CheckTimingCommand implements Callable<Integer> {
      * @param model "linear", "nonlinear" or null (the day file's choice)
      * @param progressBar draw a progress bar (a terminal); otherwise a line at most every 15 s
      */
-    public record Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar) {
+    public record Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar, Path columns) {
+        public Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar) {
+            this(model, threads, resume, log, progressBar, null);
+        }
+
         public Options {
             if (threads < 1) {
                 throw new UserInputException("--threads must be at least 1; got " + threads);
@@ -99,7 +107,7 @@ public final class CheckTimingCommand implements Callable<Integer> {
         long t0 = System.nanoTime();
         String model = opt.model() != null ? opt.model() : spec.model();
         spec.ensemble().base().put("kind", model);
-        PassageTable.Read obs = PassageTable.read(passagesFile, spec);
+        PassageTable.Read obs = PassageTable.read(passagesFile, spec, opt.columns());
 
         double[] xM = distances(spec);
         List<Member> members = MemberExpander.expand(spec.ensemble());

@@ -32,11 +32,18 @@ public final class PassageTable {
     }
 
     public static Read read(Path file, DaySpec day) {
+        return read(file, day, null);
+    }
+
+    /** As above; with a column map ({@code columns}, may be null) a user table in its own form (delimiter, time zone). */
+    public static Read read(Path file, DaySpec day, Path columns) {
         if (!Files.isRegularFile(file)) {
             throw new UserInputException("passage table " + file + " does not exist; give the passages.csv of littoral observe "
                     + "or a CSV with columns site, date, passage_time_local");
         }
-        CsvTable t = CsvTable.read(file);
+        CsvTable t = columns == null ? CsvTable.read(file)
+                : org.littoral.scenarios.analysis.ingest.MappedProfileFile.passageTable(file,
+                        org.littoral.scenarios.analysis.ingest.ColumnMap.load(columns));
         if (t.has("time_local_h") && t.has("turns_onshore") && t.has("day")) {
             return readObserve(t, day);
         }
