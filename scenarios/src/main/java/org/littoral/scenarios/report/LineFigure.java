@@ -2,18 +2,16 @@ package org.littoral.scenarios.report;
 
 import java.awt.Color;
 import java.awt.Graphics2D;
-import java.awt.Rectangle;
-import java.awt.Shape;
-import java.awt.geom.Line2D;
-import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
 
 /**
- * Line plot: several series (optionally with markers and error bars), shaded bands (uncertainty,
+ * Line plot, drawn by XChart in the report's look ({@link XChartStyle}): several series (optionally with markers and error bars), shaded bands (uncertainty,
  * ensemble envelope), labelled vertical event lines, horizontal and sloped reference lines, and a
  * legend placed in the corner that hides the least data.
  *
@@ -107,120 +105,206 @@ public class LineFigure extends Figure {
                 ysData.add(new double[] {r.a});
             }
         }
-        double[] xr = Draw.finiteRange(xsData.toArray(new double[0][]));
-        double[] yr = Draw.finiteRange(ysData.toArray(new double[0][]));
-        int bottomExtra = note == null ? 0 : g.getFontMetrics(Theme.NOTE).getHeight() + 4;
-        PlotFrame f = PlotFrame.layout(g, widthPx, heightPx, title, xs, xr, xLooseDefault, ys, yr, true, 0,
-                bottomExtra);
-        Rectangle p = f.plot;
-        f.drawGrid(g);
-        Shape saved = g.getClip();
-        g.clip(f.clip());
-        List<Draw.LegendEntry> legend = new ArrayList<>();
-        List<double[]> avoid = new ArrayList<>();
+        int noteH = note == null ? 0 : g.getFontMetrics(Theme.NOTE).getHeight() + 4;
+        int chartH = heightPx - noteH;
+        int plotW = XChartStyle.plotWidthPx(widthPx);
+        int plotH = XChartStyle.plotHeightPx(chartH, !title.isEmpty());
+        NiceTicks xt = ticks(xs, Draw.finiteRange(xsData.toArray(new double[0][])), xLooseDefault, plotW / 90 + 1);
+        NiceTicks yt = ticks(ys, Draw.finiteRange(ysData.toArray(new double[0][])), true, plotH / 55 + 1);
+        double[] xr = {xt.graphMin(), xt.graphMax()};
+        double[] yr = {yt.graphMin(), yt.graphMax()};
+        XYChart c = XChartStyle.chart(widthPx, chartH, title, xs.title(), ys.title());
+        XChartStyle.axes(c, xt, plotW, yt, plotH);
+        int k = 0;
+        XChartStyle.generalTicks(c, xr, k++);
+        List<String> labels = new ArrayList<>();
+        List<double[]> occupied = new ArrayList<>();
         for (Band b : bands) {
-            Path2D area = new Path2D.Double();
-            boolean started = false;
-            int n = b.x.length;
-            // closed polygon: along lo, back along hi; NaNs are skipped (bands should be gap-free)
-            for (int i = 0; i < n; i++) {
-                if (finite(b.x[i], b.lo[i], b.hi[i])) {
-                    if (!started) {
-                        area.moveTo(f.x.px(b.x[i]), f.y.px(b.lo[i]));
-                        started = true;
-                    } else {
-                        area.lineTo(f.x.px(b.x[i]), f.y.px(b.lo[i]));
-                    }
-                }
+            double[][] poly = bandPolygon(b);
+            if (poly[0].length < 3) {
+                continue;
             }
-            for (int i = n - 1; i >= 0; i--) {
-                if (finite(b.x[i], b.lo[i], b.hi[i])) {
-                    area.lineTo(f.x.px(b.x[i]), f.y.px(b.hi[i]));
-                }
-            }
-            if (started) {
-                area.closePath();
-                g.setColor(Theme.withAlpha(b.color, b.alpha));
-                g.fill(area);
-            }
-            Draw.collect(avoid, f.x, f.y, b.x, b.lo);
-            Draw.collect(avoid, f.x, f.y, b.x, b.hi);
-            if (b.name != null && !b.name.isEmpty()) {
-                legend.add(Draw.LegendEntry.patch(b.name, Theme.withAlpha(b.color, b.alpha), null));
+            XYSeries xy = c.addSeries(XChartStyle.key(k++), poly[0], poly[1]);
+            xy.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
+            xy.setFillColor(Theme.withAlpha(b.color, b.alpha));
+            xy.setLineColor(Theme.withAlpha(b.color, 0));
+            xy.setMarker(XChartStyle.marker(Marker.NONE, true));
+            label(xy, b.name, labels);
+            for (int i = 0; i < b.x.length; i++) {
+                // the band's inside counts, not only its edges
+                occupy(occupied, new double[] {b.x[i], b.x[i]}, fill(new double[] {b.lo[i], b.hi[i]}, 8), xr, yr);
             }
         }
         for (Ref r : refs) {
-            g.setColor(r.color);
-            g.setStroke(r.kind == Ref.SLOPED ? Theme.solid(1.2f) : Theme.dashed(1.3f));
-            if (r.kind == Ref.VERTICAL) {
-                double px = f.x.px(r.a);
-                g.draw(new Line2D.Double(px, p.y, px, p.y + p.height));
-            } else if (r.kind == Ref.HORIZONTAL) {
-                double py = f.y.px(r.a);
-                g.draw(new Line2D.Double(p.x, py, p.x + p.width, py));
+            if (r.kind == Ref.SLOPED) {
+                XYSeries xy = c.addSeries(XChartStyle.key(k++), new double[] {xr[0], xr[1]},
+                        new double[] {r.b + r.a * xr[0], r.b + r.a * xr[1]});
+                xy.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+                xy.setLineColor(r.color);
+                xy.setLineStyle(Theme.solid(1.2f));
+                xy.setMarker(XChartStyle.marker(Marker.NONE, true));
+                label(xy, r.label, labels);
             } else {
-                double x0 = f.x.min;
-                double x1 = f.x.max;
-                g.draw(new Line2D.Double(f.x.px(x0), f.y.px(r.b + r.a * x0), f.x.px(x1), f.y.px(r.b + r.a * x1)));
-                if (r.label != null && !r.label.isEmpty()) {
-                    legend.add(Draw.LegendEntry.line(r.label, r.color, Theme.solid(1.2f), Marker.NONE));
-                }
+                // a dashed two-point series rather than an XChart annotation: annotations paint over the legend
+                boolean vertical = r.kind == Ref.VERTICAL;
+                double[] lx = vertical ? new double[] {r.a, r.a} : xr.clone();
+                double[] ly = vertical ? yr.clone() : new double[] {r.a, r.a};
+                XYSeries xy = c.addSeries(XChartStyle.key(k++), lx, ly);
+                xy.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+                xy.setLineColor(r.color);
+                xy.setLineStyle(Theme.dashed(1.3f));
+                xy.setMarker(XChartStyle.marker(Marker.NONE, true));
+                xy.setShowInLegend(false);
+                occupy(occupied, fill(lx, 12), fill(ly, 12), xr, yr);
             }
         }
         for (Series s : series) {
-            g.setColor(s.color);
-            g.setStroke(Theme.solid(1.1f));
-            for (int i = 0; i < s.x.length; i++) {
-                if (!finite(s.x[i], s.y[i], 0)) {
-                    continue;
-                }
-                double px = f.x.px(s.x[i]);
-                double py = f.y.px(s.y[i]);
-                if (s.yErr != null && Double.isFinite(s.yErr[i])) {
-                    double a = f.y.px(s.y[i] - s.yErr[i]);
-                    double b = f.y.px(s.y[i] + s.yErr[i]);
-                    g.draw(new Line2D.Double(px, a, px, b));
-                    g.draw(new Line2D.Double(px - 3, a, px + 3, a));
-                    g.draw(new Line2D.Double(px - 3, b, px + 3, b));
-                }
-                if (s.xErr != null && Double.isFinite(s.xErr[i])) {
-                    double a = f.x.px(s.x[i] - s.xErr[i]);
-                    double b = f.x.px(s.x[i] + s.xErr[i]);
-                    g.draw(new Line2D.Double(a, py, b, py));
-                    g.draw(new Line2D.Double(a, py - 3, a, py + 3));
-                    g.draw(new Line2D.Double(b, py - 3, b, py + 3));
-                }
+            if (s.xErr != null) {
+                XYSeries bars = c.addSeries(XChartStyle.key(k++), xErrorBars(s, 3.0 * (yr[1] - yr[0]) / plotH, true),
+                        xErrorBars(s, 3.0 * (yr[1] - yr[0]) / plotH, false));
+                bars.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+                bars.setLineColor(s.color);
+                bars.setLineStyle(Theme.solid(1.1f));
+                bars.setMarker(XChartStyle.marker(Marker.NONE, true));
+                bars.setShowInLegend(false);
             }
-            if (s.line) {
-                g.setStroke(s.style.stroke(s.width));
-                g.draw(Draw.polyline(f.x, f.y, s.x, s.y));
-            }
-            if (s.marker != Marker.NONE) {
-                for (int i = 0; i < s.x.length; i++) {
-                    if (finite(s.x[i], s.y[i], 0)) {
-                        Draw.marker(g, s.marker, f.x.px(s.x[i]), f.y.px(s.y[i]), 8, s.color, s.markerFilled);
-                    }
-                }
-            }
-            Draw.collect(avoid, f.x, f.y, s.x, s.y);
-            if (s.inLegend && !s.name.isEmpty()) {
-                legend.add(new Draw.LegendEntry(s.name, s.color, s.line ? s.style.stroke(s.width) : null, s.marker,
-                        null, s.markerFilled));
-            }
+            XYSeries xy = s.yErr != null ? c.addSeries(XChartStyle.key(k++), s.x, s.y, zeroWhereMissing(s.yErr))
+                    : c.addSeries(XChartStyle.key(k++), s.x, s.y);
+            xy.setXYSeriesRenderStyle(s.line ? XYSeries.XYSeriesRenderStyle.Line : XYSeries.XYSeriesRenderStyle.Scatter);
+            xy.setLineColor(s.color);
+            xy.setLineStyle(s.style.stroke(s.width));
+            xy.setMarker(XChartStyle.marker(s.marker, s.markerFilled));
+            xy.setMarkerColor(s.color);
+            label(xy, s.inLegend ? s.name : null, labels);
+            occupy(occupied, s.x, s.y, xr, yr);
         }
-        paintRefLabels(g, f);
-        g.setClip(saved);
-        Draw.legendInside(g, legend, p, avoid);
-        f.drawAxes(g);
+        if (labels.isEmpty()) {
+            c.getStyler().setLegendVisible(false);
+        } else {
+            int[] size = XChartStyle.legendSize(labels);
+            c.getStyler().setLegendPosition(XChartStyle.quietCorner(occupied, size[0], size[1], plotW, plotH));
+        }
+        c.paint(g, widthPx, chartH);
+        paintRefLabels(g, c, yr);
         if (note != null) {
             g.setFont(Theme.NOTE);
             g.setColor(new Color(0x555555));
-            Draw.text(g, note, p.x, heightPx - Theme.PAD / 2.0, 0, 1);
+            Draw.text(g, note, c.getScreenXFromChart(xr[0]), heightPx - Theme.PAD / 2.0, 0, 1);
         }
     }
 
-    private void paintRefLabels(Graphics2D g, PlotFrame f) {
-        Rectangle p = f.plot;
+    /** Ticks of an axis: over its fixed range, or the data range (rounded out to whole ticks when loose). */
+    private static NiceTicks ticks(AxisSpec a, double[] data, boolean looseDefault, int nTicks) {
+        if (a.fixed()) {
+            return NiceTicks.within(a.min, a.max, nTicks);
+        }
+        double lo = Double.isFinite(a.min) ? a.min : data[0];
+        double hi = Double.isFinite(a.max) ? a.max : data[1];
+        if (!Double.isFinite(lo) || !Double.isFinite(hi)) {
+            lo = 0;
+            hi = 1;
+        }
+        boolean loose = a.loose != null ? a.loose : looseDefault;
+        if (loose || !(hi > lo)) {
+            NiceTicks t = NiceTicks.loose(lo, hi, nTicks);
+            if (Double.isFinite(a.min) || Double.isFinite(a.max)) {
+                return NiceTicks.within(Double.isFinite(a.min) ? a.min : t.graphMin(), Double.isFinite(a.max) ? a.max : t.graphMax(), nTicks);
+            }
+            return t;
+        }
+        return NiceTicks.within(lo, hi, nTicks);
+    }
+
+    /** A band as one closed polygon: along the lower edge, back along the upper (points with a NaN are skipped). */
+    private static double[][] bandPolygon(Band b) {
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < b.x.length; i++) {
+            if (finite(b.x[i], b.lo[i], b.hi[i])) {
+                pts.add(new double[] {b.x[i], b.lo[i]});
+            }
+        }
+        for (int i = b.x.length - 1; i >= 0; i--) {
+            if (finite(b.x[i], b.lo[i], b.hi[i])) {
+                pts.add(new double[] {b.x[i], b.hi[i]});
+            }
+        }
+        double[][] out = new double[2][pts.size()];
+        for (int i = 0; i < pts.size(); i++) {
+            out[0][i] = pts.get(i)[0];
+            out[1][i] = pts.get(i)[1];
+        }
+        return out;
+    }
+
+    /**
+     * Horizontal error bars as one NaN-separated line series (XChart draws vertical error bars only): the bar and
+     * a cap of +-{@code capY} (data units) at each end, per point.
+     */
+    private static double[] xErrorBars(Series s, double capY, boolean xCoordinates) {
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < s.x.length; i++) {
+            double e = s.xErr[i];
+            if (!finite(s.x[i], s.y[i], e)) {
+                continue;
+            }
+            double a = s.x[i] - e;
+            double b = s.x[i] + e;
+            double[][] segs = {{a, s.y[i], b, s.y[i]}, {a, s.y[i] - capY, a, s.y[i] + capY}, {b, s.y[i] - capY, b, s.y[i] + capY}};
+            for (double[] seg : segs) {
+                out.add(xCoordinates ? seg[0] : seg[1]);
+                out.add(xCoordinates ? seg[2] : seg[3]);
+                out.add(Double.NaN);
+            }
+        }
+        return out.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
+    private static double[] zeroWhereMissing(double[] e) {
+        double[] r = e.clone();
+        for (int i = 0; i < r.length; i++) {
+            if (!Double.isFinite(r[i])) {
+                r[i] = 0;
+            }
+        }
+        return r;
+    }
+
+    private static void label(XYSeries xy, String label, List<String> labels) {
+        boolean shown = label != null && !label.isEmpty();
+        xy.setShowInLegend(shown);
+        if (shown) {
+            xy.setLabel(label);
+            labels.add(label);
+        }
+    }
+
+    /** Points evenly spaced from a[0] to a[1] (n of them); a two-element array of the ends. */
+    private static double[] fill(double[] a, int n) {
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = a[0] + (a[1] - a[0]) * i / (n - 1.0);
+        }
+        return r;
+    }
+
+    /** Collects the points as fractions of the axis ranges (for the legend corner). */
+    private static void occupy(List<double[]> out, double[] x, double[] y, double[] xr, double[] yr) {
+        int n = Math.max(x.length, y.length);
+        for (int i = 0; i < n; i++) {
+            double xi = x[Math.min(i, x.length - 1)];
+            double yi = y[Math.min(i, y.length - 1)];
+            if (Double.isFinite(xi) && Double.isFinite(yi)) {
+                out.add(new double[] {(xi - xr[0]) / (xr[1] - xr[0]), (yi - yr[0]) / (yr[1] - yr[0])});
+            }
+        }
+    }
+
+    /** Labels of events and horizontal references, placed by hand so they never overlap (XChart's do). */
+    private void paintRefLabels(Graphics2D g, XYChart c, double[] yr) {
+        double top = c.getScreenYFromChart(yr[1]);
+        double bottom = c.getScreenYFromChart(yr[0]);
+        double left = c.getScreenXFromChart(c.getStyler().getXAxisMin());
+        double right = c.getScreenXFromChart(c.getStyler().getXAxisMax());
         g.setFont(Theme.NOTE);
         List<Rectangle2D> placed = new ArrayList<>();
         int lineH = g.getFontMetrics().getHeight();
@@ -230,21 +314,20 @@ public class LineFigure extends Figure {
             }
             g.setColor(r.color);
             if (r.kind == Ref.VERTICAL) {
-                double px = f.x.px(r.a);
-                boolean flip = Draw.bounds(g, r.label, px + 3, 0, 0, 0).getMaxX() > p.x + p.width - 2;
+                double px = c.getScreenXFromChart(r.a);
+                boolean flip = Draw.bounds(g, r.label, px + 3, 0, 0, 0).getMaxX() > right - 2;
                 double ax = flip ? 1 : 0;
                 double tx = flip ? px - 3 : px + 3;
-                double ty = p.y + 4;
+                double ty = top + 4;
                 Rectangle2D b = Draw.bounds(g, r.label, tx, ty, ax, 0);
-                while (intersects(b, placed) && ty < p.y + p.height - 2 * lineH) {
+                while (intersects(b, placed) && ty < bottom - 2 * lineH) {
                     ty += lineH + 1;
                     b = Draw.bounds(g, r.label, tx, ty, ax, 0);
                 }
                 placed.add(b);
                 Draw.haloText(g, r.label, tx, ty, ax, 0);
             } else {
-                double py = f.y.px(r.a);
-                Draw.haloText(g, r.label, p.x + 6, py - 2, 0, 1);
+                Draw.haloText(g, r.label, left + 6, c.getScreenYFromChart(r.a) - 2, 0, 1);
             }
         }
     }

@@ -4,7 +4,7 @@ package org.littoral.scenarios.report;
 public enum LineStyle {
     SOLID, DASHED, DOTTED, DASH_DOT;
 
-    java.awt.Stroke stroke(float width) {
+    java.awt.BasicStroke stroke(float width) {
         switch (this) {
             case DASHED:
                 return Theme.dashed(width);

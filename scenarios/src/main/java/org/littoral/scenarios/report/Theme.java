@@ -4,7 +4,6 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.GraphicsEnvironment;
-import java.awt.Stroke;
 import java.util.Arrays;
 
 /** Fonts, sizes and colours shared by every figure (sizes in pixels, tuned for 900 x 600). */
@@ -42,19 +41,19 @@ final class Theme {
         return new Color(c.getRed(), c.getGreen(), c.getBlue(), (int) Math.round(255 * alpha));
     }
 
-    static Stroke solid(float w) {
+    static BasicStroke solid(float w) {
         return new BasicStroke(w, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND);
     }
 
-    static Stroke dashed(float w) {
+    static BasicStroke dashed(float w) {
         return new BasicStroke(w, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] {7f, 4f}, 0f);
     }
 
-    static Stroke dotted(float w) {
+    static BasicStroke dotted(float w) {
         return new BasicStroke(w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, new float[] {1.5f, 3.5f}, 0f);
     }
 
-    static Stroke dashDot(float w) {
+    static BasicStroke dashDot(float w) {
         return new BasicStroke(w, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
                 new float[] {8f, 3f, 2f, 3f}, 0f);
     }
