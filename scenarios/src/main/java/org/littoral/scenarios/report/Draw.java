@@ -11,7 +11,6 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
-import java.util.ArrayList;
 import java.util.List;
 
 /** Small drawing helpers: aligned and rotated text, markers, legends. */
@@ -144,14 +143,6 @@ final class Draw {
         static LegendEntry line(String label, Color c, Stroke s, Marker m) {
             return new LegendEntry(label, c, s, m, null, true);
         }
-
-        static LegendEntry patch(String label, Color fill, Color edge) {
-            return new LegendEntry(label, edge, null, Marker.NONE, fill, true);
-        }
-
-        static LegendEntry point(String label, Color c, Marker m, boolean filled) {
-            return new LegendEntry(label, c, null, m, null, filled);
-        }
     }
 
     static java.awt.Dimension legendSize(Graphics2D g, List<LegendEntry> entries) {
@@ -242,10 +233,6 @@ final class Draw {
                 out.add(new double[] {xa.px(xs[i]), ya.px(ys[i])});
             }
         }
-    }
-
-    static List<double[]> newPoints() {
-        return new ArrayList<>();
     }
 
     /** A polyline through finite points; NaN breaks the line. */

@@ -2,18 +2,18 @@ package org.littoral.scenarios.report;
 
 import java.awt.Color;
 import java.awt.Graphics2D;
-import java.awt.Rectangle;
-import java.awt.geom.Path2D;
-import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
 
 /**
  * Histogram of one or more groups on common bins. Bins: given edges, a given width, or by default the
  * Freedman and Diaconis (1981) width 2 IQR n^(-1/3) (Z. Wahrscheinlichkeitstheorie 57, 453-476),
- * rounded to a nice number. Bins are [a, b), the last one closed. Several groups are drawn as
- * translucent steps so they can be compared.
+ * rounded to a nice number. Bins are [a, b), the last one closed. Drawn by XChart in the report's look
+ * ({@link XChartStyle}): several groups as translucent step areas so they can be compared, one group as
+ * outlined bars.
  *
  * <pre>
  * HistogramFigure f = HistogramFigure.builder()
@@ -142,69 +142,103 @@ public final class HistogramFigure extends Figure {
         AxisSpec ys = new AxisSpec();
         ys.label = mode == Mode.COUNT ? "Count" : mode == Mode.PROBABILITY ? "Fraction of values" : "Probability density";
         ys.unit = mode == Mode.DENSITY && !xs.unit.isEmpty() ? "per " + xs.unit : "";
-        int bottomExtra = note == null ? 0 : g.getFontMetrics(Theme.NOTE).getHeight() + 4;
-        PlotFrame f = PlotFrame.layout(g, widthPx, heightPx, title, xs, new double[] {edges[0], edges[edges.length - 1]},
-                false, ys, new double[] {0, top > 0 ? top : 1}, true, 0, bottomExtra);
-        Rectangle p = f.plot;
-        f.drawGrid(g);
-        List<Draw.LegendEntry> legend = new ArrayList<>();
-        List<double[]> avoid = new ArrayList<>();
+        int noteH = note == null ? 0 : g.getFontMetrics(Theme.NOTE).getHeight() + 4;
+        int chartH = heightPx - noteH;
+        int plotW = XChartStyle.plotWidthPx(widthPx);
+        int plotH = XChartStyle.plotHeightPx(chartH, !title.isEmpty());
+        NiceTicks xt = NiceTicks.within(edges[0], edges[edges.length - 1], plotW / 90 + 1);
+        NiceTicks yt = NiceTicks.loose(0, top > 0 ? top : 1, plotH / 55 + 1);
+        XYChart c = XChartStyle.chart(widthPx, chartH, title, xs.title(), ys.title());
+        XChartStyle.axes(c, xt, plotW, yt, plotH);
+        int k = 0;
+        XChartStyle.generalTicks(c, new double[] {xt.graphMin(), xt.graphMax()}, k++);
         boolean single = heights.length == 1;
-        List<Path2D> steps = new ArrayList<>();
+        List<String> labels = new ArrayList<>();
+        List<double[]> occupied = new ArrayList<>();
+        List<XYSeries> outlines = new ArrayList<>();
         for (int gi = 0; gi < heights.length; gi++) {
-            Color c = Theme.qualitative(gi);
+            Color col = Theme.qualitative(gi);
             double[] h = heights[gi];
-            Path2D step = new Path2D.Double();
-            step.moveTo(f.x.px(edges[0]), f.y.px(0));
-            for (int i = 0; i < h.length; i++) {
-                double x0 = f.x.px(edges[i]);
-                double x1 = f.x.px(edges[i + 1]);
-                double y = f.y.px(h[i]);
-                step.lineTo(x0, y);
-                step.lineTo(x1, y);
-                for (double t = 0.1; t < 1; t += 0.2) {
-                    for (double yy = y; yy <= f.y.px(0); yy += 12) {
-                        avoid.add(new double[] {x0 + t * (x1 - x0), yy});
-                    }
-                }
+            // the step outline: up from zero at the first edge, along each bin top, down to zero at the last edge;
+            // XChart's step style holds each value until the next x
+            int nb = h.length;
+            double[] sx = new double[nb + 3];
+            double[] sy = new double[nb + 3];
+            sx[0] = edges[0];
+            for (int i = 0; i < nb; i++) {
+                sx[i + 1] = edges[i];
+                sy[i + 1] = h[i];
             }
-            step.lineTo(f.x.px(edges[edges.length - 1]), f.y.px(0));
-            steps.add(step);
-            g.setColor(Theme.withAlpha(c, single ? 0.55 : 0.25));
-            g.fill(step);
+            sx[nb + 1] = edges[nb];
+            sy[nb + 1] = h[nb - 1];
+            sx[nb + 2] = edges[nb];
+            XYSeries area = c.addSeries(XChartStyle.key(k++), sx, sy);
+            area.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.StepArea);
+            area.setFillColor(Theme.withAlpha(col, single ? 0.55 : 0.25));
+            area.setLineColor(single ? col.darker() : col);
+            area.setLineStyle(Theme.solid(single ? 1f : 2f));
+            area.setMarker(XChartStyle.marker(Marker.NONE, true));
             long n = Arrays.stream(data.get(gi)).filter(Double::isFinite).count();
-            legend.add(Draw.LegendEntry.patch(names.get(gi) + " (n = " + n + ")",
-                    Theme.withAlpha(c, single ? 0.55 : 0.25), c));
-        }
-        // outlines after all fills, so no group hides another's edge
-        for (int gi = 0; gi < heights.length; gi++) {
-            Color c = Theme.qualitative(gi);
-            double[] h = heights[gi];
-            if (single) {
-                g.setColor(c.darker());
-                g.setStroke(Theme.solid(1f));
-                for (int i = 0; i < h.length; i++) {
-                    if (h[i] > 0) {
-                        double x0 = f.x.px(edges[i]);
-                        double x1 = f.x.px(edges[i + 1]);
-                        g.draw(new Rectangle2D.Double(x0, f.y.px(h[i]), x1 - x0, f.y.px(0) - f.y.px(h[i])));
+            String label = names.get(gi).isEmpty() && single ? "" : names.get(gi) + " (n = " + n + ")";
+            area.setShowInLegend(!label.isEmpty());
+            if (!label.isEmpty()) {
+                area.setLabel(label);
+                labels.add(label);
+            }
+            for (int i = 0; i < nb; i++) {
+                for (double t = 0.1; t < 1; t += 0.2) {
+                    for (int j = 0; j <= 8; j++) {
+                        occupied.add(new double[] {(edges[i] + t * (edges[i + 1] - edges[i]) - xt.graphMin()) / (xt.graphMax() - xt.graphMin()),
+                            h[i] * j / 8.0 / (yt.graphMax() - yt.graphMin())});
                     }
                 }
-            } else {
-                g.setColor(c);
-                g.setStroke(Theme.solid(2f));
-                g.draw(steps.get(gi));
+            }
+            if (single) {
+                // one group: each bar outlined, as a bar chart reads
+                outlines.add(barOutlines(c, XChartStyle.key(k++), h, col.darker()));
             }
         }
-        if (!(single && names.get(0).isEmpty())) {
-            Draw.legendInside(g, legend, p, avoid);
+        if (labels.isEmpty()) {
+            c.getStyler().setLegendVisible(false);
+        } else {
+            int[] size = XChartStyle.legendSize(labels);
+            c.getStyler().setLegendPosition(XChartStyle.quietCorner(occupied, size[0], size[1], plotW, plotH));
         }
-        f.drawAxes(g);
+        c.paint(g, widthPx, chartH);
         if (note != null) {
             g.setFont(Theme.NOTE);
             g.setColor(new Color(0x555555));
-            Draw.text(g, note, p.x, heightPx - Theme.PAD / 2.0, 0, 1);
+            Draw.text(g, note, c.getScreenXFromChart(xt.graphMin()), heightPx - Theme.PAD / 2.0, 0, 1);
         }
+    }
+
+    /** The bars' edges as one NaN-separated line series (bins with values only). */
+    private XYSeries barOutlines(XYChart c, String key, double[] h, Color col) {
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < h.length; i++) {
+            if (h[i] > 0) {
+                pts.add(new double[] {edges[i], 0});
+                pts.add(new double[] {edges[i], h[i]});
+                pts.add(new double[] {edges[i + 1], h[i]});
+                pts.add(new double[] {edges[i + 1], 0});
+                pts.add(new double[] {Double.NaN, Double.NaN});
+            }
+        }
+        double[] x = new double[Math.max(1, pts.size())];
+        double[] y = new double[x.length];
+        Arrays.fill(x, Double.NaN);
+        Arrays.fill(y, Double.NaN);
+        for (int i = 0; i < pts.size(); i++) {
+            x[i] = pts.get(i)[0];
+            y[i] = pts.get(i)[1];
+        }
+        XYSeries s = c.addSeries(key, x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setLineColor(col);
+        s.setLineStyle(Theme.solid(1f));
+        s.setMarker(XChartStyle.marker(Marker.NONE, true));
+        s.setShowInLegend(false);
+        return s;
     }
 
     /** Builder: 900 x 600 px, counts, Freedman-Diaconis bins. */

@@ -38,7 +38,7 @@ final class XChartStyle {
         s.setChartTitleVisible(title != null && !title.isEmpty());
         s.setChartTitleBoxVisible(false);
         s.setChartTitlePadding(8);
-        s.setChartPadding(Theme.PAD);
+        s.setChartPadding(Theme.PAD + 6); // room for half of the last x tick label
         s.setPlotBorderVisible(true);
         s.setPlotBorderColor(FRAME);
         s.setPlotMargin(0);
