@@ -34,9 +34,20 @@ public final class DemoAtmosphere {
     private final List<DemoDay.Front> fronts;
     private final double[] inlandUnit;
     private final double[] scratch = new double[2];
+    /** Half-width (hours) of each front's time step, in the order of {@link #fronts}. */
+    private final double[] halfWidthHours;
 
     /** Allocates the front list for one site. */
     public DemoAtmosphere(DemoDay day, int siteIndex) {
+        this(day, siteIndex, 0.0, 0.0);
+    }
+
+    /**
+     * Gradual-turn mode: each front's wind turn takes a duration drawn uniformly from turnMinutesLo..turnMinutesHi
+     * (10-90 % of the tanh step, i.e. 2 atanh(0.8) = 2.197 half-widths), deterministic in the day's seed and site.
+     * turnMinutesHi = 0 keeps the default sharp front ({@link #FRONT_HALF_WIDTH_HOURS}).
+     */
+    public DemoAtmosphere(DemoDay day, int siteIndex, double turnMinutesLo, double turnMinutesHi) {
         this.day = day;
         this.coast = DemoCoast.coast(day.date().getDayOfYear());
         List<DemoDay.Front> f = new ArrayList<>();
@@ -47,6 +58,12 @@ public final class DemoAtmosphere {
         }
         f.sort((a, b) -> Double.compare(a.arrivalHours(), b.arrivalHours()));
         this.fronts = f;
+        this.halfWidthHours = new double[f.size()];
+        java.util.Random r = new java.util.Random(DemoFlights.mix(day.seed(), 7000 + siteIndex));
+        for (int k = 0; k < f.size(); k++) {
+            double minutes = turnMinutesLo + (turnMinutesHi - turnMinutesLo) * r.nextDouble();
+            halfWidthHours[k] = turnMinutesHi > 0 ? minutes / 60.0 / 2.1972 : FRONT_HALF_WIDTH_HOURS;
+        }
         double az = Math.toRadians(coast.inlandAzimuthDeg());
         this.inlandUnit = new double[] {Math.sin(az), Math.cos(az)};
     }
@@ -122,10 +139,11 @@ public final class DemoAtmosphere {
         double thetaAnomaly = 0.0;
         double mixingAnomaly = 0.0;
         double lastWeight = 0.0;
-        for (DemoDay.Front f : fronts) {
+        for (int fi = 0; fi < fronts.size(); fi++) {
+            DemoDay.Front f = fronts.get(fi);
             double depth = f.depthM();
             double lean = HEAD_LEAN_HOURS * Math.min(z / depth, 1.5);
-            double g = 0.5 * (1.0 + Math.tanh((hours - f.arrivalHours() - lean) / FRONT_HALF_WIDTH_HOURS));
+            double g = 0.5 * (1.0 + Math.tanh((hours - f.arrivalHours() - lean) / halfWidthHours[fi]));
             double top = 0.5 * (1.0 - Math.tanh((z - depth) / (0.08 * depth + 20.0)));
             double w = g * top;
             double since = Math.max(0.0, hours - f.arrivalHours());
@@ -154,8 +172,8 @@ public final class DemoAtmosphere {
     /** Surface pressure, Pa, with a small pressure rise behind each front (the density current's head). */
     double surfacePressurePa(double hours) {
         double p = day.background().surfacePressureHPa() * 100.0;
-        for (DemoDay.Front f : fronts) {
-            p += 30.0 * 0.5 * (1.0 + Math.tanh((hours - f.arrivalHours()) / FRONT_HALF_WIDTH_HOURS));
+        for (int fi = 0; fi < fronts.size(); fi++) {
+            p += 30.0 * 0.5 * (1.0 + Math.tanh((hours - fronts.get(fi).arrivalHours()) / halfWidthHours[fi]));
         }
         return p;
     }

@@ -149,7 +149,12 @@ public final class DemoFlights {
 
     /** Samples one binned ascent (allocates its arrays). */
     public static BinnedAscent binned(DemoDay day, Flight f) {
-        DemoAtmosphere atm = new DemoAtmosphere(day, f.siteIndex());
+        return binned(day, f, 0.0, 0.0);
+    }
+
+    /** As {@link #binned(DemoDay, Flight)} with gradual wind turns ({@link DemoAtmosphere} gradual-turn mode). */
+    public static BinnedAscent binned(DemoDay day, Flight f, double turnMinutesLo, double turnMinutesHi) {
+        DemoAtmosphere atm = new DemoAtmosphere(day, f.siteIndex(), turnMinutesLo, turnMinutesHi);
         Random r = new Random(mix(f.seed(), 1));
         int nBins = (int) Math.floor(f.ceilingM() / BIN_M + 1e-9);
         double[] z = new double[nBins];

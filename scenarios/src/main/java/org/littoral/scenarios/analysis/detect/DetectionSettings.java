@@ -61,6 +61,28 @@ public final class DetectionSettings {
      */
     public double onshoreHalfWidthDeg = 60.0;
 
+    /**
+     * One passage per gradual turn (docs/analysis.md, "Gradual turns"): two consecutive changes become one passage
+     * when the wind state between them lasts at most {@link #gradualTurnMaxHours}, the wind keeps turning the
+     * same way through both (no turn back), and the whole turn brings or strengthens onshore flow. Default on.
+     */
+    public boolean mergeGradualTurns = true;
+    /**
+     * Longest intermediate state (first to last profile between the two changes), hours, that still counts as
+     * mid-turn. Default 0.75 h: a 20-40 min turn leaves one to three 15-min flights mid-turn, while a bay breeze
+     * holds for 1.5 h or more before the sea breeze.
+     */
+    public double gradualTurnMaxHours = 0.75;
+    /**
+     * With the gradual-turn rule on, a later onshore-strengthening change on a site-day that already has an onshore
+     * passage counts as a second front only if the wind turns towards onshore by this many degrees ...
+     */
+    public double strengtheningMinTurnDeg = 10.0;
+    /** ... or the onshore component rises by this much, m/s. Default 1 (a bay breeze at 70 % of the sea breeze still counts). */
+    public double strengtheningMinGainMPerS = 1.0;
+    /** Turns smaller than this (deg) between the states do not count as turning back. Default 10. */
+    public double turnBackToleranceDeg = 10.0;
+
     public DetectionSettings validate() {
         if (minSegmentProfiles < 1) {
             throw new UserInputException("detection.minSegmentProfiles = " + minSegmentProfiles + " must be >= 1 (default 2)");
@@ -70,6 +92,9 @@ public final class DetectionSettings {
         }
         if (!(minValidFraction > 0 && minValidFraction <= 1)) {
             throw new UserInputException("detection.minValidFraction = " + minValidFraction + " must be in (0, 1] (default 0.5)");
+        }
+        if (!(gradualTurnMaxHours >= 0)) {
+            throw new UserInputException("detection.gradualTurnMaxHours = " + gradualTurnMaxHours + " must be >= 0 h (default 0.75)");
         }
         if (multiLayers.isEmpty() || multiVariables.isEmpty()) {
             throw new UserInputException("detection.multiLayers and detection.multiVariables must not be empty");

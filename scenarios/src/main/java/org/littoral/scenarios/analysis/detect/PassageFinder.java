@@ -97,29 +97,155 @@ public final class PassageFinder {
                 kept.add(clusters.get(i));
             }
         }
-        List<Passage> out = new ArrayList<>();
+        // Groups of kept changes [first, last]: one per change, or several changes of one gradual turn.
+        List<int[]> groups = new ArrayList<>();
         for (int i = 0; i < kept.size(); i++) {
-            Cluster cl = kept.get(i);
-            double[][] ba = beforeAfter(kept, i, wind, sd.size());
-            double unc = cl.anchor.uncertaintyHours();
-            List<String> names = new ArrayList<>();
-            for (ChangeCandidate m : cl.members) {
-                names.add(m.detector());
-                unc = Math.max(unc, Math.abs(m.timeHours() - cl.anchor.timeHours()));
-            }
+            groups.add(new int[] {i, i});
+        }
+        if (s.mergeGradualTurns) {
+            mergeGradualTurns(groups, kept, wind, sd, coast, s, notes);
+        }
+        List<Passage> out = new ArrayList<>();
+        for (int g = 0; g < groups.size(); g++) {
+            Cluster first = kept.get(groups.get(g)[0]);
+            Cluster last = kept.get(groups.get(g)[1]);
+            double[][] ba = groupBeforeAfter(groups, g, kept, wind, sd.size());
             double cb = coast.crossShore(ba[0][0], ba[0][1]);
             double ca = coast.crossShore(ba[1][0], ba[1][1]);
+            double time = first.anchor.timeHours();
+            double unc = first.anchor.uncertaintyHours();
+            java.util.LinkedHashSet<String> names = new java.util.LinkedHashSet<>();
+            for (int i = groups.get(g)[0]; i <= groups.get(g)[1]; i++) {
+                for (ChangeCandidate m : kept.get(i).members) {
+                    names.add(m.detector());
+                    unc = Math.max(unc, Math.abs(m.timeHours() - kept.get(i).anchor.timeHours()));
+                }
+            }
+            if (first != last) {
+                // One gradual turn: the passage is when the cross-shore wind is half way from its before to its after value.
+                int a = first.anchor.lastBefore();
+                int b = last.anchor.firstAfter();
+                time = halfTurnTime(sd, wind, coast, a, b, 0.5 * (cb + ca), 0.5 * (first.anchor.timeHours() + last.anchor.timeHours()));
+                unc = Math.max(unc, 0.25 * (sd.timeHours()[b] - sd.timeHours()[a]));
+            }
             boolean inB = inOnshoreSector(ba[0][0], ba[0][1], coast, s);
             boolean inA = inOnshoreSector(ba[1][0], ba[1][1], coast, s);
-            PassageKind kind = !inB && inA ? PassageKind.INTO_ONSHORE
-                    : inB && inA && ca > cb ? PassageKind.ONSHORE_STRENGTHENING
-                    : inB && !inA ? PassageKind.OUT_OF_ONSHORE : PassageKind.OTHER;
-            out.add(new Passage(sd.site(), sd.day(), i + 1, cl.anchor.timeHours(), unc,
-                    (double) cl.members.size() / detectors.size(), names, cl.anchor.lastBefore(), cl.anchor.firstAfter(),
-                    ba[0], ba[1], cb, ca, Coast.directionFromDeg(ba[0][0], ba[0][1]),
+            PassageKind kind = kindOf(inB, inA, cb, ca);
+            if (s.mergeGradualTurns && kind == PassageKind.ONSHORE_STRENGTHENING && out.stream().anyMatch(Passage::turnsOnshore)) {
+                // A second onshore passage needs a shift of its own: the wind turns towards onshore by
+                // strengtheningMinTurnDeg or the onshore component rises by strengtheningMinGainMPerS; a veer or a speed
+                // change inside onshore flow that has already arrived is not a new front.
+                double offB = Math.abs(signedTurnDeg(coast.bearingLandToSeaDeg(), Coast.directionFromDeg(ba[0][0], ba[0][1])));
+                double offA = Math.abs(signedTurnDeg(coast.bearingLandToSeaDeg(), Coast.directionFromDeg(ba[1][0], ba[1][1])));
+                if (offB - offA < s.strengtheningMinTurnDeg && ca - cb < s.strengtheningMinGainMPerS) {
+                    notes.add(String.format(java.util.Locale.ROOT, "%s: change at %.2f h inside onshore flow (%.0f -> %.0f deg, "
+                            + "onshore wind %+.1f m/s) is not a second front: labelled OTHER", sd.key(), time,
+                            Coast.directionFromDeg(ba[0][0], ba[0][1]), Coast.directionFromDeg(ba[1][0], ba[1][1]), ca - cb));
+                    kind = PassageKind.OTHER;
+                }
+            }
+            out.add(new Passage(sd.site(), sd.day(), g + 1, time, unc,
+                    Math.min(1.0, (double) names.size() / detectors.size()), new ArrayList<>(names), first.anchor.lastBefore(),
+                    last.anchor.firstAfter(), ba[0], ba[1], cb, ca, Coast.directionFromDeg(ba[0][0], ba[0][1]),
                     Coast.directionFromDeg(ba[1][0], ba[1][1]), kind));
         }
         return new Outcome(out, unconfirmed, notes);
+    }
+
+    private static PassageKind kindOf(boolean inB, boolean inA, double cb, double ca) {
+        return !inB && inA ? PassageKind.INTO_ONSHORE
+                : inB && inA && ca > cb ? PassageKind.ONSHORE_STRENGTHENING
+                : inB && !inA ? PassageKind.OUT_OF_ONSHORE : PassageKind.OTHER;
+    }
+
+    /**
+     * The gradual-turn rule: adjacent groups merge when the state between them is short (at most
+     * gradualTurnMaxHours from its first to its last profile), the wind turns the same way through both changes
+     * (neither turn reverses the other by more than turnBackToleranceDeg), and the merged change turns the wind
+     * onshore or strengthens onshore flow. A second onshore passage on a site-day therefore needs a wind state of
+     * its own between two shifts, or a turn back: evidence of two separate shifts.
+     */
+    private static void mergeGradualTurns(List<int[]> groups, List<Cluster> kept, double[][] wind, SiteDay sd, Coast coast,
+                                          DetectionSettings s, List<String> notes) {
+        boolean merged = true;
+        while (merged) {
+            merged = false;
+            for (int g = 0; g + 1 < groups.size(); g++) {
+                Cluster left = kept.get(groups.get(g)[1]);
+                Cluster right = kept.get(groups.get(g + 1)[0]);
+                double holdH = sd.timeHours()[right.anchor.lastBefore()] - sd.timeHours()[left.anchor.firstAfter()];
+                if (holdH > s.gradualTurnMaxHours + 1e-9) {
+                    continue;
+                }
+                double[][] outer = groupBeforeAfter(groups, g, kept, wind, sd.size());
+                double[][] outerR = groupBeforeAfter(groups, g + 1, kept, wind, sd.size());
+                double[] before = outer[0];
+                double[] mid = outer[1];
+                double[] after = outerR[1];
+                double dB = Coast.directionFromDeg(before[0], before[1]);
+                double dM = Coast.directionFromDeg(mid[0], mid[1]);
+                double dA = Coast.directionFromDeg(after[0], after[1]);
+                if (Double.isNaN(dB) || Double.isNaN(dM) || Double.isNaN(dA)) {
+                    continue;
+                }
+                double t1 = signedTurnDeg(dB, dM);
+                double t2 = signedTurnDeg(dM, dA);
+                boolean sameWay = t1 * t2 >= 0 || Math.min(Math.abs(t1), Math.abs(t2)) < s.turnBackToleranceDeg;
+                double cb = coast.crossShore(before[0], before[1]);
+                double ca = coast.crossShore(after[0], after[1]);
+                PassageKind k = kindOf(inOnshoreSector(before[0], before[1], coast, s), inOnshoreSector(after[0], after[1], coast, s),
+                        cb, ca);
+                if (sameWay && k.onshore()) {
+                    notes.add(String.format(java.util.Locale.ROOT, "%s: changes at %.2f h and %.2f h are one gradual turn "
+                            + "(%.0f -> %.0f -> %.0f deg, %.2f h between): one passage", sd.key(), left.anchor.timeHours(),
+                            right.anchor.timeHours(), dB, dM, dA, holdH));
+                    groups.get(g)[1] = groups.get(g + 1)[1];
+                    groups.remove(g + 1);
+                    merged = true;
+                    break;
+                }
+            }
+        }
+    }
+
+    /** Signed turn from direction a to b, degrees in (-180, 180] (positive clockwise, veering). */
+    static double signedTurnDeg(double a, double b) {
+        double d = (b - a) % 360.0;
+        if (d > 180.0) {
+            d -= 360.0;
+        } else if (d <= -180.0) {
+            d += 360.0;
+        }
+        return d;
+    }
+
+    /** Time the layer cross-shore wind crosses {@code target} between profiles a and b (linear); {@code dflt} when it does not. */
+    private static double halfTurnTime(SiteDay sd, double[][] w, Coast coast, int a, int b, double target, double dflt) {
+        double[] t = sd.timeHours();
+        int prev = -1;
+        for (int i = a; i <= b; i++) {
+            if (Double.isNaN(w[0][i]) || Double.isNaN(w[1][i])) {
+                continue;
+            }
+            if (prev >= 0) {
+                double c0 = coast.crossShore(w[0][prev], w[1][prev]) - target;
+                double c1 = coast.crossShore(w[0][i], w[1][i]) - target;
+                if (c0 < 0 && c1 >= 0 || c0 > 0 && c1 <= 0) {
+                    return t[prev] + (t[i] - t[prev]) * c0 / (c0 - c1);
+                }
+            }
+            prev = i;
+        }
+        return dflt;
+    }
+
+    /** Mean wind {east, north} before and after group g, bounded by the neighbouring groups. */
+    private static double[][] groupBeforeAfter(List<int[]> groups, int g, List<Cluster> kept, double[][] w, int n) {
+        int from = g == 0 ? 0 : kept.get(groups.get(g - 1)[1]).anchor.firstAfter();
+        int mid = kept.get(groups.get(g)[0]).anchor.lastBefore();
+        int after = kept.get(groups.get(g)[1]).anchor.firstAfter();
+        int to = g == groups.size() - 1 ? n - 1 : kept.get(groups.get(g + 1)[0]).anchor.lastBefore();
+        return new double[][] {meanWind(w, from, mid), meanWind(w, after, to)};
     }
 
     /** True when the wind blows from sea to land within the sector half-width of the inland direction. */
