@@ -33,6 +33,24 @@ public record Background(double[] zM, double[] thetaK, double[] mixingRatioKgPer
         return new Background(zM.clone(), th, r, pressureFromTheta(zM, th, r, surfacePressurePa), u, v);
     }
 
+    /**
+     * A tabulated theta profile on the given levels, with the mixing ratio falling linearly at
+     * {@code mixingRatioGradientPerM} (clipped at 1e-5 kg/kg) and the pressure integrated hydrostatically.
+     */
+    public static Background ofTheta(double[] zM, double[] thetaK, double surfaceMixingRatio, double mixingRatioGradientPerM,
+                                     double surfacePressurePa, double ambientU, double ambientV) {
+        int n = zM.length;
+        double[] r = new double[n];
+        double[] u = new double[n];
+        double[] v = new double[n];
+        for (int k = 0; k < n; k++) {
+            r[k] = Math.max(1e-5, surfaceMixingRatio + mixingRatioGradientPerM * zM[k]);
+            u[k] = ambientU;
+            v[k] = ambientV;
+        }
+        return new Background(zM.clone(), thetaK.clone(), r, pressureFromTheta(zM, thetaK, r, surfacePressurePa), u, v);
+    }
+
     /** Hydrostatic pressure for a theta profile: iterate T from theta and p (two passes suffice at 1e-6). */
     public static double[] pressureFromTheta(double[] zM, double[] thetaK, double[] r, double surfacePressurePa) {
         int n = zM.length;

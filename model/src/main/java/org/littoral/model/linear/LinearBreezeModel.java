@@ -26,6 +26,11 @@ import org.littoral.model.thermo.Thermo;
  * which carries energy upward. The forcing is expanded in diurnal harmonics n = 0..N, the coast in
  * Fourier modes of the periodic x domain ({@link ShoreMask}).
  *
+ * <p>With a height-varying basic state ({@link LinearConfig#stratification()}: mixed layer, capping inversion,
+ * free atmosphere) N^2 depends on z, the vertical problem becomes psi'' - m(z)^2 psi = c q_n(z) and is solved per
+ * (k, omega_n) by a banded solve that is exact for piecewise-constant N^2 ({@link StratifiedColumn},
+ * {@link StratifiedVerticalSolver}); above the varying part N is constant and the same root rule applies.
+ *
  * <p>The passive water-vapour perturbation obeys D_b q' + w dq0/dz = 0 (relaxed at the cooling rate).
  */
 public final class LinearBreezeModel {
@@ -95,6 +100,10 @@ public final class LinearBreezeModel {
                 }
             }
         }
+        // height-varying N: one banded solve per mode on the stratified column, for either heating shape
+        StratifiedColumn column = cfg.stratification() == null ? null : new StratifiedColumn(cfg.stratification(), zOut, heat);
+        double n2Top = column == null ? n2 : column.topBuoyancyFrequencySquared();
+        double[] rootTop = new double[2];
         int nn = solver == null ? 0 : solver.size();
         double[] pr = new double[nn];
         double[] pi = new double[nn];
@@ -203,7 +212,25 @@ public final class LinearBreezeModel {
                 double aI = -k * rmR;
                 double cR = (aR * denR + aI * denI) / dd;
                 double cI = (aI * denR - aR * denI) / dd;
-                if (heat.exponential()) {
+                if (column != null) {
+                    // m(z)^2 = A N(z)^2 + B, A = k^2 ratio / den, B = k^2 eps s_m^2 / den
+                    double capAR = k * k * (raR * denR + raI * denI) / dd;
+                    double capAI = k * k * (raI * denR - raR * denI) / dd;
+                    double smR = am * am - wh * wh;
+                    double smI = 2 * am * wh;
+                    double bR = k * k * eps * (smR * denR + smI * denI) / dd;
+                    double bI = k * k * eps * (smI * denR - smR * denI) / dd;
+                    root(capAR * n2Top + bR, capAI * n2Top + bI, wh, rootTop);
+                    int off = (kk % mb) * nz;
+                    column.solve(h, capAR, capAI, bR, bI, rootTop[0], rootTop[1], tpR, tpI, tuR, tuI, off);
+                    for (int l = 0; l < nz; l++) {
+                        double xr = tpR[off + l], xi = tpI[off + l], yr = tuR[off + l], yi = tuI[off + l];
+                        tpR[off + l] = cR * xr - cI * xi;
+                        tpI[off + l] = cR * xi + cI * xr;
+                        tuR[off + l] = cR * yr - cI * yi;
+                        tuI[off + l] = cR * yi + cI * yr;
+                    }
+                } else if (heat.exponential()) {
                     double a = heat.decayPerM();
                     heat.profile(h, 0.0, q);
                     double qr = q[0];
@@ -234,9 +261,39 @@ public final class LinearBreezeModel {
             }
             flushBlock(nx - mb, blockDone, nx, nz, tpR, tpI, tuR, tuI, psR, psI, uR, uI);
         }
-        Background bg = Background.constantN(zOut, cfg.surfaceThetaK(), cfg.buoyancyFrequencyPerS(), cfg.surfaceMixingRatio(),
-                gammaQ, cfg.surfacePressurePa(), uAmb, 0.0);
+        Background bg;
+        if (cfg.stratification() == null) {
+            bg = Background.constantN(zOut, cfg.surfaceThetaK(), cfg.buoyancyFrequencyPerS(), cfg.surfaceMixingRatio(),
+                    gammaQ, cfg.surfacePressurePa(), uAmb, 0.0);
+        } else {
+            // b = (Q + i k N^2(z) psi) / s_b: the multipliers hold N_ref^2, each level scales them to its own N^2
+            double[] th = new double[nz];
+            for (int l = 0; l < nz; l++) {
+                th[l] = cfg.stratification().thetaK(zOut[l]);
+                b.buoyancyScale[l] = cfg.stratification().buoyancyFrequencySquared(zOut[l]) / n2;
+            }
+            bg = Background.ofTheta(zOut, th, cfg.surfaceMixingRatio(), gammaQ, cfg.surfacePressurePa(), uAmb, 0.0);
+        }
         return b.build(bg);
+    }
+
+    /**
+     * The root m of m^2 with Re(m) &gt;= 0 (decaying aloft); for a purely propagating m^2 &lt; 0 without damping the
+     * limit of vanishing damping, Im(m) = -sign(omega + k U) |m| (upward energy), as for constant N.
+     */
+    static void root(double m2R, double m2I, double wh, double[] out) {
+        double rr = Math.hypot(m2R, m2I);
+        double mr = Math.sqrt(Math.max(0.0, 0.5 * (rr + m2R)));
+        double mi = Math.sqrt(Math.max(0.0, 0.5 * (rr - m2R)));
+        if (m2I < 0) {
+            mi = -mi;
+        }
+        if (m2I == 0 && m2R < 0) {
+            mr = 0;
+            mi = -Math.signum(wh) * Math.sqrt(-m2R);
+        }
+        out[0] = mr;
+        out[1] = mi;
     }
 
     /** Writes the solved modes first .. first + done.length - 1 (those marked done) to the level-major arrays and clears the marks. */

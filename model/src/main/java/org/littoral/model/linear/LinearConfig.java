@@ -4,6 +4,7 @@ import org.littoral.model.coast.Coast;
 import org.littoral.model.coast.SurfaceMap;
 import org.littoral.model.grid.HorizontalGrid;
 import org.littoral.model.grid.VerticalGrid;
+import org.littoral.model.nonlinear.ThetaProfile;
 
 /**
  * Everything the linear spectral model needs. The basic state is stratified with constant
@@ -24,10 +25,30 @@ import org.littoral.model.grid.VerticalGrid;
  * @param surfaceMixingRatio basic-state mixing ratio at the ground, kg/kg
  * @param mixingRatioGradientPerM basic-state d(r)/dz, kg/kg per m (negative: drier aloft)
  * @param surfacePressurePa basic-state surface pressure
+ * @param stratification a height-varying basic state (mixed layer, capping inversion, free atmosphere), whose
+ *        N(z) the vertical problem then uses (banded solve); null for constant N = buoyancyFrequencyPerS. With it,
+ *        buoyancyFrequencyPerS is the N above the profile's varying part.
  */
 public record LinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xGrid, VerticalGrid zGrid,
                            double buoyancyFrequencyPerS, double frictionPerS, double newtonianCoolingPerS,
                            double ambientCrossShoreMPerS, boolean hydrostatic, int harmonics,
                            HeatingSpec heating, double surfaceThetaK, double surfaceMixingRatio,
-                           double mixingRatioGradientPerM, double surfacePressurePa) {
+                           double mixingRatioGradientPerM, double surfacePressurePa, ThetaProfile stratification) {
+
+    /** Constant N: no stratification profile. */
+    public LinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xGrid, VerticalGrid zGrid,
+                        double buoyancyFrequencyPerS, double frictionPerS, double newtonianCoolingPerS,
+                        double ambientCrossShoreMPerS, boolean hydrostatic, int harmonics,
+                        HeatingSpec heating, double surfaceThetaK, double surfaceMixingRatio,
+                        double mixingRatioGradientPerM, double surfacePressurePa) {
+        this(coast, surface, xGrid, zGrid, buoyancyFrequencyPerS, frictionPerS, newtonianCoolingPerS, ambientCrossShoreMPerS,
+                hydrostatic, harmonics, heating, surfaceThetaK, surfaceMixingRatio, mixingRatioGradientPerM, surfacePressurePa, null);
+    }
+
+    /** This configuration with the given stratification profile (null: constant N). */
+    public LinearConfig withStratification(ThetaProfile profile) {
+        return new LinearConfig(coast, surface, xGrid, zGrid, buoyancyFrequencyPerS, frictionPerS, newtonianCoolingPerS,
+                ambientCrossShoreMPerS, hydrostatic, harmonics, heating, surfaceThetaK, surfaceMixingRatio, mixingRatioGradientPerM,
+                surfacePressurePa, profile);
+    }
 }

@@ -51,6 +51,8 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
     private final double[] p0R, p0I;
     private final double[][] qR, qI, qIntR, qIntI;
     private final double[] shiftR, shiftI;
+    /** N^2(z) / N_ref^2 per level: the buoyancy multipliers hold N_ref^2 (all 1 for constant N). */
+    private final double[] buoyancyScale;
     private final int cachePositions;
     private final Map<Double, double[][]> columns = new LinkedHashMap<>(64, 0.75f, true) {
         @Override
@@ -94,6 +96,7 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
         qI = b.qI;
         qIntR = b.qIntR;
         qIntI = b.qIntI;
+        buoyancyScale = b.buoyancyScale.clone();
         shiftR = new double[nx];
         shiftI = new double[nx];
         for (int kk = 0; kk < nx; kk++) {
@@ -176,7 +179,7 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
                     acc(sr[V], si[V], idx, ar[V * nx + kk], ai[V * nx + kk], yr, yi);
                     acc(sr[P], si[P], idx, ar[P * nx + kk], ai[P * nx + kk], yr, yi);
                     acc(sr[W], si[W], idx, ar[W * nx + kk], ai[W * nx + kk], xr, xi);
-                    acc(sr[B], si[B], idx, ar[B * nx + kk], ai[B * nx + kk], xr, xi);
+                    acc(sr[B], si[B], idx, ar[B * nx + kk], ai[B * nx + kk], xr * buoyancyScale[l], xi * buoyancyScale[l]);
                     acc(sr[Q], si[Q], idx, ar[Q * nx + kk], ai[Q * nx + kk], xr, xi);
                 }
                 // buoyancy forced directly by the heating, and the uniform hydrostatic pressure
@@ -354,6 +357,8 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
                     qRe += a4r * xr - a4i * xi;
                     qIm += a4r * xi + a4i * xr;
                 }
+                bRe *= buoyancyScale[l];
+                bIm *= buoyancyScale[l];
                 bRe += bqSr * qR[h][l] - bqSi * qI[h][l];
                 bIm += bqSr * qI[h][l] + bqSi * qR[h][l];
                 pRe += p0R[h] * qIntR[h][l] - p0I[h] * qIntI[h][l];
@@ -421,6 +426,7 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
         final double[][] cwR, cwI, cbR, cbI, cqR, cqI, cvR, cvI, cpR, cpI, bqR, bqI;
         final double[] p0R, p0I;
         final double[][] qR, qI, qIntR, qIntI;
+        final double[] buoyancyScale;
 
         Builder(LinearConfig cfg, int nh, int nx, int nz, double[] z) {
             this.cfg = cfg;
@@ -451,6 +457,8 @@ public final class LinearSolution implements BreezeSolution, FieldSampling {
             qI = new double[nh][nz];
             qIntR = new double[nh][nz];
             qIntI = new double[nh][nz];
+            buoyancyScale = new double[nz];
+            java.util.Arrays.fill(buoyancyScale, 1.0);
         }
 
         LinearSolution build(Background bg) {
