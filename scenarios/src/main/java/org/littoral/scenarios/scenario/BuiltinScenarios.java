@@ -11,7 +11,7 @@ import org.littoral.scenarios.input.UserInputException;
 /** The scenarios shipped inside littoral (resources under org/littoral/scenarios/builtin). */
 public final class BuiltinScenarios {
     private static final String DIR = "/org/littoral/scenarios/builtin/";
-    private static final List<String> NAMES = List.of("classic-45N", "classic-20N", "critical-30N-friction",
+    private static final List<String> NAMES = List.of("classic-45N", "classic-45N-capped", "classic-20N", "critical-30N-friction",
             "offshore-ambient", "onshore-ambient", "sea-barrier-bay", "quillmarsh-reach",
             "nl-offshore-2ms", "nl-offshore-4ms", "nl-corkscrew-4ms", "nl-corkscrew-8ms", "nl-backdoor-4ms", "nl-backdoor-8ms",
             "nl-onshore-2ms", "nl-onshore-5ms");

@@ -42,9 +42,19 @@ public record Scenario(String name, String description, Kind kind, String source
     /** Which model runs the scenario. */
     public enum Kind { LINEAR, NONLINEAR }
 
-    /** Basic state, SI. */
+    /**
+     * Basic state, SI.
+     *
+     * @param layers the layered sounding (mixed layer, inversion, free atmosphere with N = buoyancyFrequencyPerS), or
+     *        null for constant N from the ground
+     */
     public record Atmosphere(double surfaceThetaK, double buoyancyFrequencyPerS, double surfaceMixingRatio,
-                             double mixingRatioGradientPerM, double surfacePressurePa) {
+                             double mixingRatioGradientPerM, double surfacePressurePa, ThetaProfile layers) {
+
+        /** The potential-temperature profile both models use. */
+        public ThetaProfile thetaProfile() {
+            return layers != null ? layers : new ThetaProfile.ConstantN(surfaceThetaK, buoyancyFrequencyPerS);
+        }
     }
 
     /** Large-scale wind: speed and meteorological direction, with its model-axis components. */
@@ -117,7 +127,7 @@ public record Scenario(String name, String description, Kind kind, String source
                     c.depthM(), c.sunriseSolarHours(), xg));
         }
         return NonlinearConfig.builder(coast, map, xg, zGrid)
-                .theta(new ThetaProfile.ConstantN(atmosphere.surfaceThetaK(), atmosphere.buoyancyFrequencyPerS()))
+                .theta(atmosphere.thetaProfile())
                 .moisture(atmosphere.surfaceMixingRatio(), atmosphere.mixingRatioGradientPerM())
                 .surfacePressurePa(atmosphere.surfacePressurePa())
                 .geostrophicWind(ambientWind.speedMPerS(), ambientWind.fromDeg())
@@ -134,6 +144,6 @@ public record Scenario(String name, String description, Kind kind, String source
         return new LinearConfig(coast, surface, xGrid, zGrid, atmosphere.buoyancyFrequencyPerS(), physics.frictionPerS(),
                 physics.coolingPerS(), ambientWind.crossShoreMPerS(), physics.hydrostatic(), physics.harmonics(), heating,
                 atmosphere.surfaceThetaK(), atmosphere.surfaceMixingRatio(), atmosphere.mixingRatioGradientPerM(),
-                atmosphere.surfacePressurePa());
+                atmosphere.surfacePressurePa(), atmosphere.layers());
     }
 }

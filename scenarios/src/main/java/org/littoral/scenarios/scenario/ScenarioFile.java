@@ -26,6 +26,7 @@ import org.littoral.model.coast.SurfaceSegment;
 import org.littoral.model.grid.HorizontalGrid;
 import org.littoral.model.grid.VerticalGrid;
 import org.littoral.model.linear.HeatingSpec;
+import org.littoral.model.nonlinear.ThetaProfile;
 import org.littoral.model.sounding.FlightSchedule;
 import org.littoral.model.sounding.InstrumentNoise;
 import org.littoral.model.sounding.SoundingSpec;
@@ -189,9 +190,21 @@ public final class ScenarioFile {
             SurfaceMap surface = surface(n.get("surface"));
 
             JsonNode a = n.get("atmosphere");
+            Double mixedLayer = opt(a, "mixed_layer_depth_m");
+            Double jump = opt(a, "inversion_K");
+            Double jumpDepth = opt(a, "inversion_depth_m");
+            if (mixedLayer == null && (jump != null || jumpDepth != null)) {
+                problem("atmosphere.mixed_layer_depth_m", "atmosphere: inversion_K and inversion_depth_m describe the inversion on top of "
+                        + "a mixed layer; give atmosphere.mixed_layer_depth_m too (or remove them for constant N)");
+            }
+            ThetaProfile layers = null;
+            if (mixedLayer != null) {
+                layers = new ThetaProfile.Layered(d(a, "surface_theta_K"), mixedLayer, jump == null ? 0.0 : jump,
+                        jumpDepth == null ? 100.0 : jumpDepth, d(a, "buoyancy_frequency_per_s"));
+            }
             Scenario.Atmosphere atm = new Scenario.Atmosphere(d(a, "surface_theta_K"), d(a, "buoyancy_frequency_per_s"),
                     d(a, "surface_mixing_ratio_g_per_kg") / 1000.0, d(a, "mixing_ratio_gradient_g_per_kg_per_km") / 1e6,
-                    d(a, "surface_pressure_hPa") * 100.0);
+                    d(a, "surface_pressure_hPa") * 100.0, layers);
 
             JsonNode w = n.get("ambient_wind");
             double[] en = Coast.eastNorthFromDirection(d(w, "speed_m_per_s"), d(w, "from_deg"));

@@ -66,7 +66,16 @@ public final class ScenarioSchema {
 
     static final Field ATMOSPHERE = section("atmosphere", Presence.DEFAULTED, "The horizontally uniform basic state.",
             pos("surface_theta_K", "K", 250, 330, 293.15, "Potential temperature at the ground."),
-            pos("buoyancy_frequency_per_s", "1/s", 0, 0.05, 0.01, "Brunt-Vaisala frequency N (constant with height)."),
+            pos("buoyancy_frequency_per_s", "1/s", 0, 0.05, 0.01, "Brunt-Vaisala frequency N: constant with height, or, with "
+                    + "mixed_layer_depth_m, the N of the free atmosphere above the inversion."),
+            optional(pos("mixed_layer_depth_m", "m", 0, 5000, null, "Depth of a neutral mixed layer at the ground. Given, the basic "
+                    + "state is a sounding of a convective day: the mixed layer, a capping inversion (inversion_K over inversion_depth_m) "
+                    + "and the free atmosphere with N = buoyancy_frequency_per_s. Both models use it; the linear model then solves its "
+                    + "vertical problem with the height-varying N(z) (a banded solve per wavenumber and frequency). Omitted: constant N "
+                    + "from the ground.")),
+            optional(num("inversion_K", "K", 0, 30, null, "Potential-temperature jump across the capping inversion (with "
+                    + "mixed_layer_depth_m; default 0: none).")),
+            optional(pos("inversion_depth_m", "m", 0, 2000, null, "Thickness of the capping inversion (with inversion_K; default 100).")),
             num("surface_mixing_ratio_g_per_kg", "g/kg", 0, 40, 8.0, "Water-vapour mixing ratio at the ground."),
             num("mixing_ratio_gradient_g_per_kg_per_km", "g/kg per km", -20, 5, -2.0, "Vertical gradient of the mixing ratio (negative: drier aloft)."),
             pos("surface_pressure_hPa", "hPa", 500, 1100, 1013.25, "Surface pressure."));
