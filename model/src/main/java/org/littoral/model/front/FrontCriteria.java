@@ -57,7 +57,8 @@ public record FrontCriteria(double onshoreThresholdMPerS, double minJumpMPerS, d
         return onshore + String.format(Locale.ROOT, "; the front is where the near-surface convergence peaks within %s km of the "
                         + "landward edge of the onshore flow connected to the coast, counted only where the mean cross-shore wind "
                         + "drops by >= %s m/s from the %s km behind to the %s km ahead (onshore behind) and theta-v behind is "
-                        + ">= %s K lower; onset at the coast and arrival at a site are the first times the front gets there "
+                        + ">= %s K lower, and only when found at two consecutive output times no more than 10 m/s apart; "
+                        + "onset at the coast and arrival at a site are the first times the front gets there "
                         + "(interpolated between output times), penetration is its farthest position; no front, no onset, "
                         + "arrival or penetration", num(frontWindowM / 1000.0), num(minJumpMPerS), num(sideWindowM / 1000.0),
                 num(sideWindowM / 1000.0), num(minThetaVContrastK));

@@ -96,7 +96,30 @@ public final class FrontTracker {
                 front[n] = x[best] + subgridOffset(u, x, best) ;
             }
         }
-        return new FrontTrack(s, c, reach, reachAtLimit, front, convergence, jump, contrast, x[iLo], x[iHi]);
+        // (d) a front is a coherent feature: found at two consecutive output times, no faster than MAX_SPEED apart
+        double[] kept = front.clone();
+        double[] t = s.timeH();
+        for (int n = 0; n < nt; n++) {
+            if (Double.isNaN(front[n])) {
+                continue;
+            }
+            boolean before = n > 0 && consistent(front[n - 1], front[n], t[n] - t[n - 1]);
+            boolean after = n + 1 < nt && consistent(front[n], front[n + 1], t[n + 1] - t[n]);
+            if (!before && !after) {
+                kept[n] = Double.NaN;
+            }
+        }
+        return new FrontTrack(s, c, reach, reachAtLimit, kept, convergence, jump, contrast, x[iLo], x[iHi]);
+    }
+
+    /**
+     * Fastest plausible front motion between two output times, m/s: twice the top of the typical 1-5 m/s of
+     * sea-breeze fronts (Simpson 1994, from memory). Candidates farther apart are different features.
+     */
+    public static final double MAX_SPEED_M_PER_S = 10.0;
+
+    private static boolean consistent(double a, double b, double dtH) {
+        return !Double.isNaN(a) && !Double.isNaN(b) && Math.abs(b - a) <= MAX_SPEED_M_PER_S * dtH * 3600.0;
     }
 
     /**

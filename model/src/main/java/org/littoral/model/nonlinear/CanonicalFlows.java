@@ -165,7 +165,8 @@ public final class CanonicalFlows {
 
     /**
      * A sea breeze on a coarse grid (2 km, 320 km domain, 40 layers to 5 km) with a prescribed land
-     * heat flux (250 W/m2 peak, Bowen ratio 1), 06-16 solar h, under a geostrophic wind.
+     * heat flux (250 W/m2 peak from 06 solar h, Bowen ratio 1) under a geostrophic wind; like a scenario run, it starts
+     * 2 h before the heating from the balanced boundary layer, so the coast has adjusted before the land heats.
      */
     public static NonlinearSolution coarseSeaBreeze(double latitudeDeg, double geostrophicSpeed, double fromDeg, double endSolarHours) {
         NonlinearConfig c = NonlinearConfig.builder(new Coast(latitudeDeg, 0.0, 0.0, 270.0, 172),
@@ -173,7 +174,7 @@ public final class CanonicalFlows {
                         VerticalGrid.stretched(41, 5000.0, 30.0))
                 .geostrophicWind(geostrophicSpeed, fromDeg)
                 .forcing(new Forcing.PrescribedSurfaceFlux(250.0, 6.0, 18.0, 0.0))
-                .solarHours(6.0, endSolarHours).outputIntervalS(900.0).build();
+                .solarHours(4.0, endSolarHours).outputIntervalS(900.0).build();
         return NonlinearModel.run(c);
     }
 

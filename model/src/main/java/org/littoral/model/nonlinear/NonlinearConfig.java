@@ -32,6 +32,7 @@ import org.littoral.model.grid.VerticalGrid;
  * @param initialThetaPerturbationK theta - theta_0 at the start, K (tests; usually zero)
  * @param initialUPerturbationMPerS u - Ug at the start, m/s (tests; usually zero)
  * @param initialMixingRatioPerturbation r - r_0 at the start, kg/kg (tests; usually zero)
+ * @param initialWind the wind the run starts from (null: {@link InitialWind#BALANCED_BOUNDARY_LAYER})
  */
 public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xGrid, VerticalGrid zInterfaces,
                               ThetaProfile theta, double surfaceMixingRatio, double mixingRatioGradientPerM,
@@ -39,7 +40,7 @@ public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xG
                               double startSolarHours, double endSolarHours, double outputIntervalS, Forcing forcing,
                               Switches switches, Damping damping, BoundaryLayer boundaryLayer, Numerics numerics,
                               ScalarField initialThetaPerturbationK, ScalarField initialUPerturbationMPerS,
-                              ScalarField initialMixingRatioPerturbation) {
+                              ScalarField initialMixingRatioPerturbation, InitialWind initialWind) {
 
     public NonlinearConfig {
         if (coast == null || surface == null || xGrid == null || zInterfaces == null || theta == null || forcing == null
@@ -76,6 +77,23 @@ public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xG
         if (initialMixingRatioPerturbation == null) {
             initialMixingRatioPerturbation = ScalarField.ZERO;
         }
+        if (initialWind == null) {
+            initialWind = InitialWind.BALANCED_BOUNDARY_LAYER;
+        }
+    }
+
+    /** The wind a run starts from (before any {@code initialUPerturbationMPerS}). */
+    public enum InitialWind {
+        /**
+         * Each column starts in the steady boundary layer of its surface: the geostrophic wind slowed and turned
+         * by the surface drag and the turbulent mixing of the start time, where Coriolis, drag and mixing balance
+         * (the steady Ekman layer, Ekman 1905, solved on the model's own levels with its own K-profile and drag;
+         * {@link EkmanBalance}). The far-field columns that feed the sponges start from the same state. Without
+         * mixing this is the geostrophic wind.
+         */
+        BALANCED_BOUNDARY_LAYER,
+        /** The geostrophic wind (Ug, Vg) at every level: a near-surface wind out of balance with the drag. */
+        GEOSTROPHIC
     }
 
     /** Geostrophic wind in model axes: {Ug (cross-shore, onshore +), Vg (alongshore +y)}, via {@link Coast}. */
@@ -266,6 +284,7 @@ public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xG
         private ScalarField thetaPerturbation = ScalarField.ZERO;
         private ScalarField uPerturbation = ScalarField.ZERO;
         private ScalarField rPerturbation = ScalarField.ZERO;
+        private InitialWind initialWind = InitialWind.BALANCED_BOUNDARY_LAYER;
 
         private Builder(Coast coast, SurfaceMap surface, HorizontalGrid xGrid, VerticalGrid zInterfaces) {
             this.coast = coast;
@@ -347,10 +366,16 @@ public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xG
             return this;
         }
 
+        public Builder initialWind(InitialWind w) {
+            this.initialWind = w;
+            return this;
+        }
+
         public NonlinearConfig build() {
             return new NonlinearConfig(coast, surface, xGrid, zInterfaces, theta, surfaceMixingRatio, mixingRatioGradientPerM,
                     surfacePressurePa, geostrophicSpeed, geostrophicFromDeg, startSolarHours, endSolarHours, outputIntervalS,
-                    forcing, switches, damping, boundaryLayer, numerics, thetaPerturbation, uPerturbation, rPerturbation);
+                    forcing, switches, damping, boundaryLayer, numerics, thetaPerturbation, uPerturbation, rPerturbation,
+                    initialWind);
         }
     }
 }

@@ -431,17 +431,81 @@ public final class NonlinearModel {
         ScalarField thp = cfg.initialThetaPerturbationK();
         ScalarField up = cfg.initialUPerturbationMPerS();
         ScalarField qp = cfg.initialMixingRatioPerturbation();
+        double t0 = cfg.startSolarHours() * 3600.0;
+        // the wind of each column's own steady boundary layer (one balance per surface segment), or geostrophic
+        double[][] colU = new double[nx][];
+        double[][] colV = new double[nx][];
+        java.util.Map<SurfaceSegment, double[][]> bySegment = new java.util.IdentityHashMap<>();
+        for (int i = 0; i < nx; i++) {
+            int col = i;
+            double[][] b = bySegment.computeIfAbsent(segment[i], s -> balancedWind(col, t0));
+            colU[i] = b[0];
+            colV[i] = b[1];
+        }
         for (int k = 0; k < nz; k++) {
             for (int i = 0; i < nx; i++) {
                 int n = k * nx + i;
-                u[n] = ug + up.at(g.xc[i] - 0.5 * g.dx, g.zc[k]);
-                v[n] = vg;
+                // u at the west face of cell i: between the columns i - 1 and i
+                u[n] = 0.5 * (colU[g.im1[i]][k] + colU[i][k]) + up.at(g.xc[i] - 0.5 * g.dx, g.zc[k]);
+                v[n] = colV[i][k];
                 th[n] = th0[k] + thp.at(g.xc[i], g.zc[k]);
                 q[n] = Math.max(0.0, q0[k] + qp.at(g.xc[i], g.zc[k]));
             }
         }
+        if (farLeft != null) {
+            farLeft.startFrom(colU[farLeft.i], colV[farLeft.i]);
+            farRight.startFrom(colU[farRight.i], colV[farRight.i]);
+        }
         project(1.0);
         phiScale = 0.0; // no pressure before the first step
+    }
+
+    /**
+     * The steady boundary-layer wind {u, v} of column i at time t ({@link NonlinearConfig.InitialWind}): the
+     * geostrophic wind without mixing or with {@link NonlinearConfig.InitialWind#GEOSTROPHIC}; otherwise the
+     * {@link EkmanBalance} of the column's surface drag and K-profile at the background theta and r and the start
+     * depth h, iterated until the drag (which depends on the wind it makes) settles.
+     */
+    private double[][] balancedWind(int i, double t) {
+        double[] ub = new double[nz];
+        double[] vb = new double[nz];
+        java.util.Arrays.fill(ub, ug);
+        java.util.Arrays.fill(vb, vg);
+        if (!cfg.switches().mixing() || cfg.initialWind() == NonlinearConfig.InitialWind.GEOSTROPHIC) {
+            return new double[][] {ub, vb};
+        }
+        double alpha = cfg.damping().rayleighFrictionPerS();
+        double[] damp = new double[nz];
+        for (int k = 0; k < nz; k++) {
+            damp[k] = alpha + rTopC[k];
+        }
+        ColumnSurfaceFluxes one = cfg.forcing() instanceof Forcing.SurfaceEnergyBalance seb
+                ? new ColumnSurfaceFluxes(cfg.surface(), new double[] {g.xc[i]}, cfg.coast(), seb.partition()) : null;
+        double[] kI = new double[nz + 1];
+        double[] fl = new double[3];
+        double drag = Double.NaN;
+        for (int it = 0; it < 60; it++) {
+            double spd = Math.max(0.5, Math.hypot(ub[0], vb[0]));
+            if (one != null) {
+                one.compute(t, ((Forcing.SurfaceEnergyBalance) cfg.forcing()).cloudFraction(), new double[] {spd}, g.zc[0],
+                        new double[] {th0[0]}, new double[] {q0[0]}, surfacePressure);
+                fl[0] = one.kinematicHeatFluxKMs()[0];
+                fl[2] = one.dragCoefficient()[0];
+            } else {
+                fluxes(i, t, spd, th0[0], q0[0], fl);
+            }
+            kProfile(fl[0], spd, fl[2], h[i], kI, 0, 1);
+            double d = fl[2] * spd;
+            // under-relaxed: the drag and the wind it makes settle together
+            double next = Double.isNaN(drag) ? d : 0.5 * (drag + d);
+            boolean settled = !Double.isNaN(drag) && Math.abs(next - drag) <= 1e-6 * Math.max(next, 1e-6);
+            drag = next;
+            EkmanBalance.solve(g.dzf, g.dzc, kI, drag, f, damp, ug, vg, ub, vb);
+            if (settled) {
+                break;
+            }
+        }
+        return new double[][] {ub, vb};
     }
 
     // ---------------------------------------------------------------- step control
@@ -1305,15 +1369,19 @@ public final class NonlinearModel {
     }
 
     /**
-     * The undisturbed far field over the surface at each end of the domain: a single column with the
-     * same surface flux, slab mixed layer and K-profile mixing but no circulation (ambient wind for the
-     * friction velocity). The lateral sponges relax theta and r toward it: a reference that evolves
-     * with the local heating yet cannot feed back on the circulation.
+     * The undisturbed far field over the surface at each end of the domain: a single column with the same
+     * surface fluxes, slab mixed layer, K-profile mixing, drag, Coriolis and damping but no circulation. It starts
+     * from the same balanced state as the domain and then follows the day (the boundary layer deepens, mixes
+     * momentum down, and turns with the inertial oscillation of its changing friction). The lateral sponges relax
+     * u, v, theta and r toward it: a reference that evolves with the local physics yet cannot feed back on the
+     * circulation.
      */
     private final class FarFieldColumn {
         final int i;
         final double[] thRef = new double[nz];
         final double[] qRef = new double[nz];
+        final double[] uRef = new double[nz];
+        final double[] vRef = new double[nz];
         double hRef;
         final double[] flRef = new double[3];
         final ColumnSurfaceFluxes eb1;
@@ -1325,13 +1393,20 @@ public final class NonlinearModel {
             this.i = i;
             System.arraycopy(th0, 0, thRef, 0, nz);
             System.arraycopy(q0, 0, qRef, 0, nz);
+            java.util.Arrays.fill(uRef, ug);
+            java.util.Arrays.fill(vRef, vg);
             hRef = land[i] ? cfg.boundaryLayer().initialDepthM() : cfg.boundaryLayer().marineDepthM();
             eb1 = cfg.forcing() instanceof Forcing.SurfaceEnergyBalance seb
                     ? new ColumnSurfaceFluxes(cfg.surface(), new double[] {g.xc[i]}, cfg.coast(), seb.partition()) : null;
         }
 
+        void startFrom(double[] u0, double[] v0) {
+            System.arraycopy(u0, 0, uRef, 0, nz);
+            System.arraycopy(v0, 0, vRef, 0, nz);
+        }
+
         void step(double t, double dt) {
-            double spd = Math.max(0.5, Math.hypot(ug, vg));
+            double spd = Math.max(0.5, Math.hypot(uRef[0], vRef[0]));
             double[] fl = flRef;
             if (eb1 != null) {
                 one1[0] = spd;
@@ -1363,6 +1438,23 @@ public final class NonlinearModel {
                 solveColumn(thRef, 0, 1, dt, fl[0], 0.0, cg * fl[0]);
                 solveColumn(qRef, 0, 1, dt, fl[1], 0.0, cg * fl[1]);
                 qRef[0] = Math.max(0.0, qRef[0]);
+                // momentum: the same K, and the implicit drag C_D |V| on the lowest layer
+                solveColumn(uRef, 0, 1, dt, 0.0, fl[2] * spd, 0.0);
+                solveColumn(vRef, 0, 1, dt, 0.0, fl[2] * spd, 0.0);
+            }
+            // Coriolis and Rayleigh friction about the geostrophic wind, trapezoidal in time (the rotation is neutral):
+            // W - Wg -> (W - Wg) (1 - c dt/2) / (1 + c dt/2), c = alpha + i f
+            double a = 0.5 * dt * cfg.damping().rayleighFrictionPerS();
+            double b = 0.5 * dt * f;
+            double den = (1 + a) * (1 + a) + b * b;
+            // (1 - a - i b) / (1 + a + i b) = [(1 - a)(1 + a) - b^2 - i 2b] / den
+            double gRe = ((1 - a) * (1 + a) - b * b) / den;
+            double gIm = -2 * b / den;
+            for (int k = 0; k < nz; k++) {
+                double du = uRef[k] - ug;
+                double dv = vRef[k] - vg;
+                uRef[k] = ug + gRe * du - gIm * dv;
+                vRef[k] = vg + gRe * dv + gIm * du;
             }
             // the same damping layer aloft as the domain, so the sponge corners agree
             for (int k = 0; k < nz; k++) {
@@ -1370,6 +1462,8 @@ public final class NonlinearModel {
                 if (rt > 0) {
                     thRef[k] = (thRef[k] + rt * th0[k]) / (1.0 + rt);
                     qRef[k] = (qRef[k] + rt * q0[k]) / (1.0 + rt);
+                    uRef[k] = (uRef[k] + rt * ug) / (1.0 + rt);
+                    vRef[k] = (vRef[k] + rt * vg) / (1.0 + rt);
                 }
             }
         }
@@ -1382,8 +1476,8 @@ public final class NonlinearModel {
      */
     private void sponges(double dt) {
         boolean lateral = cfg.damping().lateralSpongeWidthM() > 0;
-        relaxCentres(u, dt, rLatU, iLeftU, iRightU, lateral, ug);
-        relaxCentres(v, dt, rLatC, iLeftC, iRightC, lateral, vg);
+        relaxWind(u, dt, rLatU, lateral, ug, farLeft == null ? null : farLeft.uRef, farRight == null ? null : farRight.uRef);
+        relaxWind(v, dt, rLatC, lateral, vg, farLeft == null ? null : farLeft.vRef, farRight == null ? null : farRight.vRef);
         relaxScalar(th, th0, farLeft == null ? null : farLeft.thRef, farRight == null ? null : farRight.thRef, dt, lateral);
         relaxScalar(q, q0, farLeft == null ? null : farLeft.qRef, farRight == null ? null : farRight.qRef, dt, lateral);
         for (int k = 1; k < nz; k++) {
@@ -1397,15 +1491,30 @@ public final class NonlinearModel {
         }
     }
 
-    /** Velocities: toward the ambient value both aloft and in the lateral sponges (a fixed reference, no feedback). */
-    private void relaxCentres(double[] s, double dt, double[] rLat, int il, int ir, boolean lateral, double ambient) {
+    /**
+     * Horizontal wind: aloft toward the geostrophic value, in the lateral sponges toward the far-field column of
+     * that end (its own boundary layer over that surface; an independent reference, so no feedback).
+     */
+    private void relaxWind(double[] s, double dt, double[] rLat, boolean lateral, double ambient, double[] refLeft,
+                           double[] refRight) {
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             double rt = dt * rTopC[k];
+            if (rt > 0) {
+                for (int i = 0; i < nx; i++) {
+                    s[o + i] = (s[o + i] + rt * ambient) / (1.0 + rt);
+                }
+            }
+            if (!lateral) {
+                continue;
+            }
+            double left = refLeft[k];
+            double right = refRight[k];
             for (int i = 0; i < nx; i++) {
-                double r = rt + (lateral ? dt * rLat[i] : 0.0);
-                if (r > 0) {
-                    s[o + i] = (s[o + i] + r * ambient) / (1.0 + r);
+                double rl = dt * rLat[i];
+                if (rl > 0) {
+                    double ref = i < nx / 2 ? left : right;
+                    s[o + i] = (s[o + i] + rl * ref) / (1.0 + rl);
                 }
             }
         }
@@ -1486,6 +1595,7 @@ public final class NonlinearModel {
         float[] fq = new float[nc];
         float[] fp = new float[nc];
         float[] fh = new float[nx];
+        float[] fs = new float[nx];
         for (int k = 0; k < nz; k++) {
             int o = k * nx;
             for (int i = 0; i < nx; i++) {
@@ -1500,7 +1610,8 @@ public final class NonlinearModel {
         }
         for (int i = 0; i < nx; i++) {
             fh[i] = (float) h[i];
+            fs[i] = (float) (heatFluxKin[i] * surfaceRho * Thermo.CP);
         }
-        sol.add(new NonlinearSolution.Stored(t, fu, fv, fw, ft, fq, fp, fh));
+        sol.add(new NonlinearSolution.Stored(t, fu, fv, fw, ft, fq, fp, fh, fs));
     }
 }

@@ -20,8 +20,12 @@ public final class NonlinearSolution implements BreezeSolution {
     private boolean complete;
     private long stepsTaken;
 
-    /** One stored time: fields flattened a[k * nx + i], mixed-layer depth per column. */
-    record Stored(double timeSec, float[] u, float[] v, float[] w, float[] theta, float[] r, float[] p, float[] h) {
+    /**
+     * One stored time: fields flattened a[k * nx + i]; mixed-layer depth and surface sensible heat flux (W/m2, of
+     * the step that ended here; zero at the start) per column.
+     */
+    record Stored(double timeSec, float[] u, float[] v, float[] w, float[] theta, float[] r, float[] p, float[] h,
+                  float[] sensibleHeatFluxWm2) {
     }
 
     NonlinearSolution(double[] xM, double[] zM, Background background) {
@@ -126,6 +130,21 @@ public final class NonlinearSolution implements BreezeSolution {
         Stored b = stored.get(hi);
         double wb = b.timeSec() > a.timeSec() ? (timeSec - a.timeSec()) / (b.timeSec() - a.timeSec()) : 1.0;
         return lerp(a.h(), b.h(), Math.max(0, Math.min(1, wb)));
+    }
+
+    /** Surface sensible heat flux per column at the stored time nearest to t (upward positive), W/m2 (allocates). */
+    public double[] sensibleHeatFluxWm2(double timeSec) {
+        Stored best = stored.get(0);
+        for (Stored st : stored) {
+            if (Math.abs(st.timeSec() - timeSec) < Math.abs(best.timeSec() - timeSec)) {
+                best = st;
+            }
+        }
+        double[] out = new double[xM.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = best.sensibleHeatFluxWm2()[i];
+        }
+        return out;
     }
 
     List<Stored> stored() {

@@ -165,6 +165,19 @@ class FrontTrackTest {
     }
 
     @Test
+    void aFrontSeenAtOneOutputTimeOnlyIsNoFront() {
+        // the prescribed front exists from 10:00, but its contrast is there only at 11:00: a passing blip, not a front
+        NearSurfaceSection s = STANDARD.section(true);
+        for (int n = 0; n < s.times(); n++) {
+            if (Math.abs(s.timeH()[n] - 11.0) > 1e-9) {
+                java.util.Arrays.fill(s.thetaVK()[n], 300.0);
+            }
+        }
+        FrontTrack tr = FrontTracker.track(s, FrontCriteria.standard(0.5));
+        assertFalse(tr.maxPenetration().exists(), tr.maxPenetration().toString());
+    }
+
+    @Test
     void arrivalTimesNeverDecreaseWithDistanceInland() {
         FrontTrack tr = FrontTracker.track(STANDARD.section(true), FrontCriteria.standard(0.5));
         double prev = Double.NEGATIVE_INFINITY;

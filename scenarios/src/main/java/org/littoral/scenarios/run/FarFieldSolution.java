@@ -9,7 +9,7 @@ import org.littoral.model.nonlinear.NonlinearSolution;
 /**
  * A nonlinear run with the far-field reference its breeze is measured against. Near the ground the
  * ambient wind of a nonlinear run is not the geostrophic wind of the background: drag slows and turns it
- * (more over rough land), it spins up from rest through an inertial oscillation, and in a 2D domain the
+ * (more over rough land), it follows the diurnal cycle of mixing (deeper by day) with an inertial oscillation, and in a 2D domain the
  * column-integrated cross-shore flow is the same at every x, so the land's boundary-layer flow also
  * adjusts to the sea's. The reference is therefore the run itself far inland: at each time and level the
  * median over the landward {@link #BAND_M} of the interior (the median, so that resolved convective
@@ -48,6 +48,11 @@ public final class FarFieldSolution implements BreezeSolution {
         }
         this.bandFrom = lo;
         this.bandTo = hi;
+    }
+
+    /** A nonlinear run with its far-field reference (sponges of the given width at each end). */
+    public static FarFieldSolution of(NonlinearSolution run, double spongeM) {
+        return new FarFieldSolution(run, spongeM);
     }
 
     public NonlinearSolution run() {

@@ -83,9 +83,14 @@ public record Scenario(String name, String description, Kind kind, String source
         }
     }
 
+    /** Hours before sunrise at which a nonlinear run starts at the latest (its balanced start, then the coast's adjustment). */
+    public static final double NONLINEAR_LEAD_BEFORE_SUNRISE_H = 2.0;
+
     /**
-     * Span of a nonlinear run, local solar hours: from the earlier of the first output time and the first
-     * launch to the later of the last output time and the end of the last ascent.
+     * Span of a nonlinear run, local solar hours: from the earliest of the first output time, the first launch and
+     * {@link #NONLINEAR_LEAD_BEFORE_SUNRISE_H} before sunrise (so the run starts at night from its balanced boundary
+     * layer and the coast has adjusted before the land heats) to the later of the last output time and the end of the
+     * last ascent.
      */
     public double[] nonlinearSolarSpanHours() {
         List<Double> launches = flights.schedule().launchTimesClockHours();
@@ -96,7 +101,20 @@ public record Scenario(String name, String description, Kind kind, String source
             startClock = Math.min(startClock, launches.get(0));
             endClock = Math.max(endClock, launches.get(launches.size() - 1) + ascentH);
         }
-        return new double[] {coast.solarHoursFromClock(startClock), coast.solarHoursFromClock(endClock)};
+        double start = Math.min(coast.solarHoursFromClock(startClock), sunriseSolarHours() - NONLINEAR_LEAD_BEFORE_SUNRISE_H);
+        return new double[] {start, coast.solarHoursFromClock(endClock)};
+    }
+
+    /** When the land starts to heat, local solar hours: the heating's sunrise, or the sun's for the energy balance. */
+    public double sunriseSolarHours() {
+        if (heating instanceof HeatingSpec.SlabMixedLayer slab) {
+            return slab.sunriseSolarHours();
+        }
+        if (heating instanceof HeatingSpec.ClassicShape c) {
+            return c.sunriseSolarHours();
+        }
+        return org.littoral.model.surface.SolarGeometry.sunriseSolarHours(coast.latitudeDeg(),
+                org.littoral.model.surface.SolarGeometry.declinationRad(coast.dayOfYear()));
     }
 
     /**

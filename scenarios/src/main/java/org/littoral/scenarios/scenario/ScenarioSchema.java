@@ -155,20 +155,21 @@ public final class ScenarioSchema {
             NOISE);
 
     static final Field OUTPUT = section("output", Presence.DEFAULTED, "Times and levels used for the diagnostics, plots and summary.",
-            num("start_h", "h", 0, 48, 0.0, "First output time, local clock hours. kind nonlinear: the model starts from rest at the "
-                    + "earlier of output.start_h and flights.start_h (a later start is a cheaper run)."),
+            num("start_h", "h", 0, 48, 0.0, "First output time, local clock hours. kind nonlinear: the model starts at the earliest of "
+                    + "output.start_h, flights.start_h and 2 h before sunrise, from the balanced boundary layer of each surface."),
             num("end_h", "h", 0, 48, 24.0, "Last output time, local clock hours (more than 24 reaches into the next day). kind nonlinear: "
                     + "the model runs to the later of output.end_h and the end of the last ascent."),
             pos("step_min", "min", 0, 360, 15.0, "Output interval."),
             num("near_surface_m", "m", 0, 1000, 10.0, "Height of the near-surface wind used for onset, arrival and the time-distance section."),
             pos("onshore_threshold_m_per_s", "m/s", 0, 20, 0.5,
-                    "The breeze counts as onshore where its cross-shore wind (the model wind minus the ambient wind) exceeds this."));
+                    "Onshore means the total cross-shore wind and the breeze wind (the model wind minus the ambient wind) both reach "
+                            + "this (docs/fronts.md)."));
 
     /** The whole file. */
     public static final Section ROOT = new Section(List.of(
             text("name", null, "Short identifier of the scenario (used in file names and tables)."),
             text("description", null, "What the scenario shows or which hypothesis it tests."),
             choice("kind", List.of("linear", "nonlinear"), "linear", "Which model runs it: linear (the spectral linear model, periodic in time, seconds) or nonlinear (the 2D "
-                    + "non-hydrostatic model with boundary-layer physics, run forward from rest, tens of seconds to minutes)."),
+                    + "non-hydrostatic model with boundary-layer physics, run forward from a balanced night-time start, tens of seconds to minutes)."),
             COAST, SURFACE, GRID, ATMOSPHERE, AMBIENT, HEATING, PHYSICS, SITES, FLIGHTS, OUTPUT));
 }

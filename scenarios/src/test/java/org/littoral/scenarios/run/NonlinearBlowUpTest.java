@@ -32,8 +32,8 @@ class NonlinearBlowUpTest {
             ambient_wind: {speed_m_per_s: 4, from_deg: 135}
             sites:
               - {name: a, inland_km: 10}
-            flights: {start_h: 7, end_h: 8}
-            output: {start_h: 7, end_h: 9, step_min: 30}
+            flights: {start_h: 5, end_h: 6}
+            output: {start_h: 5, end_h: 7, step_min: 30}
             """;
 
     /** A real blow-up: the same configuration with a wind limit (1 m/s) below the ambient wind (4 m/s). */
@@ -47,7 +47,7 @@ class NonlinearBlowUpTest {
         NonlinearConfig bad = new NonlinearConfig(c.coast(), c.surface(), c.xGrid(), c.zInterfaces(), c.theta(), c.surfaceMixingRatio(),
                 c.mixingRatioGradientPerM(), c.surfacePressurePa(), c.geostrophicSpeedMPerS(), c.geostrophicDirectionFromDeg(),
                 c.startSolarHours(), c.startSolarHours() + hours, c.outputIntervalS(), c.forcing(), c.switches(), c.damping(),
-                c.boundaryLayer(), new NonlinearConfig.Numerics(0.5, 1.0, 300.0, limit), null, null, null);
+                c.boundaryLayer(), new NonlinearConfig.Numerics(0.5, 1.0, 300.0, limit), null, null, null, null);
         return assertThrows(ModelBlowUpException.class, () -> NonlinearModel.run(bad));
     }
 
@@ -57,7 +57,8 @@ class NonlinearBlowUpTest {
         UserInputException u = NonlinearSolver.blowUp(s, realBlowUp(s));
         String m = u.getMessage();
         assertFalse(m.contains("\n"), m);
-        assertTrue(m.startsWith("unstable.yaml: the nonlinear model became unstable at 07:"), m);
+        // the run starts 2 h before sunrise (02:48 local here) and the 1 m/s limit trips at once
+        assertTrue(m.startsWith("unstable.yaml: the nonlinear model became unstable at 02:"), m);
         assertTrue(m.contains("x = ") && m.contains("km from the coast") && m.contains("z = "), m);
         assertTrue(m.contains("try a finer grid.spacing_km"), m);
     }
@@ -91,12 +92,13 @@ class NonlinearBlowUpTest {
         Scenario s = ScenarioFile.parse("unstable.yaml", YAML, false);
         Path old = dir.resolve("summary.json");
         Files.writeString(old, "{\"from\": \"an earlier run\"}");
-        // with a 4.3 m/s limit the growing breeze trips it near 08:57 local (8.84 solar h), after 12 ten-minute snapshots
-        UserInputException thrown = assertThrows(UserInputException.class, () -> new ScenarioRun(s, limited(4.3, 2.0), null).run(dir));
+        // with a 4.3 m/s limit the growing breeze trips it near 06:46 local (6.66 solar h), after 24 ten-minute snapshots
+        // of a run that starts at 02:48 (2 h before sunrise)
+        UserInputException thrown = assertThrows(UserInputException.class, () -> new ScenarioRun(s, limited(4.3, 4.5), null).run(dir));
         String m = thrown.getMessage();
         Path part = dir.resolve(ScenarioRun.PARTIAL_DIR);
         assertFalse(m.contains("\n"), m);
-        assertTrue(m.contains("what it computed up to 08:50 local") && m.contains(part.toString()), m);
+        assertTrue(m.contains("what it computed up to 06:45 local") && m.contains(part.toString()), m);
         assertTrue(m.endsWith("files already in the output folder are kept"), m);
         assertEquals("{\"from\": \"an earlier run\"}", Files.readString(old));
 
@@ -104,19 +106,19 @@ class NonlinearBlowUpTest {
         assertFalse(rec.get("complete").asBoolean());
         assertEquals("u", rec.get("variable").asText());
         double blowUpH = rec.get("blow_up_solar_h").asDouble();
-        assertTrue(blowUpH > 8.5 && blowUpH < 9.0, "blow-up at " + blowUpH);
+        assertTrue(blowUpH > 6.5 && blowUpH < 6.8, "blow-up at " + blowUpH);
         assertTrue(rec.get("snapshots_kept").asInt() >= 10);
 
         // the section holds every output time up to the last snapshot and none after it
         List<String> sec = Files.readAllLines(part.resolve("near_surface_breeze.csv"));
         double lastSection = sec.stream().skip(1).mapToDouble(l -> Double.parseDouble(l.split(",")[0])).max().orElseThrow();
-        assertEquals(8.5, lastSection, 1e-9, "07:00-09:00 every 30 min, cut at the last snapshot before the blow-up");
+        assertEquals(6.5, lastSection, 1e-9, "05:00-07:00 every 30 min, cut at the last snapshot before the blow-up");
         // every kept flight ends before the blow-up, and the flights before it are all there
         List<String> snd = Files.readAllLines(part.resolve("soundings.csv"));
         int timeCol = List.of(snd.get(0).split(",")).indexOf(ProfileColumns.TIME_LOCAL);
         assertTrue(timeCol >= 0, snd.get(0));
         double lastFlight = snd.stream().skip(1).mapToDouble(l -> Double.parseDouble(l.split(",")[timeCol])).max().orElseThrow();
-        assertTrue(lastFlight < blowUpH && lastFlight >= 7.9, "last kept flight at " + lastFlight);
+        assertTrue(lastFlight < blowUpH && lastFlight >= 5.9, "last kept flight at " + lastFlight);
         assertEquals(rec.get("flights_kept").asInt(), snd.stream().skip(1).map(l -> l.split(",")[timeCol]).distinct().count());
         // the last state: every cell, finite
         List<String> state = Files.readAllLines(part.resolve("last_state.csv"));

@@ -193,8 +193,10 @@ class NonlinearScenarioTest {
     void theRunCoversTheOutputWindowAndTheLastAscent() {
         Scenario s = parse("135");
         NonlinearConfig c = s.toNonlinearConfig();
-        // flights start 7 h clock (before output 8 h); the last launch at 18 h climbs 600 m at 2 m/s (5 min); output ends 20 h
-        assertEquals(s.coast().solarHoursFromClock(7.0), c.startSolarHours(), 1e-9);
+        // flights start 7 h clock (before output 8 h), but the run starts 2 h before sunrise, from its balanced boundary
+        // layer; the last launch at 18 h climbs 600 m at 2 m/s (5 min); output ends 20 h
+        assertEquals(Math.min(s.coast().solarHoursFromClock(7.0), s.sunriseSolarHours() - 2.0), c.startSolarHours(), 1e-9);
+        assertTrue(c.startSolarHours() < s.sunriseSolarHours() - 1.99);
         assertEquals(s.coast().solarHoursFromClock(20.0), c.endSolarHours(), 1e-9);
         assertEquals(600.0, c.outputIntervalS(), "snapshots at most 10 min apart");
     }
