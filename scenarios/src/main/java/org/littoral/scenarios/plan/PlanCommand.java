@@ -94,6 +94,12 @@ public final class PlanCommand implements Callable<Integer> {
         }
         Scenario first = probe.scenarioOf(members.get(0));
         checkCandidates(plan, first);
+        List<String> rejected = new ArrayList<>();
+        plan = usableCandidates(plan, first, rejected);
+        for (String r : rejected) {
+            log.println("plan: " + r);
+        }
+        probe = new PlanMemberRunner(plan, solver, null, settings);
         DenseWindow[][] windows = windows(plan, members, probe, threads, log);
         Files.createDirectories(dir);
         checkResumeInputs(plan, model, windows, dir, resume);
@@ -113,6 +119,7 @@ public final class PlanCommand implements Callable<Integer> {
         boolean hasBay = shores.size() >= 3;
         double bayInland = hasBay ? shores.get(shores.size() - 1) / 1000.0 : Double.NaN;
         PlanResult result = PlanResult.build(plan, records, so.failed(), windows, hasBay, bayInland);
+        result.notes.addAll(0, rejected);
         if (so.failed() > 0) {
             result.notes.add(so.failed() + " member(s) failed (see members/*.json); they are left out of every score");
         }
@@ -130,6 +137,70 @@ public final class PlanCommand implements Callable<Integer> {
                         "%.1f", lastM / 1000.0) + " km inland; use nearer candidates or a wider grid");
             }
         }
+    }
+
+    /**
+     * The plan without the candidates no campaign could fly from: over water (the sea, or a bay behind a barrier
+     * strip) or inside the nonlinear model's far-field sponges, where the wind is relaxed towards the ambient state
+     * and no front can be seen. Each left-out distance is described in {@code rejected}; a plan left with no
+     * candidate is an input error.
+     */
+    static PlanSpec usableCandidates(PlanSpec plan, Scenario s, List<String> rejected) {
+        SurfaceMap surface = s.surface();
+        double spongeFromM = s.kind() == Scenario.Kind.NONLINEAR ? s.xGrid().lastM() - Scenario.NONLINEAR_SPONGE_M
+                : Double.POSITIVE_INFINITY;
+        java.util.Map<String, List<String>> water = new java.util.LinkedHashMap<>();
+        List<String> sponge = new ArrayList<>();
+        List<Double> kept = new ArrayList<>();
+        for (double d : plan.candidatesKm()) {
+            double x = d * 1000.0;
+            org.littoral.model.coast.SurfaceSegment seg = surface.at(x);
+            if (!seg.isLand()) {
+                water.computeIfAbsent(String.format(Locale.ROOT, "%s (water, %s)", seg.name(), segmentSpan(seg)),
+                        k -> new ArrayList<>()).add(km(d));
+            } else if (x >= spongeFromM) {
+                sponge.add(km(d));
+            } else {
+                kept.add(d);
+            }
+        }
+        water.forEach((where, ds) -> rejected.add("candidate" + (ds.size() > 1 ? "s " : " ") + String.join(", ", ds)
+                + " km lie" + (ds.size() > 1 ? "" : "s") + " over the " + where + ": no site can stand there; left out"));
+        if (!sponge.isEmpty()) {
+            rejected.add("candidate" + (sponge.size() > 1 ? "s " : " ") + String.join(", ", sponge) + " km lie"
+                    + (sponge.size() > 1 ? "" : "s") + " inside the nonlinear model's far-field sponge (beyond "
+                    + km(spongeFromM / 1000.0) + " km inland), where the flow is relaxed to the ambient wind; left out "
+                    + "(widen grid.points to plan that far)");
+        }
+        if (kept.isEmpty()) {
+            throw new UserInputException("plan file " + plan.ensemble().source() + ": plan.candidates_km: no candidate is left "
+                    + "where a site can stand (" + String.join("; ", rejected) + "); give distances over land inside the domain");
+        }
+        if (kept.size() < plan.sitesPerSet()) {
+            throw new UserInputException("plan file " + plan.ensemble().source() + ": plan.candidates_km: only " + kept.size()
+                    + " candidate(s) over land remain for sets of " + plan.sitesPerSet() + " sites (" + String.join("; ", rejected)
+                    + "); give more candidates over land");
+        }
+        if (kept.size() == plan.candidatesKm().length) {
+            return plan;
+        }
+        double[] k = kept.stream().mapToDouble(Double::doubleValue).toArray();
+        return new PlanSpec(plan.ensemble(), k, plan.sitesPerSet(), plan.cadences(), plan.operatingStartH(),
+                plan.operatingEndH(), plan.maxFlightsPerSite(), plan.ceilingM(), plan.criteria(), plan.top(), plan.model(),
+                plan.pilotMembers());
+    }
+
+    private static String segmentSpan(org.littoral.model.coast.SurfaceSegment seg) {
+        boolean from = Double.isFinite(seg.fromM());
+        boolean to = Double.isFinite(seg.toM());
+        if (from && to) {
+            return km(seg.fromM() / 1000.0) + "-" + km(seg.toM() / 1000.0) + " km";
+        }
+        return from ? "beyond " + km(seg.fromM() / 1000.0) + " km" : "seaward of " + km(seg.toM() / 1000.0) + " km";
+    }
+
+    private static String km(double v) {
+        return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.1f", v);
     }
 
     /** Automatic dense windows from the pilot members' arrival times (fixed windows need no pilot). */
