@@ -12,7 +12,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.model.surface.SolarGeometry;
 import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;
 import org.littoral.scenarios.sweep.MemberStore;
@@ -41,7 +43,9 @@ public final class CheckTimingCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: out/check-timing/<date>).")
     Path out;
 
-    @Option(names = "--model", paramLabel = "MODEL", description = "Override the day file's ensemble model: linear (quick look) or nonlinear.")
+    @Option(names = "--model", paramLabel = "MODEL", description = "Override the day file's ensemble model: nonlinear (fronts; "
+            + "the default, on the 200 x 2 km ensemble grid) or linear (a quick look: its times are the onset of onshore flow, "
+            + "shown but never used to flag a passage).")
     String model;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads for the ensemble (default: all cores).")
@@ -56,7 +60,7 @@ public final class CheckTimingCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        DaySpec spec = DayFile.read(day);
+        DaySpec spec = DayFile.read(day, model);
         Path dir = out != null ? out : Path.of("out", "check-timing", spec.date());
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
         CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null, columns),
@@ -86,8 +90,8 @@ public final class CheckTimingCommand implements Callable<Integer> {
             if (threads < 1) {
                 throw new UserInputException("--threads must be at least 1; got " + threads);
             }
-            if (model != null && !List.of("linear", "nonlinear").contains(model)) {
-                throw new UserInputException("--model " + model + " is not one of [linear, nonlinear]");
+            if (model != null) {
+                JobModel.check("--model", model);
             }
         }
 
@@ -99,14 +103,17 @@ public final class CheckTimingCommand implements Callable<Integer> {
 
     /** Entry point for other commands (e.g. {@code littoral demo}): reads the files, runs, writes, returns the paths. */
     public static CheckTimingResult run(Path passagesFile, Path dayFile, Path dir, Options opt) throws IOException {
-        return run(DayFile.read(dayFile), passagesFile, dir, opt, Solver.standard());
+        return run(DayFile.read(dayFile, opt.model()), passagesFile, dir, opt, Solver.standard());
     }
 
     /** As {@link #run(Path, Path, Path, Options)} with a parsed day and a given solver (tests, validation). */
     public static CheckTimingResult run(DaySpec spec, Path passagesFile, Path dir, Options opt, Solver solver) throws IOException {
         long t0 = System.nanoTime();
         String model = opt.model() != null ? opt.model() : spec.model();
+        // a day parsed for the other model keeps its grid (read the file with DayFile.read(file, model) to get that
+        // model's grid defaults); the kind alone decides which model solves the members
         spec.ensemble().base().put("kind", model);
+        boolean linear = model.equals("linear");
         PassageTable.Read obs = PassageTable.read(passagesFile, spec, opt.columns());
 
         double[] xM = distances(spec);
@@ -165,7 +172,21 @@ public final class CheckTimingCommand implements Callable<Integer> {
         // than any plausible onset" also allows the front to run from there at the fastest plausible speed.
         TimingInputs.DayConditions dc = spec.conditions();
         List<String> notes = new ArrayList<>(obs.notes());
-        if (Double.isNaN(dc.earliestOnsetHours())) {
+        TimingInputs.Settings settings = spec.settings();
+        if (linear) {
+            settings.envelopeFlags = false;
+            notes.add("linear quick look: the envelope is the " + JobModel.LINEAR_TIMES + ", shown beside the observed "
+                    + "passages but never used to flag one; only the density-current and flight-time checks can flag "
+                    + "(run with --model nonlinear for the front)");
+        }
+        if (Double.isNaN(dc.earliestOnsetHours()) && linear) {
+            double rise = sunriseClockH(spec);
+            if (Double.isFinite(rise)) {
+                dc = withEarliestOnset(dc, rise);
+                notes.add("earliest plausible onset at the coast: sunrise, " + TimingCheck.clock(rise) + " local (Cooper 1969 "
+                        + "declination): the land must heat before a breeze can start (front.earliest_onset_h not given)");
+            }
+        } else if (Double.isNaN(dc.earliestOnsetHours())) {
             double first = Double.POSITIVE_INFINITY;
             for (double o : onsets) {
                 if (Double.isFinite(o)) {
@@ -173,13 +194,12 @@ public final class CheckTimingCommand implements Callable<Integer> {
                 }
             }
             if (Double.isFinite(first)) {
-                dc = new TimingInputs.DayConditions(dc.day(), dc.crossShoreWindMPerS(), dc.thetaVContrastK(),
-                        dc.contrastUncertaintyK(), dc.thetaVK(), dc.breezeDepthM(), dc.depthUncertaintyM(), dc.totalDepthM(), first);
+                dc = withEarliestOnset(dc, first);
                 notes.add("earliest plausible onset at the coast: " + TimingCheck.clock(first) + ", the earliest onset of the "
                         + arrivals.size() + " ensemble members (front.earliest_onset_h not given)");
             }
         }
-        TimingCheck.Result check = new TimingCheck(spec.settings()).check(dc, obs.passages(), flights, envelopes);
+        TimingCheck.Result check = new TimingCheck(settings).check(dc, obs.passages(), flights, envelopes);
         double[] speed = DensityCurrent.plausibleSpeedRangeMPerS(spec.conditions().thetaVContrastK(),
                 spec.conditions().contrastUncertaintyK(), spec.conditions().thetaVK(), spec.conditions().breezeDepthM(),
                 spec.conditions().depthUncertaintyM(), spec.conditions().totalDepthM(), spec.conditions().crossShoreWindMPerS(),
@@ -191,6 +211,22 @@ public final class CheckTimingCommand implements Callable<Integer> {
         CheckTimingOutputs.Inputs in = new CheckTimingOutputs.Inputs(spec, passagesFile, obs, modelName, xM, arrivals, onsets,
                 envelopes, check, speed, notes, so, wall);
         return CheckTimingOutputs.write(dir, in);
+    }
+
+    private static TimingInputs.DayConditions withEarliestOnset(TimingInputs.DayConditions dc, double onsetH) {
+        return new TimingInputs.DayConditions(dc.day(), dc.crossShoreWindMPerS(), dc.thetaVContrastK(), dc.contrastUncertaintyK(),
+                dc.thetaVK(), dc.breezeDepthM(), dc.depthUncertaintyM(), dc.totalDepthM(), onsetH);
+    }
+
+    /** Sunrise on the day's coast, local clock hours (geometric sun centre; NaN in polar day or night). */
+    static double sunriseClockH(DaySpec spec) {
+        org.littoral.model.coast.Coast c = spec.base().coast();
+        double decl = SolarGeometry.declinationRad(c.dayOfYear());
+        double half = SolarGeometry.sunsetHourAngleRad(c.latitudeDeg(), decl);
+        if (!(half > 0) || !(half < Math.PI)) {
+            return Double.NaN;
+        }
+        return c.clockHoursFromSolar(SolarGeometry.sunriseSolarHours(c.latitudeDeg(), decl));
     }
 
     /** Site distances first, then a row of distances for the fan chart from the coast to beyond the farthest site. */

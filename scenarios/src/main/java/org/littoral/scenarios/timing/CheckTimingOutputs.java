@@ -11,11 +11,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.littoral.scenarios.report.ClockTime;
 import org.littoral.scenarios.report.FanChartFigure;
 import org.littoral.scenarios.report.HtmlReport;
 import org.littoral.scenarios.report.Marker;
 import org.littoral.scenarios.report.Table;
 import org.littoral.scenarios.report.TableWriter;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.sweep.SweepExecutor;
 
 /** Writes the outputs of a timing check (flags.csv, envelope.csv, summary.json, the fan chart, report.html), atomically. */
@@ -46,9 +48,106 @@ final class CheckTimingOutputs {
         Path summary = dir.resolve("summary.json");
         TableWriter.writeJsonValue(summary(spec, in, flags, envelope), summary);
         Path html = dir.resolve("report.html");
-        report(spec, in, flags, envelope, fig, caption).write(html);
+        Table flagsView = flagsView(spec, check);
+        Table envelopeView = envelopeView(spec, in);
+        String flagsCaption = flagsCaption(spec, in);
+        report(spec, in, flagsView, envelopeView, flagsCaption, fig, caption).write(html);
         return new CheckTimingResult(dir, flagsCsv, envCsv, summary, png, html, check, fig, caption, flags, envelope,
-                in.arrivals().size(), in.outcome().failed(), in.model(), in.wallSeconds());
+                in.arrivals().size(), in.outcome().failed(), in.model(), in.wallSeconds(), flagsView, envelopeView, flagsCaption,
+                envelopeCaption(in), in.notes());
+    }
+
+    /** What a reader of the flags sees: one row per flag, times as HH:MM. */
+    static Table flagsView(DaySpec spec, TimingCheck.Result check) {
+        Table t = Table.of("site", "km inland", "passage", "observed", "flag", "evidence favours", "reason");
+        for (TimingFlag f : check.flags()) {
+            DaySpec.Site s = spec.site(f.site());
+            t.row(f.site(), s == null ? null : s.inlandKm(), f.label().replace('_', ' '), ClockTime.hhmm(f.observedHours()),
+                    flagName(f.kind()), f.favoured().isEmpty() ? null : f.favoured() + " (" + ClockTime.hhmm(f.suggestedTimeHours())
+                            + ")", f.reason());
+        }
+        return t.decimals("km inland", 1);
+    }
+
+    /** A flag kind as words ("outside the envelope"). */
+    static String flagName(TimingFlag.Kind k) {
+        return switch (k) {
+            case EARLIER_THAN_ANY_PLAUSIBLE_ONSET -> "earlier than any plausible onset";
+            case INLAND_BEFORE_COAST -> "inland before coast";
+            case IMPLIED_SPEED_IMPLAUSIBLE -> "implied speed implausible";
+            case ONE_CADENCE_OFF -> "one flight off";
+            case OUTSIDE_ENVELOPE -> "outside the ensemble envelope";
+        };
+    }
+
+    /**
+     * The caption of the flags, computed from them so that it can never contradict the table: how many passages were
+     * checked, how many flags were raised and of which kinds, and what the envelope may flag.
+     */
+    static String flagsCaption(DaySpec spec, Inputs in) {
+        TimingCheck.Result check = in.check();
+        int n = check.passages().size();
+        String evidence = JobModel.isLinear(in.model())
+                ? "the density-current speed between the sites and the flight times (the linear envelope is the "
+                        + JobModel.LINEAR_TIMES + " and never flags a passage on its own)"
+                : "the " + in.model() + " ensemble's front arrivals, the density-current speed between the sites and the flight times";
+        if (check.flags().isEmpty()) {
+            return String.format(Locale.ROOT, "No flag: each of the %d passage(s) checked on %s is consistent with %s.", n,
+                    spec.date(), evidence);
+        }
+        java.util.Map<String, Integer> kinds = new java.util.LinkedHashMap<>();
+        java.util.Set<String> passages = new java.util.LinkedHashSet<>();
+        for (TimingFlag f : check.flags()) {
+            kinds.merge(flagName(f.kind()), 1, Integer::sum);
+            passages.add(f.site() + " " + f.label());
+        }
+        List<String> parts = new ArrayList<>();
+        kinds.forEach((k, c) -> parts.add(c + " " + k));
+        return String.format(Locale.ROOT, "%d flag(s) on %d of the %d passage(s) checked on %s (%s), against %s. A flag is "
+                + "advice: the observed times are never changed.", check.flags().size(), passages.size(), n, spec.date(),
+                String.join(", ", parts), evidence);
+    }
+
+    static String envelopeCaption(Inputs in) {
+        String what = JobModel.isLinear(in.model()) ? "the " + JobModel.LINEAR_TIMES : "the model front's arrival";
+        return "Where each observed sea-breeze passage falls among the ensemble members' times (" + what + ") at its site: "
+                + "percentiles of the members (local time; a member that never arrives counts as later than any time, and a "
+                + "percentile among those reads 'never'), the observed time with its uncertainty, and its percentile (mid-rank).";
+    }
+
+    /** What a reader of the envelope sees: percentiles as HH:MM. */
+    static Table envelopeView(DaySpec spec, Inputs in) {
+        Table t = Table.of("site", "km inland", "members", "members arriving", "5 %", "25 %", "median", "75 %", "95 %",
+                "observed", "percentile", "flags");
+        for (int s = 0; s < spec.sites().size(); s++) {
+            DaySpec.Site site = spec.sites().get(s);
+            double[] e = in.envelopes().get(s).arrivalHours();
+            int arrived = 0;
+            for (double v : e) {
+                arrived += Double.isNaN(v) ? 0 : 1;
+            }
+            TimingCheck.PassageAssessment pa = null;
+            for (TimingCheck.PassageAssessment a : in.check().passages()) {
+                if (a.passage().site().equals(site.name()) && a.passage().label().equals("sea_breeze")) {
+                    pa = a;
+                }
+            }
+            List<String> kinds = new ArrayList<>();
+            for (TimingFlag f : in.check().flags()) {
+                if (f.site().equals(site.name()) && f.label().equals("sea_breeze")) {
+                    kinds.add(flagName(f.kind()));
+                }
+            }
+            t.row(site.name(), site.inlandKm(), e.length, arrived, qc(e, 5), qc(e, 25), qc(e, 50), qc(e, 75), qc(e, 95),
+                    pa == null ? null : ClockTime.hhmmWithin(pa.passage().timeHours(), pa.passage().uncertaintyHours()),
+                    pa == null || Double.isNaN(pa.envelopePercentile()) ? null : round(pa.envelopePercentile()),
+                    kinds.isEmpty() ? null : String.join(", ", kinds));
+        }
+        return t.decimals("km inland", 1).decimals("percentile", 0);
+    }
+
+    private static String qc(double[] e, double pct) {
+        return ClockTime.hhmm(TimingCheck.quantile(e, pct));
     }
 
     static Table flagsTable(DaySpec spec, TimingCheck.Result check) {
@@ -138,9 +237,11 @@ final class CheckTimingOutputs {
                 other.add(row);
             }
         }
+        boolean linear = JobModel.isLinear(in.model());
         FanChartFigure.Builder b = FanChartFigure.builder()
-                .title("Front arrival against distance inland, " + spec.date())
-                .x(xKm, "Distance inland", "km").y("Arrival (local clock time)", "h")
+                .title((linear ? "Onset of onshore flow (linear: no front)" : "Front arrival") + " against distance inland, "
+                        + spec.date())
+                .x(xKm, "Distance inland", "km").y(linear ? "Onset of onshore flow, local time" : "Front arrival, local time", "h")
                 .samples(samples);
         if (!ok.isEmpty()) {
             b.observed("Observed sea breeze, no flag", col(ok, 0), col(ok, 1), col(ok, 2), Marker.CIRCLE, new Color(0x1a1a1a));
@@ -168,10 +269,12 @@ final class CheckTimingOutputs {
     }
 
     static String caption(DaySpec spec, Inputs in) {
-        return String.format(Locale.ROOT, "Model front arrival (near-surface wind entering the onshore sector) against distance "
-                + "inland for %s: median, 25-75 %% and 5-95 %% bands of %d %s-model ensemble members (uncertain inputs drawn "
-                + "as listed in the report), with the observed passage times and their uncertainty (error bars); flagged "
-                + "passages are drawn separately. Vertical lines mark the sites.", spec.date(), in.arrivals().size(), in.model());
+        String what = JobModel.isLinear(in.model()) ? "The " + JobModel.LINEAR_TIMES + " (docs/fronts.md)"
+                : "Model front arrival (docs/fronts.md)";
+        return String.format(Locale.ROOT, "%s against distance inland for %s: median, 25-75 %% and 5-95 %% bands of %d %s-model "
+                + "ensemble members (uncertain inputs drawn as listed in the report), with the observed passage times and their "
+                + "uncertainty (error bars); flagged passages are drawn separately. Vertical lines mark the sites.", what,
+                spec.date(), in.arrivals().size(), in.model());
     }
 
     private static ObjectNode summary(DaySpec spec, Inputs in, Table flags, Table envelope) {
@@ -250,7 +353,8 @@ final class CheckTimingOutputs {
         return r;
     }
 
-    private static HtmlReport report(DaySpec spec, Inputs in, Table flags, Table envelope, FanChartFigure fig, String caption) {
+    private static HtmlReport report(DaySpec spec, Inputs in, Table flags, Table envelope, String flagsCaption,
+                                     FanChartFigure fig, String caption) {
         HtmlReport h = HtmlReport.create("Timing check " + spec.date());
         h.meta("Day file", spec.source()).meta("Passages", in.passagesFile() + " (" + in.observed().format() + ")")
                 .meta("Model", in.model() + ", " + in.arrivals().size() + " ensemble members")
@@ -260,25 +364,18 @@ final class CheckTimingOutputs {
                 + "Check the profiles before changing anything in the data.");
         h.section("Flags");
         if (in.check().flags().isEmpty()) {
-            h.paragraph("No passage time on " + spec.date() + " is flagged: every checked time is consistent with the ensemble "
-                    + "envelope, the density-current speed between sites and the flight times.");
+            h.paragraph(flagsCaption);
         } else {
-            h.paragraph(in.check().flags().size() + " flag(s) on " + spec.date() + ".");
-            h.table("Flags with their reasons (value: hours early for EARLIER_THAN_ANY_PLAUSIBLE_ONSET and INLAND_BEFORE_COAST, "
-                    + "ratio to the nominal density-current speed for IMPLIED_SPEED_IMPLAUSIBLE, hours of the shift for "
-                    + "ONE_CADENCE_OFF, envelope percentile for OUTSIDE_ENVELOPE).", flags);
+            h.table(flagsCaption, flags);
         }
         h.section("Ensemble envelope");
-        if (in.model().startsWith("linear")) {
-            h.caution("Linear model: a quick look.", "The envelope comes from the linear model, whose onshore flow follows the "
-                    + "heating closely and has no front dynamics; on the invented demo campaign its arrival near the coast is "
-                    + "often hours earlier than the prescribed fronts (docs/timing-checks.md). An OUTSIDE_ENVELOPE flag from a "
-                    + "linear ensemble alone is weak evidence; run the ensemble with --model nonlinear for the real answer.");
+        if (JobModel.isLinear(in.model())) {
+            h.caution("Linear model: a quick look.", "Linear theory has no front: the envelope is the " + JobModel.LINEAR_TIMES
+                    + ", which follows the heating closely and is often hours earlier than a front near the coast. It is shown "
+                    + "for reference and never flags a passage on its own; run with --model nonlinear for the front.");
         }
         h.figure(fig, caption);
-        h.table("Ensemble arrival percentiles per site (local clock hours; a member whose front never arrives counts as later "
-                + "than any time, and a percentile that falls among those is left empty) with the observed sea-breeze passage "
-                + "and its percentile in the envelope (mid-rank).", envelope);
+        h.table(envelopeCaption(in), envelope);
         h.subsection("Uncertain inputs");
         h.bullets(spec.describedDraws());
         h.section("Density-current speed");
@@ -296,13 +393,14 @@ final class CheckTimingOutputs {
                 + "Benjamin's (1968, J. Fluid Mech. 31) energy-conserving current plus the ambient wind, over the contrast and "
                 + "depth ranges; the lower end is multiplied by " + spec.settings().retardationMin + " for friction and mixing.");
         if (!in.check().pairs().isEmpty()) {
-            Table pt = Table.of("label", "from_site", "to_site", "implied_m_per_s", "implied_min_m_per_s", "implied_max_m_per_s");
+            Table pt = Table.of("passage", "from site", "to site", "implied speed (m/s)", "lowest (m/s)", "highest (m/s)");
             for (TimingCheck.PairAssessment p : in.check().pairs()) {
-                pt.row(p.label(), p.coastalSite(), p.inlandSite(), p.impliedSpeedMPerS(), p.impliedMinMPerS(),
+                pt.row(p.label().replace('_', ' '), p.coastalSite(), p.inlandSite(), p.impliedSpeedMPerS(), p.impliedMinMPerS(),
                         Double.isFinite(p.impliedMaxMPerS()) ? p.impliedMaxMPerS() : null);
             }
             h.table("Speed implied by the observed passages between neighbouring sites, with its range from the timing "
-                    + "uncertainties.", pt);
+                    + "uncertainties (highest: empty when the time difference is within the uncertainties).",
+                    pt.decimals("implied speed (m/s)", 2).decimals("lowest (m/s)", 2).decimals("highest (m/s)", 2));
         }
         if (!in.notes().isEmpty()) {
             h.section("Notes");

@@ -20,6 +20,7 @@ import java.util.TreeSet;
 import java.util.TreeMap;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
 import org.littoral.scenarios.sweep.ScenarioMemberRunner;
@@ -55,13 +56,24 @@ public final class DayFile {
 
     private final String source;
     private final Path folder;
+    /** The model asked for on the command line (overrides ensemble.model), or null. */
+    private final String modelOverride;
 
-    private DayFile(String source, Path folder) {
+    private DayFile(String source, Path folder, String modelOverride) {
         this.source = source;
         this.folder = folder;
+        this.modelOverride = modelOverride;
     }
 
     public static DaySpec read(Path file) {
+        return read(file, null);
+    }
+
+    /**
+     * Reads a day file; {@code model} ("nonlinear", "linear" or null for the file's choice) decides the model before
+     * the ensemble grid's defaults are set, since the two models have different defaults.
+     */
+    public static DaySpec read(Path file, String model) {
         if (!Files.isRegularFile(file)) {
             throw new UserInputException("day file " + file + " does not exist; give a YAML day file (docs/timing-checks.md)");
         }
@@ -71,7 +83,7 @@ public final class DayFile {
         } catch (UserInputException e) {
             throw new UserInputException("day file " + e.getMessage(), e);
         }
-        return new DayFile(file.toString(), file.toAbsolutePath().getParent()).parse(root);
+        return new DayFile(file.toString(), file.toAbsolutePath().getParent(), model).parse(root);
     }
 
     /** Parses day-file text (tests); relative coast paths resolve against {@code folder} (may be null) and the working folder. */
@@ -87,7 +99,7 @@ public final class DayFile {
         if (n == null || !n.isObject()) {
             throw new UserInputException("day file " + source + ": expected a set of keys (date, coast, ambient_wind, ...)");
         }
-        return new DayFile(source, folder).parse((ObjectNode) n);
+        return new DayFile(source, folder, null).parse((ObjectNode) n);
     }
 
     private UserInputException err(String key, String problem) {
@@ -136,39 +148,53 @@ public final class DayFile {
         }
         double uncMin = number(root, "passage_uncertainty_min", Double.NaN, 0, 180, "min", false, true);
 
-        // Ensemble resolution and model.
-        String model = "linear";
+        // Ensemble resolution and model: nonlinear by default (linear theory has no front; docs/fronts.md).
+        String model = "nonlinear";
         if (ens != null) {
             onlyKeys("ensemble", ens, ENSEMBLE);
             JsonNode m = ens.get("model");
             if (m != null) {
                 model = m.asText();
                 if (!List.of("linear", "nonlinear").contains(model)) {
-                    throw err("ensemble.model", "value '" + m.asText() + "' is not one of [linear, nonlinear] (linear: quick "
-                            + "look; nonlinear: the real answer, slower)");
+                    throw err("ensemble.model", "value '" + m.asText() + "' is not one of [nonlinear, linear] (nonlinear: "
+                            + "fronts, the default; linear: a quick look whose times are the " + JobModel.LINEAR_TIMES + ")");
                 }
             }
         }
+        if (modelOverride != null) {
+            model = JobModel.check("--model", modelOverride);
+        }
+        boolean linear = model.equals("linear");
         ObjectNode e = ens == null ? JsonNodeFactory.instance.objectNode() : ens;
-        base.put("kind", model);
+        boolean converted = false;
+        if (linear) {
+            base.put("kind", "linear");
+        } else {
+            converted = JobModel.toNonlinear(base, false);
+        }
         ObjectNode grid = obj(e, "grid");
         ObjectNode g = grid == null ? JsonNodeFactory.instance.objectNode() : grid;
         onlyKeys("ensemble.grid", g, GRID);
         ObjectNode bg = base.with("grid");
-        int points = (int) number(g, "ensemble.grid.points", 512, 16, 16384, "(a power of two)", true);
-        if (Integer.bitCount(points) != 1) {
-            throw err("ensemble.grid.points", "value " + points + " must be a power of two (FFT), e.g. "
+        // defaults: the linear model's 512 x 1 km, 48 levels; the nonlinear model's ensemble grid (JobModel)
+        int points = (int) number(g, "ensemble.grid.points", linear ? 512 : JobModel.ENSEMBLE_POINTS, 16, 16384,
+                linear ? "(a power of two)" : "(a product of 2, 3 and 5)", true);
+        if (linear && Integer.bitCount(points) != 1) {
+            throw err("ensemble.grid.points", "value " + points + " must be a power of two (FFT) for the linear model, e.g. "
                     + Integer.highestOneBit(points));
         }
         bg.put("points", points);
-        bg.put("spacing_km", number(g, "ensemble.grid.spacing_km", 1.0, 0.05, 100, "km", false));
-        bg.put("levels", (int) number(g, "ensemble.grid.levels", 48, 8, 1024, "levels", true));
-        if (base.path("physics").isObject() || model.equals("linear")) {
+        bg.put("spacing_km", number(g, "ensemble.grid.spacing_km", linear ? 1.0 : JobModel.ENSEMBLE_SPACING_KM, 0.05, 100, "km",
+                false));
+        bg.put("levels", (int) number(g, "ensemble.grid.levels", linear ? 48 : JobModel.ENSEMBLE_LEVELS, 8, 1024, "levels", true));
+        if (base.path("physics").isObject() || linear) {
             base.with("physics").put("harmonics", (int) number(e, "ensemble.harmonics", 12, 1, 128, "diurnal harmonics", true));
         }
         base.with("output").put("step_min", number(e, "ensemble.output_step_min", 10, 1, 60, "min", false));
-        if (!base.with("output").has("start_h")) {
-            base.with("output").put("start_h", 0);
+        if (!base.with("output").has("start_h") || converted) {
+            // the nonlinear model runs forward from its start: an hour before the first flight, as the planner does (a
+            // linear scenario's output window says nothing about where a forward run should start)
+            base.with("output").put("start_h", linear ? 0 : Math.max(0, Math.floor(first) - 1));
         }
         double halfKm = 0.5 * bg.get("points").asDouble() * bg.get("spacing_km").asDouble();
         for (int i = 0; i < sites.size(); i++) {
@@ -269,7 +295,7 @@ public final class DayFile {
             throw err("coast", found + " has no 'coast' section; a coast file needs coast (latitude_deg, bearing_land_to_sea_deg, "
                     + "...) and may have surface and sites sections");
         }
-        // Coast file: our template for a summer day's linear ensemble (slab heating through a growing mixed layer).
+        // Coast file: our template for a summer day (slab heating through a growing mixed layer); the model is set later.
         ObjectNode t = JsonNodeFactory.instance.objectNode();
         t.put("name", "check-timing-" + date);
         t.put("description", "check-timing ensemble for " + date + " on the coast of " + found.getFileName());
@@ -298,7 +324,7 @@ public final class DayFile {
                 o.set("inland_km", site.get("inland_km"));
             }
         }
-        t.putObject("output").put("start_h", 0).put("end_h", 24);
+        t.putObject("output").put("end_h", 24);
         return t;
     }
 

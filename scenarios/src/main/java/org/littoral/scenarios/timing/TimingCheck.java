@@ -63,6 +63,8 @@ public final class TimingCheck {
             if (env != null) {
                 pct = percentile(env, p.timeHours());
                 never = fractionNaN(env);
+            }
+            if (env != null && settings.envelopeFlags) {
                 double lo = quantile(env, settings.envelopeLowPercentile);
                 double hi = quantile(env, settings.envelopeHighPercentile);
                 if (Double.isInfinite(lo)) {
@@ -85,7 +87,7 @@ public final class TimingCheck {
             // at the fastest plausible speed; the more lenient of the two when both are known.
             double earliest = Double.NaN;
             String why = "";
-            if (env != null && finiteMin(env) < Double.POSITIVE_INFINITY) {
+            if (env != null && settings.envelopeFlags && finiteMin(env) < Double.POSITIVE_INFINITY) {
                 earliest = finiteMin(env);
                 why = "the earliest of " + env.length + " ensemble members arrives at " + clock(earliest);
             }
@@ -164,7 +166,7 @@ public final class TimingCheck {
             return null;
         }
         List<Window> windows = new ArrayList<>();
-        if (env != null) {
+        if (env != null && settings.envelopeFlags) {
             windows.add(new Window(quantile(env, settings.envelopeLowPercentile), quantile(env, settings.envelopeHighPercentile),
                     String.format(Locale.ROOT, "ensemble %.0f-%.0f %% envelope", settings.envelopeLowPercentile,
                             settings.envelopeHighPercentile)));
@@ -211,7 +213,7 @@ public final class TimingCheck {
         }
         boolean pickEarlier;
         if (earlierOk && laterOk) {
-            double centre = env != null ? quantile(env, 50.0) : 0.5 * (violated.get(0).from() + violated.get(0).to());
+            double centre = env != null && settings.envelopeFlags ? quantile(env, 50.0) : 0.5 * (violated.get(0).from() + violated.get(0).to());
             pickEarlier = Math.abs(earlier - centre) <= Math.abs(later - centre);
         } else {
             pickEarlier = earlierOk;

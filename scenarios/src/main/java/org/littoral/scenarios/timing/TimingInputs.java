@@ -47,5 +47,10 @@ public final class TimingInputs {
         public double envelopeHighPercentile = 95.0;
         /** Lowest fraction of the laboratory density-current speed still plausible (friction and mixing). */
         public double retardationMin = 0.4;
+        /**
+         * Whether the envelope is evidence for a flag. False for a linear-model envelope: linear theory has no front, so
+         * its times (onset of onshore flow) are shown beside the observations but never flag a passage on their own.
+         */
+        public boolean envelopeFlags = true;
     }
 }

@@ -43,10 +43,23 @@ class DayFileTest {
         assertEquals(3L, d.ensemble().ensemble().seed());
         assertEquals(2.8, d.conditions().thetaVContrastK());
         assertTrue(Double.isInfinite(d.conditions().totalDepthM()));
-        assertEquals("linear", d.model());
+        assertEquals("nonlinear", d.model(), "fronts need the nonlinear model: the default");
         // classic-45N: sea to the west (bearing 270); wind from 90 is offshore, so U_x = -3 m/s.
         assertEquals(-3.0, d.conditions().crossShoreWindMPerS(), 1e-9);
         assertFalse(d.describedDraws().isEmpty());
+    }
+
+    @Test
+    void withoutAGridTheNonlinearEnsembleRunsOnTheEnsembleGridAndTheLinearOneOnItsOwn() {
+        String day = "date: 2031-06-25\ncoast: classic-45N\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\n";
+        DaySpec nl = parse(day);
+        assertEquals(org.littoral.scenarios.scenario.Scenario.Kind.NONLINEAR, nl.base().kind());
+        assertEquals(200, nl.base().xGrid().nx());
+        assertEquals(2000.0, nl.base().xGrid().xM(1) - nl.base().xGrid().xM(0), 1e-9);
+        assertEquals(6.0, nl.base().output().startClockH(), 1e-9, "an hour before the first flight (07:00 by default)");
+        DaySpec lin = parse(day + "ensemble: {model: linear}\n");
+        assertEquals(org.littoral.scenarios.scenario.Scenario.Kind.LINEAR, lin.base().kind());
+        assertEquals(512, lin.base().xGrid().nx());
     }
 
     @ParameterizedTest(name = "{0}")
@@ -61,8 +74,8 @@ class DayFileTest {
         "layer shallower than breeze | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nfront: {breeze_depth_m: 600, layer_depth_m: 400}' | front.layer_depth_m: value 400 m must be deeper than breeze_depth_m = 600 m",
         "flight interval | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nflights: {interval_min: 0}' | flights.interval_min: value 0 is outside the allowed range 1..240 min",
         "members | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {members: 2.5}' | ensemble.members: value 2.5 must be a whole number in 1..5000 members",
-        "model | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {model: fancy}' | ensemble.model: value 'fancy' is not one of [linear, nonlinear]",
-        "grid points | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {grid: {points: 300}}' | ensemble.grid.points: value 300 must be a power of two (FFT), e.g. 256",
+        "model | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {model: fancy}' | ensemble.model: value 'fancy' is not one of [nonlinear, linear]",
+        "grid points | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {model: linear, grid: {points: 300}}' | ensemble.grid.points: value 300 must be a power of two (FFT) for the linear model, e.g. 256",
         "distribution range | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {ambient_speed_m_per_s: {uniform: {from: 0, to: 60}}}' | ensemble.ambient_speed_m_per_s.uniform.to: value 60 is outside the allowed range 0..40 m/s",
         "unknown distribution | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nensemble: {buoyancy_frequency_per_s: {lognormal: {mu: 1}}}' | ensemble.buoyancy_frequency_per_s: unknown distribution [lognormal]",
         "site outside domain | 'date: 2031-06-25\\ncoast: classic-45N\\nambient_wind: {from_deg: 90, speed_m_per_s: 3}\\nsites: [{name: far, inland_km: 400}]\\nensemble: {grid: {points: 256, spacing_km: 1}}' | sites: site far at 400 km lies outside -121..121 km",
