@@ -14,7 +14,11 @@ import org.littoral.scenarios.observe.ObserveCommand;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.scenario.Scenario;
+import org.littoral.scenarios.scenario.ScenarioFile;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.littoral.scenarios.input.UserInputException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -55,6 +59,12 @@ public final class CompareCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/compare", description = "Output folder (default: ${DEFAULT-VALUE}).")
     Path out;
 
+    @Option(names = "--model", paramLabel = "MODEL", defaultValue = "nonlinear",
+            description = "Model that runs the scenario: nonlinear (default: fronts; a linear scenario runs on the 200 x 2 km "
+                    + "ensemble grid) or linear (a quick look: its times are the onset of onshore flow, linear theory has no "
+                    + "front; a nonlinear scenario cannot be run linear).")
+    String model;
+
     /** What {@link #run} produced. */
     public record Outcome(Comparison.Result result, ScenarioRun.Outcome model, CompareOutputs.Written written) {
         /** The time-height section PNGs, one per compared site. */
@@ -74,7 +84,8 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Outcome o = run(scenario, obs, coastRef, days, columns, breezeType, out, System.console() != null ? System.err : null);
+        Outcome o = run(scenario, JobModel.check("--model", model), obs, coastRef, days, columns, breezeType, out,
+                System.console() != null ? System.err : null);
         Comparison.Result r = o.result();
         System.out.println("littoral: compared " + r.scenarioName() + " with " + r.days().size() + " observed day(s) at "
                 + r.sites().size() + " site(s) (" + r.pairs() + " paired profiles); wrote " + o.written().files().size()
@@ -84,23 +95,25 @@ public final class CompareCommand implements Callable<Integer> {
 
     /**
      * The whole comparison as a Java call (for {@code littoral demo} and tests): runs the scenario through
-     * {@link Solver#standard()} (its model outputs go to {@code out/model}), ingests the observations as
+     * {@link Solver#standard()} with the chosen model (its outputs go to {@code out/model}), ingests the observations as
      * {@code littoral observe} does, compares and writes everything to {@code out}.
      *
+     * @param model      "nonlinear" (a linear scenario is put on the ensemble grid, {@link JobModel#toNonlinear}) or
+     *                   "linear" (the scenario must be linear: a quick look, onset of onshore flow)
      * @param coastRef   coast of the observations, or null for the scenario's coast
      * @param days       per-day attribute table, or null
      * @param breezeType "scenario", "all" or a breeze type name
      * @param progress   where progress lines go, or null
      */
-    public static Outcome run(String scenarioRef, Path obs, String coastRef, Path days, String breezeType, Path out,
-                              PrintStream progress) throws IOException {
-        return run(scenarioRef, obs, coastRef, days, null, breezeType, out, progress);
+    public static Outcome run(String scenarioRef, String model, Path obs, String coastRef, Path days, String breezeType,
+                              Path out, PrintStream progress) throws IOException {
+        return run(scenarioRef, model, obs, coastRef, days, null, breezeType, out, progress);
     }
 
     /** As above, with a column map of the observations ({@code columns}, may be null). */
-    public static Outcome run(String scenarioRef, Path obs, String coastRef, Path days, Path columns, String breezeType, Path out,
-                              PrintStream progress) throws IOException {
-        Scenario sc = BuiltinScenarios.resolve(scenarioRef);
+    public static Outcome run(String scenarioRef, String model, Path obs, String coastRef, Path days, Path columns,
+                              String breezeType, Path out, PrintStream progress) throws IOException {
+        Scenario sc = withModel(BuiltinScenarios.resolve(scenarioRef), model);
         Coast coast = coastRef == null ? sc.coast() : CoastFile.load(coastRef);
         AnalysisSettings settings = new AnalysisSettings();
         org.littoral.scenarios.analysis.ingest.ColumnMap map = columns == null ? null
@@ -115,10 +128,32 @@ public final class CompareCommand implements Callable<Integer> {
         Comparison.matchSites(sc, o.profiles(), obs.toString(), inland, new java.util.ArrayList<>());
         Files.createDirectories(out);
         o.qc().writeCsv(out.resolve("qc-log.csv"));
-        ScenarioRun.Outcome model = new ScenarioRun(sc, Solver.standard(), progress).run(out.resolve("model"));
-        Comparison.Result r = Comparison.compute(new Comparison.Inputs(sc, model, o.profiles(), coast, settings, breezeType,
+        ScenarioRun.Outcome run = new ScenarioRun(sc, Solver.standard(), progress).run(out.resolve("model"));
+        Comparison.Result r = Comparison.compute(new Comparison.Inputs(sc, run, o.profiles(), coast, settings, breezeType,
                 obs.toString(), inland));
         CompareOutputs.Written w = CompareOutputs.write(out, r, sc.source(), obs.toString());
-        return new Outcome(r, model, w);
+        return new Outcome(r, run, w);
+    }
+
+    /** The scenario as the chosen model runs it (see {@link #run(String, String, Path, String, Path, String, Path, PrintStream)}). */
+    static Scenario withModel(Scenario sc, String model) {
+        if (model.equals("linear")) {
+            if (sc.kind() != Scenario.Kind.LINEAR) {
+                throw new UserInputException("compare --model linear: scenario " + sc.source() + " is nonlinear (kind: nonlinear); "
+                        + "drop --model linear, or give a linear scenario");
+            }
+            return sc;
+        }
+        if (sc.kind() == Scenario.Kind.NONLINEAR) {
+            return sc;
+        }
+        ObjectNode doc = sc.inputs().deepCopy();
+        JobModel.toNonlinear(doc, false);
+        try {
+            return ScenarioFile.parse(sc.source() + " (nonlinear, ensemble grid)",
+                    new com.fasterxml.jackson.databind.ObjectMapper().writeValueAsString(doc), true);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
     }
 }

@@ -14,7 +14,10 @@ import org.littoral.scenarios.compare.Comparison.MetricRow;
 import org.littoral.scenarios.compare.Comparison.PassageError;
 import org.littoral.scenarios.compare.Comparison.PassageSummary;
 import org.littoral.scenarios.compare.Comparison.Section;
+import org.littoral.scenarios.report.ClockTime;
 import org.littoral.scenarios.report.FieldFigure;
+import org.littoral.scenarios.report.ReaderText;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.report.Figure;
 import org.littoral.scenarios.report.FigureGrid;
 import org.littoral.scenarios.report.HtmlReport;
@@ -54,14 +57,14 @@ public final class CompareOutputs {
         List<Path> figures = new ArrayList<>();
         List<Figure> figs = new ArrayList<>();
         for (Section s : r.sections()) {
-            Figure f = sectionFigure(s);
+            Figure f = sectionFigure(s, r.modelName());
             Path p = out.resolve("section-" + safe(s.site()) + ".png");
             PngWriter.write(f, p);
             figures.add(p);
             figs.add(f);
         }
         files.addAll(figures);
-        Figure timing = passageFigure(r.passages());
+        Figure timing = passageFigure(r.passages(), r.modelName());
         Path timingPath = null;
         if (timing != null) {
             timingPath = out.resolve("passage-times.png");
@@ -69,7 +72,8 @@ public final class CompareOutputs {
             files.add(timingPath);
         }
         Path report = out.resolve("report.html");
-        report(r, scenarioRef, observedLabel, metrics, passages, summary, figs, timing).write(report);
+        report(r, scenarioRef, observedLabel, metricsView(r.metrics()), passageView(r.passages(), r.modelName()),
+                passageSummaryView(r.passageSummaries(), r.modelName()), figs, timing).write(report);
         files.add(report);
         return new Written(files, figures, timingPath, report);
     }
@@ -89,6 +93,48 @@ public final class CompareOutputs {
             t.row(m.site(), m.layer(), m.variable(), m.n(), m.bias(), m.rmse(), m.meanObserved(), m.meanModel(), m.unit());
         }
         return t.decimals("bias", 2).decimals("rmse", 2).decimals("mean_observed", 2).decimals("mean_model", 2);
+    }
+
+    /** What a reader of the metrics sees: variables in words, layers with a spaced unit. */
+    public static Table metricsView(List<MetricRow> rows) {
+        Table t = Table.of("site", "layer", "variable", "unit", "pairs", "bias", "RMSE", "mean observed", "mean model");
+        for (MetricRow m : rows) {
+            t.row(m.site(), ReaderText.layer(m.layer()), ReaderText.words(m.variable()), m.unit(), m.n(), m.bias(), m.rmse(),
+                    m.meanObserved(), m.meanModel());
+        }
+        return t.decimals("bias", 2).decimals("RMSE", 2).decimals("mean observed", 2).decimals("mean model", 2);
+    }
+
+    /** "model front arrival" or, for the linear model, "model onset of onshore flow". */
+    static String modelTimeName(String modelName) {
+        return JobModel.isLinear(modelName) ? "model onset of onshore flow" : "model front arrival";
+    }
+
+    /** What a reader of the passage summary sees: times as HH:MM, errors in minutes. */
+    public static Table passageSummaryView(List<PassageSummary> rows, String modelName) {
+        String arrival = modelTimeName(modelName);
+        Table t = Table.of("site", "days", "days with an observed passage", "chain passage in the model soundings", arrival,
+                "days with both (chain)", "mean error, chain", "RMSE, chain", "days with both (" + arrival + ")",
+                "mean error, " + arrival, "RMSE, " + arrival);
+        for (PassageSummary s : rows) {
+            t.row(s.site(), s.days(), s.daysWithObservedPassage(), ClockTime.hhmm(s.modelChainH()), ClockTime.hhmm(s.modelArrivalH()),
+                    s.nChain(), ClockTime.minutes(s.meanChainErrorH()), ClockTime.minutes(s.rmseChainErrorH()), s.nArrival(),
+                    ClockTime.minutes(s.meanArrivalErrorH()), ClockTime.minutes(s.rmseArrivalErrorH()));
+        }
+        return t;
+    }
+
+    /** What a reader of the per-day passages sees. */
+    static Table passageView(List<PassageError> rows, String modelName) {
+        String arrival = modelTimeName(modelName);
+        Table t = Table.of("day", "site", "observed passage", "chain on the model soundings", arrival, "chain minus observed",
+                arrival + " minus observed", "note");
+        for (PassageError p : rows) {
+            t.row(p.day(), p.site(), ClockTime.hhmmWithin(p.observedH(), p.observedUncertaintyH()), ClockTime.hhmm(p.modelChainH()),
+                    ClockTime.hhmm(p.modelArrivalH()), ClockTime.minutes(p.chainMinusObservedH()),
+                    ClockTime.minutes(p.arrivalMinusObservedH()), p.note() == null || p.note().isEmpty() ? null : p.note());
+        }
+        return t;
     }
 
     static Table dayMetricsTable(List<Comparison.DayMetricRow> rows) {
@@ -158,7 +204,7 @@ public final class CompareOutputs {
     }
 
     /** Model passage times (chain and front arrival) against the observed ones, per site; null when there is nothing to plot. */
-    public static Figure passageFigure(List<PassageError> rows) {
+    public static Figure passageFigure(List<PassageError> rows, String modelName) {
         ScatterFigure.Builder b = ScatterFigure.builder().size(720, 520).title("Passage time: model against observed")
                 .x("Observed passage, local time", "h").y("Model passage, local time", "h").identityLine();
         java.util.TreeSet<String> sites = new java.util.TreeSet<>();
@@ -186,7 +232,7 @@ public final class CompareOutputs {
                     y[i] = pts.get(i)[1];
                     ex[i] = pts.get(i)[2];
                 }
-                b.points(site + (kind == 0 ? ": model front arrival" : ": chain on model soundings"), x, y, ex, null);
+                b.points(site + (kind == 0 ? ": " + modelTimeName(modelName) : ": chain on model soundings"), x, y, ex, null);
                 series++;
             }
         }
@@ -194,21 +240,22 @@ public final class CompareOutputs {
     }
 
     /** Observed | model, cross-shore wind above, theta below, each pair on one colour scale. */
-    public static Figure sectionFigure(Section s) {
+    public static Figure sectionFigure(Section s, String modelName) {
         double[] uRange = symmetric(s.observedCrossShore(), s.modelCrossShore());
         double[] thRange = range(s.observedTheta(), s.modelTheta());
         String obsTitle = String.format(Locale.ROOT, "%s: observed (mean of %d day%s)", s.site(), s.days(), s.days() == 1 ? "" : "s");
         String modTitle = s.site() + ": model";
         List<Figure> panels = new ArrayList<>();
-        panels.add(panel(s, obsTitle, s.observedCrossShore(), "Cross-shore wind (onshore +)", "m s\u207b\u00b9", uRange, true, true));
-        panels.add(panel(s, modTitle, s.modelCrossShore(), "Cross-shore wind (onshore +)", "m s\u207b\u00b9", uRange, true, false));
-        panels.add(panel(s, obsTitle, s.observedTheta(), "Potential temperature \u03b8", "K", thRange, false, true));
-        panels.add(panel(s, modTitle, s.modelTheta(), "Potential temperature \u03b8", "K", thRange, false, false));
+        String arrival = JobModel.isLinear(modelName) ? "onset of onshore flow" : "front arrival";
+        panels.add(panel(s, obsTitle, s.observedCrossShore(), "Cross-shore wind (onshore +)", "m/s", uRange, true, true, arrival));
+        panels.add(panel(s, modTitle, s.modelCrossShore(), "Cross-shore wind (onshore +)", "m/s", uRange, true, false, arrival));
+        panels.add(panel(s, obsTitle, s.observedTheta(), "Potential temperature \u03b8", "K", thRange, false, true, arrival));
+        panels.add(panel(s, modTitle, s.modelTheta(), "Potential temperature \u03b8", "K", thRange, false, false, arrival));
         return FigureGrid.of("Time-height sections at " + s.site() + ": observed (left) and model (right)", panels, 2);
     }
 
     private static FieldFigure panel(Section s, String title, double[][] v, String label, String unit, double[] range,
-                                     boolean diverging, boolean observed) {
+                                     boolean diverging, boolean observed, String arrivalName) {
         FieldFigure.Builder b = FieldFigure.builder().size(620, 380).title(title)
                 .x(s.timeH(), "Local time", "h").y(s.heightM(), "Height above ground", "m").values(v)
                 .colorBar(label, unit).colorRange(range[0], range[1]);
@@ -233,7 +280,7 @@ public final class CompareOutputs {
                 b.verticalLine(s.modelChainH(), "chain passage");
             }
             if (Double.isFinite(s.modelArrivalH()) && s.modelArrivalH() >= t0 && s.modelArrivalH() <= t1) {
-                b.verticalLine(s.modelArrivalH(), "front arrival");
+                b.verticalLine(s.modelArrivalH(), arrivalName);
             }
         }
         return b.build();
@@ -306,16 +353,19 @@ public final class CompareOutputs {
         h.table("Model minus observed, pooled over the selected days: n pairs, bias (mean difference), RMSE, and the means "
                 + "(vector means for direction). Units in the last column.", metrics);
         h.section("Passage timing");
+        boolean linear = JobModel.isLinear(r.modelName());
         h.paragraph("Passage = the first passage the analysis chain labels onshore at a site on a day. 'chain' is the chain's "
-                + "passage in the model's synthetic soundings, 'arrival' the model's own front arrival (total near-surface wind "
-                + "entering the onshore sector, run.BreezeDiagnostics). Errors in hours, model minus observed.");
+                + "passage in the model's synthetic soundings; " + (linear ? "'" + modelTimeName(r.modelName()) + "' is the "
+                + "linear model's onset of onshore flow at the site (linear theory has no front)" : "'"
+                + modelTimeName(r.modelName()) + "' is the model's own front arrival") + " (definition: docs/fronts.md). "
+                + "Errors in minutes, model minus observed.");
         h.table("Passage-time errors per site (mean and RMSE over the days with both passages).", summary);
         if (timing != null) {
             h.figure(timing, "Model against observed passage time, one point per site and observed day with an onshore "
                     + "passage (horizontal bars: the observed passage's timing uncertainty). Points on the diagonal would be "
                     + "perfect timing; above it the model is late. The model has one day, so each site's model times form a row.");
         }
-        h.table("Passage times and errors per site and day (local clock hours).", passages);
+        h.table("Passage times (local time) and errors per site and day.", passages);
         h.section("Time-height sections");
         for (int i = 0; i < figs.size(); i++) {
             Section s = r.sections().get(i);
@@ -323,7 +373,8 @@ public final class CompareOutputs {
                     + " selected day(s), each day interpolated in time onto the model's flight times (left) and the model's synthetic "
                     + "soundings (right); cross-shore wind (onshore positive) above, potential temperature "
                     + "below, each pair on one colour scale. Vertical lines: median observed passage; the chain's passage in "
-                    + "the model soundings and the model's front arrival. Grey: no data.");
+                    + "the model soundings and the model's " + (JobModel.isLinear(r.modelName()) ? "onset of onshore flow" : "front arrival")
+                    + ". Grey: no data.");
         }
         if (!r.notes().isEmpty()) {
             h.section("Notes");

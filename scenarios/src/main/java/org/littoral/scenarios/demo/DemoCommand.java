@@ -185,7 +185,7 @@ public final class DemoCommand implements Callable<Integer> {
 
     private static void compareSection(HtmlReport rep, Path dataDir, Path dir) throws IOException {
         org.littoral.scenarios.compare.CompareCommand.Outcome o = org.littoral.scenarios.compare.CompareCommand.run(
-                COMPARE_SCENARIO, dataDir.resolve("binned/profiles-binned.csv.gz"), dataDir.resolve("coast.yaml").toString(),
+                COMPARE_SCENARIO, "nonlinear", dataDir.resolve("binned/profiles-binned.csv.gz"), dataDir.resolve("coast.yaml").toString(),
                 dataDir.resolve("days.csv"), "scenario", dir, null);
         org.littoral.scenarios.compare.Comparison.Result r = o.result();
         rep.section("The model against the observations");

@@ -18,6 +18,7 @@ import org.littoral.scenarios.analysis.AnalysisSettings;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.output.AtomicFile;
 import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;
@@ -48,7 +49,9 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
-    @Option(names = "--model", paramLabel = "MODEL", description = "Override the plan's model: linear (quick look) or nonlinear.")
+    @Option(names = "--model", paramLabel = "MODEL", description = "Override the plan's model: nonlinear (fronts; a linear base "
+            + "scenario runs on the 200 x 2 km ensemble grid unless the plan sets grid keys) or linear (a quick look: its times "
+            + "are the onset of onshore flow, linear theory has no front).")
     String model;
 
     @Override
@@ -60,8 +63,8 @@ public final class PlanCommand implements Callable<Integer> {
             throw new UserInputException("--threads must be at least 1; got " + n);
         }
         String m = model != null ? model : plan.model();
-        if (!List.of("scenario", "linear", "nonlinear").contains(m)) {
-            throw new UserInputException("--model " + m + " is not one of [linear, nonlinear]");
+        if (model != null) {
+            JobModel.check("--model", model);
         }
         PlanOutcome o = run(plan, m, dir, n, resume, System.err);
         PlanOutputs.printSummary(plan, o.result(), System.out);
@@ -83,8 +86,18 @@ public final class PlanCommand implements Callable<Integer> {
     public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
                                   Solver solver) throws IOException, InterruptedException {
         long t0 = System.nanoTime();
-        if (!model.equals("scenario")) {
-            plan.ensemble().base().put("kind", model);
+        if (model.equals("nonlinear")) {
+            boolean gridSet = plan.ensemble().fixed().stream().anyMatch(f -> f.path().toString().startsWith("grid."));
+            boolean startSet = plan.ensemble().fixed().stream().anyMatch(f -> f.path().toString().equals("output.start_h"));
+            if (JobModel.toNonlinear(plan.ensemble().base(), gridSet)) {
+                log.println("plan: " + JobModel.gridNote("the plan"));
+                if (!startSet) {
+                    // a forward run starts an hour before the first launch (a linear scenario's output window says nothing)
+                    plan.ensemble().base().with("output").put("start_h", Math.max(0, Math.floor(plan.operatingStartH()) - 1));
+                }
+            }
+        } else if (model.equals("linear")) {
+            plan.ensemble().base().put("kind", "linear");
         }
         List<Member> members = MemberExpander.expand(plan.ensemble());
         AnalysisSettings settings = new AnalysisSettings();
@@ -120,6 +133,11 @@ public final class PlanCommand implements Callable<Integer> {
         double bayInland = hasBay ? shores.get(shores.size() - 1) / 1000.0 : Double.NaN;
         PlanResult result = PlanResult.build(plan, records, so.failed(), windows, hasBay, bayInland);
         result.notes.addAll(0, rejected);
+        result.model = first.kind() == Scenario.Kind.LINEAR ? "linear" : "nonlinear";
+        if (result.model.equals("linear")) {
+            result.notes.add(0, "linear quick look: the plan's times are the " + JobModel.LINEAR_TIMES + "; run with --model "
+                    + "nonlinear for the front");
+        }
         if (so.failed() > 0) {
             result.notes.add(so.failed() + " member(s) failed (see members/*.json); they are left out of every score");
         }

@@ -155,7 +155,8 @@ public final class PlanFile {
         double speedTol = number(plan, "speed_tolerance_fraction", 0.25, 0.01, 2, "(fraction)", false);
         int top = (int) number(plan, "recommendations", 10, 1, 1000, "rows", true);
         int pilot = (int) number(plan, "pilot_members", Math.min(spec.memberCount(), 20), 1, 100000, "members", true);
-        String model = plan.has("model") ? plan.get("model").asText() : "scenario";
+        // fronts need the nonlinear model (linear theory has none): it is the default
+        String model = plan.has("model") ? plan.get("model").asText() : "nonlinear";
         if (!List.of("scenario", "linear", "nonlinear").contains(model)) {
             throw err("plan.model", "value '" + model + "' is not one of [scenario, linear, nonlinear]");
         }

@@ -17,6 +17,7 @@ import org.littoral.scenarios.report.LineFigure;
 import org.littoral.scenarios.report.Marker;
 import org.littoral.scenarios.report.Series;
 import org.littoral.scenarios.report.Table;
+import org.littoral.scenarios.scenario.JobModel;
 
 /**
  * The plan's self-contained HTML report: recommendations, the fan chart of arrival time against inland
@@ -60,12 +61,16 @@ public final class PlanReport {
                 p[3][i] = f.p75();
                 p[4][i] = f.p95();
             }
-            FanChartFigure fan = FanChartFigure.builder().size(900, 560).title("Front arrival time against inland distance")
-                    .x(x, "inland distance", "km").y("arrival (local time)", "h").percentiles(p[0], p[1], p[2], p[3], p[4])
-                    .build();
-            out.add(new CaptionedFigure("arrival-fan.png", fan, String.format(Locale.ROOT, "Arrival time of the onshore flow at each "
-                    + "candidate distance over the %d ensemble members: median (line), 25-75 %% (dark) and 5-95 %% (light) "
-                    + "ranges, over the members in which the front arrives there (the fraction of members is in the arrival-time table below).", r.members)));
+            boolean linear = JobModel.isLinear(r.model);
+            FanChartFigure fan = FanChartFigure.builder().size(900, 560)
+                    .title((linear ? "Onset of onshore flow (linear: no front)" : "Front arrival") + " against inland distance")
+                    .x(x, "inland distance", "km").y(linear ? "onset of onshore flow, local time" : "front arrival, local time", "h")
+                    .percentiles(p[0], p[1], p[2], p[3], p[4]).build();
+            out.add(new CaptionedFigure("arrival-fan.png", fan, String.format(Locale.ROOT, "%s at each candidate distance over "
+                    + "the %d ensemble members (%s model; definition: docs/fronts.md): median (line), 25-75 %% (dark) and 5-95 %% "
+                    + "(light) ranges, over the members in which it reaches that distance during operating hours (their share is "
+                    + "in the table below).", linear ? "The " + JobModel.LINEAR_TIMES : "The model front's arrival", r.members,
+                    r.model)));
         }
         Map<String, List<PlanResult.SiteRow>> byCadence = new LinkedHashMap<>();
         for (PlanResult.SiteRow s : r.sites) {
@@ -89,7 +94,8 @@ public final class PlanReport {
                 b.series(Series.of(e.getKey(), x, y).marker(Marker.cycle(m++)).errorBars(null, err));
             }
             out.add(new CaptionedFigure("capture-by-distance.png", b.build(), String.format(Locale.ROOT, "Probability that a site at "
-                    + "each distance captures the passage (detected by the analysis chain within %.0f min of the model's arrival, "
+                    + "each distance captures the passage (detected by the analysis chain within %.0f min of the model's "
+                    + (JobModel.isLinear(r.model) ? "onset of onshore flow" : "front arrival") + ", "
                     + "with at least %d profiles before and %d after it inside operating hours), per cadence option; bars: "
                     + "half-width of the 95 %% Wilson interval.", plan.criteria().timingToleranceH() * 60,
                     plan.criteria().minProfilesBefore(), plan.criteria().minProfilesAfter())));
@@ -134,7 +140,10 @@ public final class PlanReport {
         for (CaptionedFigure c : figs) {
             rep.figure(c.figure(), c.caption());
         }
-        Table f = Table.of("km", "members with arrival", "5 %", "25 %", "median", "75 %", "95 %");
+        for (String why : captureExplanation(plan, r)) {
+            rep.paragraph(why);
+        }
+        Table f = Table.of("km", "members reaching it", "5 %", "25 %", "median", "75 %", "95 %");
         for (PlanResult.FanRow row : r.fan) {
             if (compact && Math.abs(row.distanceKm() / 5.0 - Math.rint(row.distanceKm() / 5.0)) > 1e-9 && row.distanceKm() != 1.0) {
                 continue;
@@ -144,7 +153,8 @@ public final class PlanReport {
                     PlanOutputs.clock(row.p95()));
         }
         f.decimals("km", 1);
-        rep.table("Percentiles of the model arrival time (local clock) at " + (compact ? "candidate distances every 5 km "
+        rep.table("Percentiles of the " + (JobModel.isLinear(r.model) ? JobModel.LINEAR_TIMES : "model front's arrival")
+                + " (local time) at " + (compact ? "candidate distances every 5 km "
                 + "(arrival-fan.csv has them all)." : "each candidate distance."), f);
         if (compact) {
             return;
@@ -159,6 +169,69 @@ public final class PlanReport {
         rep.table("Per distance and cadence option: the recommended window for the dense cadence (10th-90th percentile of the "
                 + "ensemble arrival time widened by one base interval, clipped to operating hours), and the probabilities behind "
                 + "the ranking.", w);
+    }
+
+    /**
+     * Why capture is what it is, per cadence, computed from the members' outcomes at the best distance: how many members'
+     * fronts reach it during operating hours, how many of those the chain misses, finds off time or flanks with too few
+     * profiles. Computed from the same counts as the figure, so the words cannot contradict it.
+     */
+    static List<String> captureExplanation(PlanSpec plan, PlanResult r) {
+        List<String> out = new ArrayList<>();
+        Map<String, PlanResult.SiteRow> best = new LinkedHashMap<>();
+        for (PlanResult.SiteRow s : r.sites) {
+            PlanResult.SiteRow b = best.get(s.cadence());
+            if (s.captured() != null && (b == null || s.captured().estimate() > b.captured().estimate())) {
+                best.put(s.cadence(), s);
+            }
+        }
+        String front = JobModel.isLinear(r.model) ? "onshore flow" : "front";
+        for (PlanResult.SiteRow s : best.values()) {
+            int[] o = s.outcomes();
+            int n = 0;
+            for (int v : o) {
+                n += v;
+            }
+            if (n == 0) {
+                continue;
+            }
+            int reach = n - o[SiteOutcome.Result.NO_FRONT.ordinal()];
+            List<String> lost = new ArrayList<>();
+            String[] words = {null, "the chain finds no onshore passage in %d", "it finds one more than %.0f min from the model's "
+                    + "time in %d", "too few profiles before or after it in %d"};
+            for (SiteOutcome.Result k : List.of(SiteOutcome.Result.NOT_DETECTED, SiteOutcome.Result.OFF_TIME,
+                    SiteOutcome.Result.TOO_FEW_PROFILES)) {
+                int c = o[k.ordinal()];
+                if (c == 0) {
+                    continue;
+                }
+                lost.add(k == SiteOutcome.Result.OFF_TIME ? String.format(Locale.ROOT, words[2], plan.criteria().timingToleranceH() * 60, c)
+                        : String.format(Locale.ROOT, words[k.ordinal()], c));
+            }
+            int largest = SiteOutcome.Result.NO_FRONT.ordinal();
+            for (int k = 0; k < SiteOutcome.Result.CAPTURED.ordinal(); k++) {
+                if (o[k] > o[largest]) {
+                    largest = k;
+                }
+            }
+            String limit = switch (SiteOutcome.Result.values()[largest]) {
+                case NO_FRONT -> "the days on which the " + front + " never gets there during operating hours";
+                case NOT_DETECTED -> "passages the chain does not detect in the soundings";
+                case OFF_TIME -> "detections too far from the model's time";
+                case TOO_FEW_PROFILES -> "too few profiles either side of the passage";
+                case CAPTURED -> "";
+            };
+            out.add(String.format(Locale.ROOT, "Why capture is at most %.0f %% (%s, best distance %s km): of the %d members, the "
+                    + "%s reaches %s km during operating hours in %d%s; %d are captured. The largest loss is %s.",
+                    100.0 * o[SiteOutcome.Result.CAPTURED.ordinal()] / n, s.cadence(), km(s.distanceKm()), n, front,
+                    km(s.distanceKm()), reach, lost.isEmpty() ? "" : "; of those, " + String.join(", ", lost),
+                    o[SiteOutcome.Result.CAPTURED.ordinal()], limit));
+        }
+        return out;
+    }
+
+    private static String km(double d) {
+        return d == Math.rint(d) ? String.format(Locale.ROOT, "%.0f", d) : String.format(Locale.ROOT, "%.1f", d);
     }
 
     private static String range(double[] km) {

@@ -11,9 +11,12 @@ import java.util.List;
 public final class PlanResult {
 
     /** One candidate distance under one cadence option. */
+    /**
+     * @param outcomes members per {@link SiteOutcome.Result}, indexed by its ordinal: why the passage was or was not captured
+     */
     public record SiteRow(double distanceKm, String cadence, Proportion frontArrives, double arrivalP10H, double arrivalMedianH,
                           double arrivalP90H, Proportion captured, double meanFlights, boolean feasible,
-                          double denseStartH, double denseEndH) {
+                          double denseStartH, double denseEndH, int[] outcomes) {
     }
 
     /** Percentiles of the model arrival time at one distance. */
@@ -27,6 +30,8 @@ public final class PlanResult {
     public int members;
     public int failedMembers;
     public boolean hasBay;
+    /** The model the members ran: "linear" (times are the onset of onshore flow) or "nonlinear" (front arrival). */
+    public String model = "nonlinear";
 
     /**
      * Builds the result.
@@ -89,16 +94,19 @@ public final class PlanResult {
                 feasible[i] = flights[i] <= plan.maxFlightsPerSite() + 1e-9;
                 int arrives = 0;
                 int caught = 0;
+                int[] outcomes = new int[SiteOutcome.Result.values().length];
                 for (int m = 0; m < nm; m++) {
                     arrives += o[m][i].frontArrives() ? 1 : 0;
                     caught += o[m][i].captured(crit) ? 1 : 0;
+                    outcomes[o[m][i].result(crit).ordinal()]++;
                 }
                 FanRow fr = r.fan.get(i);
                 DenseWindow w = windows[c][i];
                 r.sites.add(new SiteRow(dKm[i], opt.name(), Proportion.of(arrives, nm), pct(truth, i, 10),
                         fr.p50(), pct(truth, i, 90), Proportion.of(caught, nm), flights[i], feasible[i],
                         opt.hasDense() ? (opt.autoWindow() ? (w == null ? Double.NaN : w.startClockH()) : opt.denseStartH()) : Double.NaN,
-                        opt.hasDense() ? (opt.autoWindow() ? (w == null ? Double.NaN : w.endClockH()) : opt.denseEndH()) : Double.NaN));
+                        opt.hasDense() ? (opt.autoWindow() ? (w == null ? Double.NaN : w.endClockH()) : opt.denseEndH()) : Double.NaN,
+                        outcomes));
             }
             int infeasible = 0;
             for (int[] set : sets) {

@@ -18,6 +18,36 @@ public record SiteOutcome(double truthClockH, double detectedClockH, int profile
         return !Double.isNaN(truthClockH);
     }
 
+    /** Why a member's passage at a site was or was not captured (the first reason that applies, in this order). */
+    public enum Result {
+        /** The model's front (onset of onshore flow, linear model) does not reach the site during operating hours. */
+        NO_FRONT,
+        /** The chain finds no onshore passage in the site's soundings. */
+        NOT_DETECTED,
+        /** The chain's passage is further from the model's time than the timing tolerance. */
+        OFF_TIME,
+        /** Too few profiles before or after the detected passage inside operating hours. */
+        TOO_FEW_PROFILES,
+        CAPTURED
+    }
+
+    /** The outcome under the criteria: captured, or the first reason it is not. */
+    public Result result(PlanCriteria c) {
+        if (!frontArrives()) {
+            return Result.NO_FRONT;
+        }
+        if (Double.isNaN(detectedClockH)) {
+            return Result.NOT_DETECTED;
+        }
+        if (Math.abs(detectedClockH - truthClockH) > c.timingToleranceH()) {
+            return Result.OFF_TIME;
+        }
+        if (profilesBefore < c.minProfilesBefore() || profilesAfter < c.minProfilesAfter()) {
+            return Result.TOO_FEW_PROFILES;
+        }
+        return Result.CAPTURED;
+    }
+
     /**
      * The passage counts as captured when the front arrives, a passage is detected within the timing
      * tolerance of the truth, and enough profiles were flown on each side of it.

@@ -141,7 +141,7 @@ class CompareSelfTest {
 
     @Test
     void theCommandWritesTablesSectionsAndAReportThatEmbedsThem(@TempDir Path out) throws Exception {
-        CompareCommand.Outcome o = CompareCommand.run("classic-45N", runDir.resolve("soundings.csv"), null, null, "all", out, null);
+        CompareCommand.Outcome o = CompareCommand.run("classic-45N", "linear", runDir.resolve("soundings.csv"), null, null, "all", out, null);
         for (String f : List.of("metrics.csv", "metrics.json", "metrics-by-day.csv", "passage-errors.csv", "passage-summary.csv",
                 "report.html", "model/summary.json")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);
