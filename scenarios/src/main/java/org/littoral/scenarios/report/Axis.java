@@ -40,10 +40,17 @@ final class Axis {
      */
     static NiceTicks chooseTicks(double min, double max, boolean loose, double lengthPx, boolean horizontal,
             FontMetrics fm) {
+        return chooseTicks(min, max, loose, lengthPx, horizontal, fm, false);
+    }
+
+    /** As above; {@code clock} puts the ticks on clock divisions of hours and labels them HH:MM. */
+    static NiceTicks chooseTicks(double min, double max, boolean loose, double lengthPx, boolean horizontal,
+            FontMetrics fm, boolean clock) {
         int target = (int) Math.max(2, Math.round(lengthPx / (horizontal ? 85.0 : 55.0)));
         NiceTicks best = null;
         for (int n = target + 1; n >= 2; n--) {
-            NiceTicks t = loose ? NiceTicks.loose(min, max, n) : NiceTicks.within(min, max, n);
+            NiceTicks t = clock ? NiceTicks.clock(min, max, n, loose)
+                    : loose ? NiceTicks.loose(min, max, n) : NiceTicks.within(min, max, n);
             if (best == null) {
                 best = t;
             }

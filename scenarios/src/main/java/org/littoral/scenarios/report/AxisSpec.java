@@ -12,7 +12,23 @@ final class AxisSpec {
     Boolean loose; // null: the figure decides
 
     String title() {
-        return Theme.axisTitle(label, unit);
+        return clock() ? label : Theme.axisTitle(label, unit);
+    }
+
+    /**
+     * A time-of-day axis: unit "h" and a label that says local time. Its ticks fall on whole minutes and hours and read
+     * HH:MM (a reader never sees decimal hours).
+     */
+    boolean clock() {
+        return isClock(label, unit);
+    }
+
+    static boolean isClock(String label, String unit) {
+        if (!"h".equals(unit) || label == null) {
+            return false;
+        }
+        String l = label.toLowerCase(java.util.Locale.ROOT);
+        return l.contains("local time") || l.contains("local clock") || l.contains("local)");
     }
 
     boolean fixed() {

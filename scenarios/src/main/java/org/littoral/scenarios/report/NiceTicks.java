@@ -15,13 +15,50 @@ public final class NiceTicks {
     private final int fractionDigits;
     private final double[] values;
 
+    /** True for ticks in hours of the day, labelled HH:MM. */
+    private final boolean clock;
+
     private NiceTicks(double graphMin, double graphMax, double spacing, double[] values) {
+        this(graphMin, graphMax, spacing, values, false);
+    }
+
+    private NiceTicks(double graphMin, double graphMax, double spacing, double[] values, boolean clock) {
         this.graphMin = graphMin;
         this.graphMax = graphMax;
         this.spacing = spacing;
         // Heckbert (1990): nfrac = max(-floor(log10 d), 0) fraction digits show every tick exactly.
         this.fractionDigits = Math.max(-(int) Math.floor(Math.log10(spacing) + 1e-9), 0);
         this.values = values;
+        this.clock = clock;
+    }
+
+    /** Tick spacings of a time-of-day axis, hours: the divisions of a clock, not of ten. */
+    private static final double[] CLOCK_STEPS_H = {5 / 60.0, 10 / 60.0, 15 / 60.0, 0.5, 1, 2, 3, 4, 6, 12, 24};
+
+    /**
+     * Ticks for a time-of-day axis in hours, at about {@code nTicks} ticks, labelled HH:MM: the spacing is the smallest
+     * clock division at least (max - min) / (nTicks - 1). {@code loose} rounds the graph range out to whole ticks.
+     */
+    public static NiceTicks clock(double min, double max, int nTicks, boolean loose) {
+        double[] mm = widenDegenerate(min, max);
+        min = mm[0];
+        max = mm[1];
+        double want = (max - min) / Math.max(nTicks - 1, 1);
+        double d = CLOCK_STEPS_H[CLOCK_STEPS_H.length - 1];
+        for (double c : CLOCK_STEPS_H) {
+            if (c >= want - 1e-12) {
+                d = c;
+                break;
+            }
+        }
+        if (loose) {
+            double gmin = Math.floor(min / d + 1e-9) * d;
+            double gmax = Math.ceil(max / d - 1e-9) * d;
+            return new NiceTicks(gmin, gmax, d, ticks(gmin, gmax, d), true);
+        }
+        double first = Math.ceil(min / d - 1e-9) * d;
+        double last = Math.floor(max / d + 1e-9) * d;
+        return new NiceTicks(min, max, d, ticks(first, last, d), true);
     }
 
     /**
@@ -147,7 +184,7 @@ public final class NiceTicks {
 
     /** A tick label with exactly the fraction digits the spacing needs, and a true minus sign. */
     public String label(int i) {
-        return format(values[i], fractionDigits);
+        return clock ? ClockTime.hhmm(values[i]) : format(values[i], fractionDigits);
     }
 
     static String format(double v, int fractionDigits) {

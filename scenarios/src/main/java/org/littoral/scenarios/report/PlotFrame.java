@@ -43,7 +43,7 @@ final class PlotFrame {
 
         double[] yr = range(ys, yRange);
         boolean yLoose = ys.fixed() ? false : ys.loose != null ? ys.loose : yLooseDefault;
-        NiceTicks yt = Axis.chooseTicks(yr[0], yr[1], yLoose, plotH, false, tick);
+        NiceTicks yt = Axis.chooseTicks(yr[0], yr[1], yLoose, plotH, false, tick, ys.clock());
         double ymin = yLoose ? yt.graphMin() : yr[0];
         double ymax = yLoose ? yt.graphMax() : yr[1];
         int yLabelW = 0;
@@ -57,7 +57,7 @@ final class PlotFrame {
 
         double[] xr = range(xs, xRange);
         boolean xLoose = xs.fixed() ? false : xs.loose != null ? xs.loose : xLooseDefault;
-        NiceTicks xt = Axis.chooseTicks(xr[0], xr[1], xLoose, plotW, true, tick);
+        NiceTicks xt = Axis.chooseTicks(xr[0], xr[1], xLoose, plotW, true, tick, xs.clock());
         double xmin = xLoose ? xt.graphMin() : xr[0];
         double xmax = xLoose ? xt.graphMax() : xr[1];
 

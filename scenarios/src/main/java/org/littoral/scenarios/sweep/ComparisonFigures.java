@@ -14,7 +14,11 @@ import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
 import org.littoral.scenarios.report.BoxPlotFigure;
 import org.littoral.scenarios.report.Figure;
+import org.littoral.scenarios.report.Marker;
+import org.littoral.scenarios.report.ReaderText;
 import org.littoral.scenarios.report.ScatterFigure;
+import org.littoral.scenarios.report.Series;
+import org.littoral.scenarios.scenario.JobModel;
 
 /**
  * The side-by-side figures of a sweep, drawn from the comparison table: front arrival at each site against the
@@ -27,8 +31,7 @@ public final class ComparisonFigures {
     private static final int PANEL_W = 520;
     private static final int PANEL_H = 380;
     private static final int MAX_PANELS = 6;
-    private static final Pattern ARRIVAL = Pattern.compile("(?i).*arrival.*_h$");
-    private static final Pattern PENETRATION = Pattern.compile("(?i).*penetration.*km$");
+    private static final Pattern ARRIVAL = Pattern.compile("(?i)^diagnostics\\.sites\\..*\\.onshore_arrival\\.time_local_h$");
     private static final Pattern POST_PASSAGE = Pattern.compile("(?i).*(post_passage|change|delta).*");
     private static final List<String> TYPE_ORDER = List.of("pure", "corkscrew", "backdoor", "synoptic", "undetermined");
 
@@ -38,55 +41,152 @@ public final class ComparisonFigures {
     /** Writes the figures that the table has columns for; returns their paths. */
     public static List<Path> write(ComparisonTable t, Path outDir) throws IOException {
         List<Path> out = new ArrayList<>();
-        figure(out, outDir.resolve("arrival-vs-ambient.png"), scatterPanels(t, columns(t, ARRIVAL), "onshore-flow arrival, local time", "h"));
-        figure(out, outDir.resolve("penetration-vs-ambient.png"), scatterPanels(t, columns(t, PENETRATION), "maximum inland penetration", "km"));
+        String times = timesLabel(t);
+        List<Figure> arrival = new ArrayList<>();
+        for (String c : columns(t, ARRIVAL)) {
+            arrival.add(scatterPanel(t, c, null, siteTitle(t, c), times + ", local time", "h", "never arrives"));
+        }
+        figure(out, outDir.resolve("arrival-vs-ambient.png"), arrival);
+        List<Figure> pen = new ArrayList<>();
+        if (t.columns().contains(PENETRATION_KM)) {
+            pen.add(scatterPanel(t, PENETRATION_KM, t.columns().contains(PENETRATION_AT_LEAST) ? PENETRATION_AT_LEAST : null,
+                    "Maximum inland penetration", "maximum inland penetration", "km", "no front"));
+        }
+        figure(out, outDir.resolve("penetration-vs-ambient.png"), pen);
         figure(out, outDir.resolve("post-passage-by-type.png"), boxPanels(t, columns(t, POST_PASSAGE)));
         return out;
+    }
+
+    static final String PENETRATION_KM = "diagnostics.max_inland_penetration.km";
+    static final String PENETRATION_AT_LEAST = "diagnostics.max_inland_penetration.at_least_km";
+
+    /**
+     * What the members' times are: "front arrival" (nonlinear), the linear model's "onset of onshore flow (linear theory
+     * has no front)", or both names when a sweep mixes the models.
+     */
+    static String timesLabel(ComparisonTable t) {
+        boolean linear = false;
+        boolean fronts = false;
+        for (String m : t.columns().contains("model") ? t.texts("model") : List.<String>of()) {
+            if (m == null || m.isEmpty()) {
+                continue;
+            }
+            if (JobModel.isLinear(m)) {
+                linear = true;
+            } else {
+                fronts = true;
+            }
+        }
+        if (linear && fronts) {
+            return "front arrival or onset of onshore flow";
+        }
+        return linear ? "onset of onshore flow (linear: no front)" : "front arrival";
+    }
+
+    /** "shore-3km (3 km inland)" from a site's arrival column. */
+    static String siteTitle(ComparisonTable t, String column) {
+        String prefix = "diagnostics.sites.";
+        if (!column.startsWith(prefix)) {
+            return ReaderText.words(column.replaceFirst("^diagnostics\\.", ""));
+        }
+        String site = column.substring(prefix.length(), column.indexOf(".onshore_arrival"));
+        String km = prefix + site + ".inland_km";
+        if (t.columns().contains(km)) {
+            double[] v = t.numbers(km);
+            for (double x : v) {
+                if (!Double.isNaN(x)) {
+                    return String.format(java.util.Locale.ROOT, "%s (%s km inland)", site,
+                            x == Math.rint(x) ? String.valueOf((long) x) : String.valueOf(x));
+                }
+            }
+        }
+        return site;
     }
 
     static List<String> columns(ComparisonTable t, Pattern p) {
         List<String> out = new ArrayList<>();
         for (String c : t.columns()) {
-            if (p.matcher(c).matches() && hasNumbers(t.numbers(c))) {
+            if (p.matcher(c).matches()) {
                 out.add(c);
             }
         }
         return out.size() > MAX_PANELS ? out.subList(0, MAX_PANELS) : out;
     }
 
-    private static boolean hasNumbers(double[] v) {
-        for (double x : v) {
-            if (!Double.isNaN(x)) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private static List<Figure> scatterPanels(ComparisonTable t, List<String> cols, String yTitle, String yUnit) {
-        List<Figure> panels = new ArrayList<>();
+    /**
+     * One panel of a member value against the ambient wind speed, one marker per breeze type. Members without a value
+     * are not dropped: a lower bound ({@code atLeastColumn}) is drawn as an open triangle at its value, and a member with
+     * neither value as an open grey circle on the top frame (times: it never arrives) or the bottom frame (penetration:
+     * no front), named in the legend.
+     */
+    static Figure scatterPanel(ComparisonTable t, String column, String atLeastColumn, String title, String yTitle, String yUnit,
+                               String missingName) {
         double[] speed = t.numbers("ambient_speed_m_per_s");
         List<String> type = t.texts("breeze_type");
-        for (String c : cols) {
-            double[] y = t.numbers(c);
-            Map<String, double[][]> groups = byType(speed, y, type);
-            if (groups.isEmpty()) {
+        double[] y = t.numbers(column);
+        double[] atLeast = atLeastColumn == null ? new double[y.length] : t.numbers(atLeastColumn);
+        if (atLeastColumn == null) {
+            java.util.Arrays.fill(atLeast, Double.NaN);
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < y.length; i++) {
+            for (double v : new double[] {y[i], atLeast[i]}) {
+                if (!Double.isNaN(v)) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        if (lo > hi) {
+            lo = 0;
+            hi = 1;
+        }
+        double pad = Math.max(0.05 * (hi - lo), "h".equals(yUnit) ? 0.25 : 1.0);
+        boolean top = "h".equals(yUnit);
+        double yMin = lo - pad;
+        double yMax = hi + pad;
+        double frame = top ? yMax : yMin;
+        ScatterFigure.Builder b = ScatterFigure.builder().size(PANEL_W, PANEL_H).title(title)
+                .x("ambient wind speed", "m/s").y(yTitle, yUnit).yRange(yMin, yMax);
+        double[] span = paddedRange(speed);
+        if (span != null) {
+            b.xRange(span[0], span[1]);
+        }
+        // every breeze type gets its own marker and colour, so coinciding types (corkscrew and backdoor in
+        // the linear model) stay visible as overlapping shapes
+        for (Map.Entry<String, double[][]> e : byType(speed, y, type).entrySet()) {
+            b.points(e.getKey(), e.getValue()[0], e.getValue()[1]);
+        }
+        List<double[]> bound = new ArrayList<>();
+        List<double[]> missing = new ArrayList<>();
+        for (int i = 0; i < y.length; i++) {
+            if (Double.isNaN(speed[i]) || !Double.isNaN(y[i])) {
                 continue;
             }
-            ScatterFigure.Builder b = ScatterFigure.builder().size(PANEL_W, PANEL_H).title(shortName(c))
-                    .x("ambient wind speed", "m/s").y(yTitle, yUnit);
-            double[] span = paddedRange(speed);
-            if (span != null) {
-                b.xRange(span[0], span[1]);
+            if (!Double.isNaN(atLeast[i])) {
+                bound.add(new double[] {speed[i], atLeast[i]});
+            } else {
+                missing.add(new double[] {speed[i], frame});
             }
-            // every breeze type gets its own marker and colour, so coinciding types (corkscrew and backdoor in
-            // the linear model) stay visible as overlapping shapes
-            for (Map.Entry<String, double[][]> e : groups.entrySet()) {
-                b.points(e.getKey(), e.getValue()[0], e.getValue()[1]);
-            }
-            panels.add(b.build());
         }
-        return panels;
+        if (!bound.isEmpty()) {
+            b.series(Series.of("at least (limit of the search)", col(bound, 0), col(bound, 1)).noLine().marker(Marker.TRIANGLE)
+                    .openMarkers().color(new Color(0x555555)));
+        }
+        if (!missing.isEmpty()) {
+            b.series(Series.of(missingName + " (" + missing.size() + ", on the " + (top ? "top" : "bottom") + " frame)",
+                    col(missing, 0), col(missing, 1)).noLine().marker(Marker.CIRCLE).openMarkers().color(new Color(0x777777)));
+        }
+        return b.build();
+    }
+
+    private static double[] col(List<double[]> rows, int j) {
+        double[] c = new double[rows.size()];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = rows.get(i)[j];
+        }
+        return c;
     }
 
     /** The speeds' range widened by 10 % (at least 0.5 m/s) each side, so no point sits on the frame; null without data. */
@@ -142,7 +242,7 @@ public final class ComparisonFigures {
                 continue;
             }
             BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(PANEL_W, PANEL_H).title(shortName(c))
-                    .y(c.replaceAll(".*\\.", ""), "").x("breeze type");
+                    .y(ReaderText.words(c.replaceAll(".*\\.", "")), ReaderText.unitOf(c)).x("breeze type");
             for (Map.Entry<String, double[][]> e : groups.entrySet()) {
                 b.group(e.getKey(), e.getValue()[1]);
             }
@@ -151,11 +251,11 @@ public final class ComparisonFigures {
         return panels;
     }
 
-    /** Drops the "diagnostics." prefix and trailing unit-less bookkeeping for panel titles. */
+    /** A column key as a panel title, in words with its unit: never the raw key. */
     static String shortName(String column) {
-        String s = column.replaceFirst("^diagnostics\\.", "").replace(".time_local_h", "").replaceFirst("^sites\\.", "site ");
-        s = s.replaceFirst("\\.km$", "").replaceFirst("\\.onshore_arrival$", ": onshore arrival");
-        return s.replace('_', ' ').replace('.', ' ');
+        String s = column.replaceFirst("^diagnostics\\.", "").replace(".time_local_h", "").replaceFirst("^sites\\.", "");
+        s = s.replaceFirst("\\.onshore_arrival$", ": arrival");
+        return ReaderText.label(s);
     }
 
     private static void figure(List<Path> written, Path file, List<Figure> panels) throws IOException {
