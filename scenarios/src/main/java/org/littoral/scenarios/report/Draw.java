@@ -174,7 +174,8 @@ final class Draw {
         int best = 0;
         long bestCount = Long.MAX_VALUE;
         for (int c = 0; c < corners.length; c++) {
-            Rectangle r = new Rectangle(corners[c][0] - 4, corners[c][1] - 4, d.width + 8, d.height + 8);
+            // a margin of a marker's size, so points drawn on the frame (members without a value) count too
+            Rectangle r = new Rectangle(corners[c][0] - 12, corners[c][1] - 12, d.width + 24, d.height + 24);
             long n = 0;
             for (double[] p : avoidPx) {
                 if (r.contains(p[0], p[1])) {

@@ -26,7 +26,7 @@ import java.util.List;
  *     .x(distanceKm, "Distance inland", "km")
  *     .y(localTimeH, "Local time", "h")
  *     .values(u)                       // [ny][nx], NaN allowed
- *     .colorBar("Onshore wind u", "m s\u207b\u00b9")
+ *     .colorBar("Onshore wind u", "m/s")
  *     .diverging()                     // blue-white-red centred on zero
  *     .contours(-4, -2, 0, 2, 4)
  *     .verticalLine(12, "Site B")

@@ -12,7 +12,7 @@ import picocli.CommandLine.Parameters;
 /** {@code littoral run SCENARIO --out DIR}. */
 @Command(name = "run", description = {"Run a scenario (a built-in name or a YAML/JSON file): model, synthetic soundings, "
         + "diagnostics, figures.", "Writes summary.json, soundings.csv and soundings.nc, fields.nc (CF-1.8 netCDF), "
-        + "near_surface_breeze.csv and PNG figures to --out."})
+        + "near_surface_breeze.csv, PNG figures and report.html (everything in one self-contained page) to --out."})
 public final class RunCommand implements Callable<Integer> {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SCENARIO", description = "Built-in scenario name or path to a scenario file.")
@@ -39,9 +39,10 @@ public final class RunCommand implements Callable<Integer> {
         }
         Scenario s = BuiltinScenarios.resolve(scenario);
         Path dir = out != null ? out : Path.of("out", s.name());
-        new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null).fieldsNetcdf(!noFieldsNc)
-                .command("run " + scenario + " --out " + dir).run(dir);
-        System.out.println("littoral: wrote " + dir.resolve("summary.json") + " and the other outputs of " + s.name());
+        ScenarioRun.Outcome o = new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null)
+                .fieldsNetcdf(!noFieldsNc).command("run " + scenario + " --out " + dir).run(dir);
+        Path report = RunReport.write(s, o, dir);
+        System.out.println("littoral: wrote " + report + ", " + dir.resolve("summary.json") + " and the other outputs of " + s.name());
         return 0;
     }
 }

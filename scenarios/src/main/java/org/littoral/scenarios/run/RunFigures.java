@@ -83,7 +83,7 @@ final class RunFigures {
         FieldFigure.Builder b = FieldFigure.builder().size(1000, 640)
                 .title(String.format(Locale.ROOT, "%s: near-surface (%s m) cross-shore breeze wind", scenario, fmt(fs.nearSurfaceM)))
                 .x(xKm, "Distance inland", "km").y(fs.clockH.clone(), "Local time", "h").values(u)
-                .colorBar("Breeze wind u'", "m s\u207b\u00b9").diverging().colorRange(-amax, amax)
+                .colorBar("Breeze wind u'", "m/s").diverging().colorRange(-amax, amax)
                 .contours(d.thresholdMPerS()).verticalLine(0.0, "coast").note(note);
         for (int s = 0; s < siteXM.length; s++) {
             if (siteXM[s] >= range[0] && siteXM[s] <= range[1]) {
@@ -131,7 +131,7 @@ final class RunFigures {
                     .title(String.format(Locale.ROOT, "%s: cross-shore breeze wind at %s (%s km inland)", scenario, siteNames.get(s),
                             fmt(siteXM[s] / 1000.0)))
                     .x(fs.clockH.clone(), "Local time", "h").y(z, "Height", "m").values(v)
-                    .colorBar("Breeze wind u'", "m s\u207b\u00b9").diverging().colorRange(-m, m).contours(0.0)
+                    .colorBar("Breeze wind u'", "m/s").diverging().colorRange(-m, m).contours(0.0)
                     .note("Idealised " + model + " model output (not a forecast). Onshore positive; bold line: u' = 0 (top of the "
                             + "onshore layer, start of the return flow).")
                     .build();

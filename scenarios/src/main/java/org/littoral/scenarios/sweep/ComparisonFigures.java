@@ -31,7 +31,8 @@ public final class ComparisonFigures {
     private static final int PANEL_W = 520;
     private static final int PANEL_H = 380;
     private static final int MAX_PANELS = 6;
-    private static final Pattern ARRIVAL = Pattern.compile("(?i)^diagnostics\\.sites\\..*\\.onshore_arrival\\.time_local_h$");
+    private static final Pattern ARRIVAL = Pattern.compile("(?i).*arrival.*_h$");
+    private static final Pattern PENETRATION = Pattern.compile("(?i).*penetration.*km$");
     private static final Pattern POST_PASSAGE = Pattern.compile("(?i).*(post_passage|change|delta).*");
     private static final List<String> TYPE_ORDER = List.of("pure", "corkscrew", "backdoor", "synoptic", "undetermined");
 
@@ -44,21 +45,24 @@ public final class ComparisonFigures {
         String times = timesLabel(t);
         List<Figure> arrival = new ArrayList<>();
         for (String c : columns(t, ARRIVAL)) {
-            arrival.add(scatterPanel(t, c, null, siteTitle(t, c), times + ", local time", "h", "never arrives"));
+            boolean clock = c.endsWith("time_local_h");
+            arrival.add(scatterPanel(t, c, null, siteTitle(t, c), clock ? times + ", local time" : ReaderText.words(c), "h",
+                    "never arrives"));
         }
         figure(out, outDir.resolve("arrival-vs-ambient.png"), arrival);
         List<Figure> pen = new ArrayList<>();
-        if (t.columns().contains(PENETRATION_KM)) {
-            pen.add(scatterPanel(t, PENETRATION_KM, t.columns().contains(PENETRATION_AT_LEAST) ? PENETRATION_AT_LEAST : null,
-                    "Maximum inland penetration", "maximum inland penetration", "km", "no front"));
+        for (String c : columns(t, PENETRATION)) {
+            if (c.contains("at_least")) {
+                continue;
+            }
+            String atLeast = c.replaceFirst("km$", "at_least_km");
+            pen.add(scatterPanel(t, c, t.columns().contains(atLeast) ? atLeast : null, "Maximum inland penetration",
+                    "maximum inland penetration", "km", "no front"));
         }
         figure(out, outDir.resolve("penetration-vs-ambient.png"), pen);
         figure(out, outDir.resolve("post-passage-by-type.png"), boxPanels(t, columns(t, POST_PASSAGE)));
         return out;
     }
-
-    static final String PENETRATION_KM = "diagnostics.max_inland_penetration.km";
-    static final String PENETRATION_AT_LEAST = "diagnostics.max_inland_penetration.at_least_km";
 
     /**
      * What the members' times are: "front arrival" (nonlinear), the linear model's "onset of onshore flow (linear theory
@@ -89,7 +93,11 @@ public final class ComparisonFigures {
         if (!column.startsWith(prefix)) {
             return ReaderText.words(column.replaceFirst("^diagnostics\\.", ""));
         }
-        String site = column.substring(prefix.length(), column.indexOf(".onshore_arrival"));
+        int end = column.indexOf(".onshore_arrival");
+        if (end < 0) {
+            return ReaderText.words(column.replaceFirst("^diagnostics\\.", ""));
+        }
+        String site = column.substring(prefix.length(), end);
         String km = prefix + site + ".inland_km";
         if (t.columns().contains(km)) {
             double[] v = t.numbers(km);
