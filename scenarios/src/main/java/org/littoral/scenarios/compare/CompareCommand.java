@@ -31,7 +31,9 @@ import picocli.CommandLine.Parameters;
  */
 @Command(name = "compare", description = {"Compare a scenario with observed profiles: the same analysis chain on both; "
         + "bias and RMSE per site and layer, passage-time errors, observed | model time-height sections, report.html.",
-        "The scenario's sites must carry the observed site names. Design: docs/compare.md."})
+        "The scenario's sites must carry the observed site names. Design: docs/compare.md. Writes metrics.csv, "
+                + "metrics-by-day.csv, metrics.json, passage-errors.csv, passage-summary.csv, passage-times.png, "
+                + "section-<site>.png, qc-log.csv, report.html and the model run's own files in model/ to --out."})
 public final class CompareCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "Built-in scenario name or scenario file.")

@@ -46,7 +46,8 @@ import picocli.CommandLine.Option;
  * every figure.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = "Run the whole story on the INVENTED demo campaign (Quillmarsh Reach) and write one report, out/demo/index.html.")
+        description = "Run the whole story on the INVENTED demo campaign (Quillmarsh Reach) and write one report, "
+                + "out/demo/index.html; each part keeps its own outputs in sweep/, observe/, compare/, check-timing/ and plan/.")
 public final class DemoCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "out/demo", description = "Output folder (default: ${DEFAULT-VALUE}).")

@@ -33,7 +33,11 @@ import picocli.CommandLine.Parameters;
         "Each member's synthetic soundings at every candidate distance go through the analysis chain's passage detectors; "
                 + "scores are the chance of catching the passage with enough profiles either side, of resolving the propagation "
                 + "speed, and of separating a bay breeze from the sea breeze. Plan file format: docs/planning.md. "
-                + "Built-in plans: bay-coast-plan.",
+                + "Built-in plans: quillmarsh-plan-nonlinear (the invented demo coast, nonlinear), quillmarsh-plan (the same, "
+                + "linear quick look), bay-coast-plan (the sea-barrier-bay coast, nonlinear). Candidates over water or inside "
+                + "the model's sponges are left out with a note. Writes plan.json, recommendations.csv (every ranked set), "
+                + "site-capture.csv, arrival-fan.csv, arrival-fan.png, capture-by-distance.png, report.html, plan-inputs.json, "
+                + "sweep.json and members/ to --out.",
         "Idealised model, not a forecast. Drone operations follow local aviation rules (ceilings, airspace, storms); those rules win."})
 public final class PlanCommand implements Callable<Integer> {
 

@@ -11,8 +11,13 @@ import picocli.CommandLine.Parameters;
 
 /** {@code littoral sweep SWEEP --out DIR [--resume] [--threads N]}. */
 @Command(name = "sweep", description = {"Run every member of a sweep or ensemble file on all cores and compare them side by side.",
-        "Writes members/<id>.json as each member finishes (atomically; --resume continues a killed sweep), then comparison.csv/json"
-                + " and comparison figures. Built-in sweeps: ambient-flow, ambient-ensemble, hypotheses (nonlinear). The sweep file format is in docs/sweeps.md."})
+        "Writes members/<id>.json as each member finishes (atomically; --resume continues a killed sweep), runs/<id>/ (each "
+                + "member's run files, unless --no-run-files), then comparison.csv and comparison.json and the figures "
+                + "arrival-vs-ambient.png, penetration-vs-ambient.png and post-passage-by-type.png (when the members report those "
+                + "values). Built-in sweeps: hypotheses (nonlinear, 12 members), quillmarsh-ambient (linear, 12), ambient-flow "
+                + "(linear, 12), ambient-ensemble (linear, 40 drawn days); 'littoral sweep --list' describes them. Linear "
+                + "members' times are the onset of onshore flow (linear theory has no front). The sweep file format is in "
+                + "docs/sweeps.md."})
 public final class SweepCommand implements Callable<Integer> {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SWEEP", description = "Sweep file (YAML/JSON) or built-in sweep name.")

@@ -30,7 +30,8 @@ import picocli.CommandLine.Parameters;
                 + "times; flags with reasons (earlier than any plausible onset, inland before coast, implausible speed, one "
                 + "flight interval off and which neighbouring flight the evidence favours). A flag is advice: the data are "
                 + "never changed. PASSAGES is the passages.csv of littoral observe or a CSV with site, date, passage_time_local. "
-                + "Day file format: docs/timing-checks.md.",
+                + "Day file format: docs/timing-checks.md. Writes flags.csv, envelope.csv, summary.json, "
+                + "arrival-vs-distance.png, report.html, sweep.json and members/ to --out.",
         "Idealised model, not a forecast."})
 public final class CheckTimingCommand implements Callable<Integer> {
 
