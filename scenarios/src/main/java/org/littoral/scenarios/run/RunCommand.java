@@ -12,7 +12,8 @@ import picocli.CommandLine.Parameters;
 /** {@code littoral run SCENARIO --out DIR}. */
 @Command(name = "run", description = {"Run a scenario (a built-in name or a YAML/JSON file): model, synthetic soundings, "
         + "diagnostics, figures.", "Writes summary.json, soundings.csv and soundings.nc, fields.nc (CF-1.8 netCDF), "
-        + "near_surface_breeze.csv, PNG figures and report.html (everything in one self-contained page) to --out."})
+        + "near_surface_breeze.csv, the figures near_surface_breeze.png and site_<site>_breeze.png, and report.html "
+        + "(everything in one self-contained page) to --out."})
 public final class RunCommand implements Callable<Integer> {
 
     @Parameters(index = "0", arity = "0..1", paramLabel = "SCENARIO", description = "Built-in scenario name or path to a scenario file.")
