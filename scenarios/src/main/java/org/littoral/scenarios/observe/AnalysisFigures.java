@@ -26,6 +26,7 @@ import org.littoral.scenarios.report.HistogramFigure;
 import org.littoral.scenarios.report.LineFigure;
 import org.littoral.scenarios.report.Marker;
 import org.littoral.scenarios.report.Palette;
+import org.littoral.scenarios.report.ReaderText;
 import org.littoral.scenarios.report.Series;
 
 /**
@@ -98,12 +99,12 @@ public final class AnalysisFigures {
             List<Figure> chunk = panels.subList(from, Math.min(panels.size(), from + DAYS_PER_GRID));
             String suffix = panels.size() > DAYS_PER_GRID ? " (part " + part + ")" : "";
             out.add(new CaptionedFigure("wind-direction-days" + (panels.size() > DAYS_PER_GRID ? "-" + part : "") + ".png",
-                    FigureGrid.of("Wind direction " + layer.label() + " by day" + suffix, chunk, DAY_COLUMNS),
+                    FigureGrid.of("Wind direction " + ReaderText.layer(layer.label()) + " by day" + suffix, chunk, DAY_COLUMNS),
                     String.format(Locale.ROOT, "Wind direction (where the wind blows from) averaged over %s above ground against "
                             + "local time, one panel per day%s, one colour per site (%s). Dashed vertical lines: detected passages; "
                             + "those that turn the wind into the onshore sector (breeze fronts) are labelled by site. Dashed horizontal "
                             + "line: the onshore direction (from the sea, %.0f deg). Panel titles give the day's breeze type.",
-                            layer.label(), suffix, String.join(", ", sites), onshoreFrom)));
+                            ReaderText.layer(layer.label()), suffix, String.join(", ", sites), onshoreFrom)));
         }
         return out;
     }
@@ -189,10 +190,10 @@ public final class AnalysisFigures {
             if (groups.isEmpty()) {
                 continue;
             }
-            BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(480, 420).title("Change of " + label(v) + ", " + layer.label())
+            BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(480, 420).title("Change of " + label(v) + ", " + ReaderText.layer(layer.label()))
                     .y("change " + label(v), v.unit()).x("breeze type").showMean(true);
             for (Map.Entry<String, List<Double>> e : groups.entrySet()) {
-                b.group(e.getKey() + " (" + e.getValue().size() + ")", toArray(e.getValue()));
+                b.group(e.getKey(), toArray(e.getValue()));
             }
             panels.add(b.build());
         }
@@ -200,8 +201,8 @@ public final class AnalysisFigures {
         if (!panels.isEmpty()) {
             out.add(new CaptionedFigure("response-boxes.png", FigureGrid.of("Post-passage changes by breeze type", panels, 3),
                     String.format(Locale.ROOT, "Change of the %s layer mean across each onshore passage (post-window mean minus "
-                            + "pre-window mean; windows in the analysis settings), grouped by the day's breeze type (number of "
-                            + "passages in brackets). Boxes: quartiles; whiskers: 1.5 IQR; diamond: mean.", layer.label())));
+                            + "pre-window mean; windows in the analysis settings), grouped by the day's breeze type (the number "
+                            + "of passages under each box). Boxes: quartiles; whiskers: 1.5 IQR; diamond: mean.", ReaderText.layer(layer.label()))));
         }
         return out;
     }
@@ -218,7 +219,7 @@ public final class AnalysisFigures {
             CompositeSpec spec = e.getKey();
             boolean rel = spec.axis() == CompositeSpec.Axis.RELATIVE_TO_PASSAGE;
             LineFigure.Builder b = LineFigure.builder().size(600, 400)
-                    .title(label(spec.variable()) + (spec.anomaly() ? " anomaly" : "") + ", " + spec.layer().label())
+                    .title(label(spec.variable()) + (spec.anomaly() ? " anomaly" : "") + ", " + ReaderText.layer(spec.layer().label()))
                     .x(rel ? "time after passage" : "local time", "h")
                     .y(label(spec.variable()) + (spec.anomaly() ? " anomaly" : ""), spec.variable().unit());
             int colour = 0;

@@ -17,6 +17,8 @@ import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.analysis.ingest.QcLog;
 import org.littoral.scenarios.analysis.stats.ComparisonRow;
 import org.littoral.scenarios.report.HtmlReport;
+import org.littoral.scenarios.report.ClockTime;
+import org.littoral.scenarios.report.ReaderText;
 import org.littoral.scenarios.report.Table;
 
 /**
@@ -73,18 +75,18 @@ public final class AnalysisReport {
                 rep.figure(c.figure(), c.caption());
             }
         }
-        Table t = Table.of("day", "site", "#", "time (local)", "+/- h", "confidence", "onshore", "detectors", "breeze type");
+        Table t = Table.of("day", "site", "#", "time (local)", "+/-", "confidence", "onshore", "detectors", "breeze type");
         for (SiteDayResult d : r.siteDays()) {
             for (Passage p : d.passages()) {
                 if (compact && !p.turnsOnshore()) {
                     continue;
                 }
-                t.row(p.day(), p.site(), p.ordinal(), clock(p.timeHours()), p.uncertaintyHours(), p.confidence(),
+                t.row(p.day(), p.site(), p.ordinal(), clock(p.timeHours()), ClockTime.minutes(p.uncertaintyHours()), p.confidence(),
                         p.turnsOnshore() ? "yes" : "no", String.join(" ", p.detectors()),
                         d.breezeType().name().toLowerCase(Locale.ROOT));
             }
         }
-        t.decimals("+/- h", 2).decimals("confidence", 2);
+        t.decimals("confidence", 2);
         rep.table((compact ? "Detected passages that turn the wind onshore, per site and day (passages.csv has every passage and "
                 + "column)." : "Detected passages per site and day (passages.csv has every column).") + " Timing uncertainty is at "
                 + "least half the local flight interval; confidence is the detectors' agreement.", t);
@@ -108,14 +110,34 @@ public final class AnalysisReport {
             }
         }
         for (ComparisonRow row : rows) {
-            c.row(row.metric(), row.attribute(), row.groupA(), row.groupB(), row.nA(), row.nB(), row.meanA(), row.meanB(),
-                    row.meanA() - row.meanB(), row.test().name(), row.pValue(), row.pHolm());
+            boolean byType = row.attribute().equals("breeze_type");
+            c.row(metricText(row.metric()), ReaderText.words(row.attribute()),
+                    byType ? ReaderText.breezeType(row.groupA()) : row.groupA(), byType ? ReaderText.breezeType(row.groupB()) : row.groupB(),
+                    row.nA(), row.nB(), row.meanA(), row.meanB(), row.meanA() - row.meanB(), testName(row.test()), row.pValue(),
+                    row.pHolm());
         }
         c.decimals("mean A", 3).decimals("mean B", 3).decimals("difference", 3).decimals("p", 4).decimals("p (Holm)", 4);
         rep.table((compact ? "The group differences that stay significant after the Holm correction (p (Holm) < 0.05, at most "
                 + "15, smallest p first; comparisons.csv has all " + r.comparisons().size() + "). " : "")
                 + "Comparisons between groups: the test is chosen from the samples' size and normality diagnostics "
                 + "(comparisons.csv has them); p (Holm) corrects for the number of comparisons made.", c);
+    }
+
+    /** "change alongshore_wind_m_per_s 100-300m" -> "change of alongshore wind (m/s), 100-300 m". */
+    static String metricText(String metric) {
+        String[] p = metric.split(" ");
+        if (p.length != 3) {
+            return ReaderText.layer(metric.replace('_', ' '));
+        }
+        return p[0].replace('_', ' ') + " of " + ReaderText.label(p[1]) + ", " + ReaderText.layer(p[2]);
+    }
+
+    static String testName(ComparisonRow.Test t) {
+        return switch (t) {
+            case Z_TEST -> "z-test";
+            case WELCH_T -> "Welch t";
+            case MANN_WHITNEY -> "Mann-Whitney";
+        };
     }
 
     static String clock(double h) {

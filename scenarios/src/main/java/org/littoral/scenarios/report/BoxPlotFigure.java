@@ -73,7 +73,10 @@ public final class BoxPlotFigure extends Figure {
             hi = 1;
         }
         FontMetrics fm = g.getFontMetrics(Theme.TICK);
-        int noteH = g.getFontMetrics(Theme.NOTE).getHeight() + 4;
+        // the note wraps to the figure's width, so it is never cut off
+        FontMetrics nm = g.getFontMetrics(Theme.NOTE);
+        List<String> noteLines = Draw.wrap(nm, note, widthPx - 2.0 * Theme.PAD);
+        int noteH = noteLines.size() * nm.getHeight() + 4;
         AxisSpec xs = new AxisSpec();
         xs.label = xTitle;
         xs.min = 0.5;
@@ -130,7 +133,9 @@ public final class BoxPlotFigure extends Figure {
         f.drawAxes(g);
         g.setFont(Theme.NOTE);
         g.setColor(new Color(0x555555));
-        Draw.text(g, note, p.x, heightPx - Theme.PAD / 2.0, 0, 1);
+        for (int i = 0; i < noteLines.size(); i++) {
+            Draw.text(g, noteLines.get(i), Theme.PAD, heightPx - Theme.PAD / 2.0 - (noteLines.size() - 1 - i) * nm.getHeight(), 0, 1);
+        }
     }
 
     /** Shortens a label with an ellipsis until it fits the slot. */

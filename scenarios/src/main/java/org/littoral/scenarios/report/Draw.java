@@ -155,6 +155,27 @@ final class Draw {
         return new java.awt.Dimension(w + 30 + 8 + 16, entries.size() * rowH + 10);
     }
 
+    /** Splits text into lines no wider than {@code widthPx} at spaces (a word longer than the width gets a line of its own). */
+    static List<String> wrap(FontMetrics fm, String text, double widthPx) {
+        List<String> lines = new java.util.ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String w : text.split(" ")) {
+            String next = line.length() == 0 ? w : line + " " + w;
+            if (line.length() > 0 && fm.stringWidth(next) > widthPx) {
+                lines.add(line.toString());
+                line.setLength(0);
+                line.append(w);
+            } else {
+                line.setLength(0);
+                line.append(next);
+            }
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+
     /**
      * Draws a legend in the plot corner that hides the fewest of the given pixel points (upper right,
      * upper left, lower right, lower left, in that order of preference).
