@@ -30,7 +30,11 @@ import org.littoral.scenarios.plan.PlanFile;
 import org.littoral.scenarios.plan.PlanReport;
 import org.littoral.scenarios.plan.PlanSpec;
 import org.littoral.scenarios.report.HtmlReport;
+import org.littoral.scenarios.report.ClockTime;
 import org.littoral.scenarios.report.Table;
+import org.littoral.scenarios.timing.CheckTimingCommand;
+import org.littoral.scenarios.timing.CheckTimingResult;
+import org.littoral.scenarios.timing.TimingFlag;
 import org.littoral.scenarios.sweep.ScenarioMemberRunner;
 import org.littoral.scenarios.sweep.SweepCommand;
 import org.littoral.scenarios.sweep.SweepFile;
@@ -142,10 +146,11 @@ public final class DemoCommand implements Callable<Integer> {
         }
         new DemoDataWriter(DemoCampaign.generate(DemoCampaign.DEFAULT_SEED)).writeAll(fallback, List.of());
         // the timing check's day file is hand-written (not made by the generator); a copy ships in the jar
-        String dayFile = "check-timing-" + CHECK_DAY + ".yaml";
-        try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/" + dayFile)) {
-            if (in != null) {
-                org.littoral.scenarios.output.AtomicFile.write(fallback.resolve(dayFile), in.readAllBytes());
+        for (String handWritten : List.of("check-timing-" + CHECK_DAY + ".yaml", PLANTED)) {
+            try (java.io.InputStream in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/" + handWritten)) {
+                if (in != null) {
+                    org.littoral.scenarios.output.AtomicFile.write(fallback.resolve(handWritten), in.readAllBytes());
+                }
             }
         }
         return fallback;
@@ -175,33 +180,43 @@ public final class DemoCommand implements Callable<Integer> {
         rep.section("Hypotheses: the ambient flow (model sweep)");
         rep.paragraph(sr.spec().description() + ". " + sr.outcome().members() + " members (" + sr.outcome().failed()
                 + " failed). Each member is one run of the model; the comparison table and the member runs are in sweep/.");
+        String times = org.littoral.scenarios.sweep.ComparisonFigures.timesLabel(sr.table());
         for (Path f : sr.figures()) {
             byte[] png = Files.readAllBytes(f);
-            rep.figurePng(png, pngWidth(png), captionOf(f.getFileName().toString()));
+            rep.figurePng(png, pngWidth(png), captionOf(f.getFileName().toString(), times));
         }
-        rep.table("The sweep's main results per member (sweep/comparison.csv has every column). Arrival: the first time the "
-                + "total near-surface wind turns into the onshore sector at the site; empty where it never does (onshore all day, "
-                + "or the breeze never overcomes the ambient wind).", compactSweepTable(sr.table()));
+        rep.table("The sweep's main results per member (sweep/comparison.csv has every column). Arrival at a site: the " + times
+                + " there (docs/fronts.md), local time; 'never' where it does not get there during the run. Penetration: the "
+                + "farthest the front gets ('at least' at the limit of the search; 'none' where no front forms).",
+                compactSweepTable(sr.table()));
     }
 
     private static void compareSection(HtmlReport rep, Path dataDir, Path dir) throws IOException {
         org.littoral.scenarios.compare.CompareCommand.Outcome o = org.littoral.scenarios.compare.CompareCommand.run(
-                COMPARE_SCENARIO, "nonlinear", dataDir.resolve("binned/profiles-binned.csv.gz"), dataDir.resolve("coast.yaml").toString(),
-                dataDir.resolve("days.csv"), "scenario", dir, null);
+                COMPARE_SCENARIO, "nonlinear", dataDir.resolve("binned/profiles-binned.csv.gz"),
+                dataDir.resolve("coast.yaml").toString(), dataDir.resolve("days.csv"), "scenario", dir, null);
         org.littoral.scenarios.compare.Comparison.Result r = o.result();
         rep.section("The model against the observations");
-        rep.paragraph("The built-in scenario " + COMPARE_SCENARIO + " (the invented coast on a weak-offshore day, "
-                + r.modelName() + " model) was run once; its synthetic soundings at the two sites went through the same "
-                + "analysis chain as the observations, and were compared with the " + r.days().size() + " observed days of the "
-                + "same breeze type (" + r.pairs() + " paired profiles). Full tables and the per-day metrics: compare/.");
+        rep.paragraph("The built-in scenario " + COMPARE_SCENARIO + " (the invented coast on a weak-offshore day) was run once "
+                + "with the " + r.modelName() + " model (linear theory has no front, so compare runs the nonlinear model, on a "
+                + "200 x 2 km grid); its synthetic soundings at the two sites went through the same analysis chain as the "
+                + "observations, and were compared with the " + r.days().size() + " observed days of the same breeze type ("
+                + r.pairs() + " paired profiles). Full tables and the per-day metrics: compare/.");
         if (!r.notes().isEmpty()) {
             rep.bullets(r.notes());
         }
         rep.table("Bias (model minus observed) and RMSE per site, layer and variable; wind direction differences are "
-                + "circular (wrapped to +/-180 deg).", org.littoral.scenarios.compare.CompareOutputs.metricsTable(r.metrics()));
-        rep.table("Passage-time error per site: the chain's passage in the model soundings, and the model's own front "
-                + "arrival, minus the observed passage (hours).",
-                org.littoral.scenarios.compare.CompareOutputs.passageSummaryTable(r.passageSummaries()));
+                + "circular (wrapped to +/-180 deg).", org.littoral.scenarios.compare.CompareOutputs.metricsView(r.metrics()));
+        List<String> found = new ArrayList<>();
+        List<String> missed = new ArrayList<>();
+        for (org.littoral.scenarios.compare.Comparison.PassageSummary ps : r.passageSummaries()) {
+            (Double.isFinite(ps.modelChainH()) ? found : missed).add(ps.site());
+        }
+        rep.table(String.format(Locale.ROOT, "Passage timing per site: the chain's onshore passage in the model soundings, and the "
+                + "model's own front arrival, against the observed passages (errors model minus observed). The chain finds a "
+                + "passage in the model soundings at %s%s.", found.isEmpty() ? "no site" : String.join(" and ", found),
+                missed.isEmpty() ? "" : "; none at " + String.join(" and ", missed)),
+                org.littoral.scenarios.compare.CompareOutputs.passageSummaryView(r.passageSummaries(), r.modelName()));
         for (Path f : o.figures()) {
             byte[] png = Files.readAllBytes(f);
             rep.figurePng(png, pngWidth(png), "Time-height sections at " + f.getFileName().toString()
@@ -210,39 +225,165 @@ public final class DemoCommand implements Callable<Integer> {
         }
     }
 
-    private static void timingSection(HtmlReport rep, Path dataDir, Path passages, Path dir, int threads) throws IOException {
+    /** The hand-written table of planted timing errors on the check day (shipped in demo-data and in the jar). */
+    static final String PLANTED = "check-timing-" + CHECK_DAY + "-planted.csv";
+
+    /**
+     * The timing check on the demo's consistent day: the day's true passages (answer key), the chain's passages, and each
+     * planted error, all against one ensemble (run once; the other checks reuse its members). Every caption and verdict is
+     * computed from the flags, so a caption can never contradict its table.
+     */
+    private static void timingSection(HtmlReport rep, Path dataDir, Path chainPassages, Path dir, int threads) throws IOException {
         Path day = dataDir.resolve("check-timing-" + CHECK_DAY + ".yaml");
-        rep.section("Timing check of the observed passages");
+        rep.section("Timing check of one day's passages");
         if (!Files.isRegularFile(day)) {
             rep.paragraph("Not run: the day file " + day + " is not in the data folder (it ships in demo-data/).");
             return;
         }
-        org.littoral.scenarios.timing.CheckTimingResult c = org.littoral.scenarios.timing.CheckTimingCommand.run(passages, day,
-                dir, new org.littoral.scenarios.timing.CheckTimingCommand.Options(null, threads, false,
-                        new PrintStream(java.io.OutputStream.nullOutputStream(), false, java.nio.charset.StandardCharsets.UTF_8),
-                        false));
-        rep.paragraph("The passages the chain found on " + CHECK_DAY + " (observe/passages.csv) against an ensemble of "
-                + c.members() + " plausible versions of that day (" + c.model() + " model; day file " + day.getFileName()
-                + "), and the speed implied between the sites against a density-current speed from the day's temperature "
-                + "contrast and breeze depth (Benjamin 1968; Simpson & Britter 1980). A flag is advice, never an edit of the "
-                + "data. Full outputs: check-timing/.");
+        PrintStream quiet = new PrintStream(java.io.OutputStream.nullOutputStream(), false, java.nio.charset.StandardCharsets.UTF_8);
+        Path truth = dataDir.resolve("truth/passages.csv");
+        CheckTimingResult c = CheckTimingCommand.run(truth, day, dir.resolve("true-passages"),
+                new CheckTimingCommand.Options(null, threads, false, quiet, false));
+        CheckTimingResult chain = CheckTimingCommand.run(chainPassages, day, reuseEnsemble(dir.resolve("true-passages"),
+                dir.resolve("chain-passages")), new CheckTimingCommand.Options(null, threads, true, quiet, false));
+        rep.paragraph("The passage times of " + CHECK_DAY + ", a consistent day of the invented campaign (weak offshore wind, a "
+                + "bay breeze and then the sea breeze), against an ensemble of " + c.members() + " plausible versions of that day ("
+                + c.model() + " model; day file " + day.getFileName() + "), and the speed implied between the sites against a "
+                + "density-current speed from the day's temperature contrast and breeze depth (Benjamin 1968; Simpson & Britter "
+                + "1980). Three sets of times are checked against the same ensemble: the true passages (the answer key), the "
+                + "passages the analysis chain found in the demo profiles, and the true passages with one error planted at a "
+                + "time. A flag is advice, never an edit of the data. Full outputs: check-timing/.");
+        if (!c.notes().isEmpty()) {
+            rep.bullets(c.notes());
+        }
         rep.figure(c.figure(), c.figureCaption());
-        rep.table("Flags raised, with their reasons (none: the timings are consistent).", c.flagsTable());
-        rep.table("Where each observed passage falls in the ensemble's arrival times.", c.envelopeTable());
+        Table t = Table.of("passages", "site", "passage", "time", "flags");
+        int trueFlagged = addPassageRows(t, "true (answer key)", c);
+        int chainFlagged = addPassageRows(t, "found by the chain", chain);
+        int nTrue = c.check().passages().size();
+        int nChain = chain.check().passages().size();
+        rep.table(String.format(Locale.ROOT, "The true passages and the chain's passages of %s against the ensemble: %s of the "
+                + "%d true passages flagged; %s of the chain's %d passages flagged.", CHECK_DAY,
+                trueFlagged == 0 ? "none" : String.valueOf(trueFlagged), nTrue, chainFlagged == 0 ? "none" : String.valueOf(chainFlagged),
+                nChain) + (trueFlagged + chainFlagged == 0 ? "" : " The reasons are in the table below."), t);
+        if (c.check().flags().size() + chain.check().flags().size() > 0) {
+            Table reasons = Table.of("passages", "site", "flag", "reason");
+            for (TimingFlag f : c.check().flags()) {
+                reasons.row("true", f.site(), f.kind().name(), f.reason());
+            }
+            for (TimingFlag f : chain.check().flags()) {
+                reasons.row("chain", f.site(), f.kind().name(), f.reason());
+            }
+            rep.table("Why each of those passages was flagged.", reasons);
+        }
+        rep.table(c.envelopeCaption(), c.envelopeView());
+
+        Path plantedFile = dataDir.resolve(PLANTED);
+        if (!Files.isRegularFile(plantedFile)) {
+            rep.paragraph("Planted errors not checked: " + plantedFile + " is not in the data folder (it ships in demo-data/).");
+            return;
+        }
+        Table pt = Table.of("case", "what was planted", "expected flag", "flags raised at that site", "right reason");
+        int right = 0;
+        List<Planted> cases = planted(plantedFile);
+        for (Planted pc : cases) {
+            Path cdir = reuseEnsemble(dir.resolve("true-passages"), dir.resolve("planted-" + pc.name()));
+            Path csv = cdir.resolve("passages.csv");
+            org.littoral.scenarios.output.AtomicFile.write(csv, pc.csv().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            CheckTimingResult r = CheckTimingCommand.run(csv, day, cdir, new CheckTimingCommand.Options(null, threads, true, quiet,
+                    false));
+            List<String> raised = new ArrayList<>();
+            boolean ok = false;
+            for (TimingFlag f : r.check().flags()) {
+                if (f.site().equals(pc.site())) {
+                    raised.add(f.kind().name());
+                    ok |= f.kind().name().equals(pc.expectedFlag());
+                }
+            }
+            right += ok ? 1 : 0;
+            pt.row(pc.name(), pc.what(), pc.expectedFlag(), raised.isEmpty() ? "none" : String.join(", ", raised), ok ? "yes" : "NO");
+        }
+        rep.table(String.format(Locale.ROOT, "Planted errors (%s): each case is the day's true passages with one time changed. "
+                + "%d of the %d planted errors are flagged with the expected reason at the planted site%s.", PLANTED, right,
+                cases.size(), right == cases.size() ? "" : "; the others are listed with what was raised instead"), pt);
     }
 
-    /** Member, ambient wind, breeze type, peak breeze, depth, penetration and the arrival at each site. */
+    /** Rows per checked passage: the passage set, site, label, time and its flags; returns how many passages were flagged. */
+    private static int addPassageRows(Table t, String what, CheckTimingResult r) {
+        int flagged = 0;
+        for (org.littoral.scenarios.timing.TimingCheck.PassageAssessment a : r.check().passages()) {
+            var p = a.passage();
+            List<String> kinds = new ArrayList<>();
+            for (TimingFlag f : r.check().flags()) {
+                if (f.site().equals(p.site()) && f.label().equals(p.label())) {
+                    kinds.add(f.kind().name());
+                }
+            }
+            flagged += kinds.isEmpty() ? 0 : 1;
+            t.row(what, p.site(), p.label().replace('_', ' '), ClockTime.hhmmWithin(p.timeHours(), p.uncertaintyHours()),
+                    kinds.isEmpty() ? "none" : String.join(", ", kinds));
+        }
+        return flagged;
+    }
+
+    /** A new check folder holding a copy of an ensemble already computed (members and sweep record), so it is reused. */
+    static Path reuseEnsemble(Path from, Path to) throws IOException {
+        Files.createDirectories(to.resolve("members"));
+        try (var files = Files.list(from.resolve("members"))) {
+            for (Path f : (Iterable<Path>) files::iterator) {
+                Files.copy(f, to.resolve("members").resolve(f.getFileName()), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            }
+        }
+        for (String f : List.of("sweep.json")) {
+            if (Files.isRegularFile(from.resolve(f))) {
+                Files.copy(from.resolve(f), to.resolve(f), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            }
+        }
+        return to;
+    }
+
+    /** One planted-error case: its rows as a check-timing passage table, the planted site and the flag it must raise. */
+    record Planted(String name, String what, String site, String expectedFlag, String csv) {
+    }
+
+    static List<Planted> planted(Path file) {
+        CsvTable t = CsvTable.read(file);
+        Map<String, StringBuilder> rows = new LinkedHashMap<>();
+        Map<String, String[]> meta = new LinkedHashMap<>();
+        for (int r = 0; r < t.rowCount(); r++) {
+            String c = t.cell(r, t.column("case"));
+            rows.computeIfAbsent(c, k -> new StringBuilder("# INVENTED planted case " + k + "\nsite,date,passage_time_local,label\n"))
+                    .append(t.cell(r, t.column("site"))).append(',').append(t.cell(r, t.column("date"))).append(',')
+                    .append(t.cell(r, t.column("passage_time_local"))).append(',').append(t.cell(r, t.column("label"))).append('\n');
+            if (!t.cell(r, t.column("expected_flag")).isEmpty()) {
+                meta.put(c, new String[] {t.cell(r, t.column("planted")), t.cell(r, t.column("site")),
+                        t.cell(r, t.column("expected_flag"))});
+            }
+        }
+        List<Planted> out = new ArrayList<>();
+        rows.forEach((c, csv) -> {
+            String[] m = meta.get(c);
+            if (m == null) {
+                throw new org.littoral.scenarios.input.UserInputException(file + ": case " + c + " has no row with an "
+                        + "expected_flag; mark the row whose time was changed");
+            }
+            out.add(new Planted(c, m[0], m[1], m[2], csv.toString()));
+        });
+        return out;
+    }
+
+    /** Member, ambient wind, breeze type, peak breeze, depth, penetration and the arrival at each site (HH:MM). */
     static Table compactSweepTable(org.littoral.scenarios.sweep.ComparisonTable t) {
         List<String> siteCols = new ArrayList<>();
         for (String c : t.columns()) {
-            if (c.startsWith("diagnostics.sites.") && c.endsWith(".onshore_arrival.time_local")) {
+            if (c.startsWith("diagnostics.sites.") && c.endsWith(".onshore_arrival.time_local_h")) {
                 siteCols.add(c);
             }
         }
         List<String> head = new ArrayList<>(List.of("member", "ambient from (deg)", "speed (m/s)", "breeze type",
                 "peak breeze (m/s)", "peak time", "onshore layer (m)", "penetration (km)"));
         for (String c : siteCols) {
-            head.add("arrival " + c.substring("diagnostics.sites.".length(), c.length() - ".onshore_arrival.time_local".length()));
+            head.add("arrival " + c.substring("diagnostics.sites.".length(), c.length() - ".onshore_arrival.time_local_h".length()));
         }
         Table out = Table.of(head);
         for (java.util.Map<String, Object> r : t.rows()) {
@@ -254,14 +395,27 @@ public final class DemoCommand implements Callable<Integer> {
             row.add(r.get("diagnostics.peak_onshore_wind.breeze_m_per_s"));
             row.add(r.get("diagnostics.peak_onshore_wind.time_local"));
             row.add(r.get("diagnostics.circulation_at_peak.onshore_layer_depth_m"));
-            row.add(r.get("diagnostics.max_inland_penetration.km"));
+            row.add(penetration(r));
             for (String c : siteCols) {
-                row.add(r.get(c));
+                Object h = r.get(c);
+                row.add(h instanceof Number n ? ClockTime.hhmm(n.doubleValue()) : "never");
             }
             out.row(row.toArray());
         }
-        return out.decimals("peak breeze (m/s)", 1).decimals("onshore layer (m)", 0).decimals("penetration (km)", 0)
+        return out.decimals("peak breeze (m/s)", 1).decimals("onshore layer (m)", 0)
                 .decimals("ambient from (deg)", 0).decimals("speed (m/s)", 1);
+    }
+
+    private static String penetration(java.util.Map<String, Object> r) {
+        Object km = r.get("diagnostics.max_inland_penetration.km");
+        if (km instanceof Number n) {
+            return String.format(Locale.ROOT, "%.0f", n.doubleValue());
+        }
+        Object atLeast = r.get("diagnostics.max_inland_penetration.at_least_km");
+        if (atLeast instanceof Number n) {
+            return String.format(Locale.ROOT, "at least %.0f", n.doubleValue());
+        }
+        return "none";
     }
 
     /** Width in pixels from a PNG's IHDR chunk (bytes 16-19, big-endian). */
@@ -269,16 +423,17 @@ public final class DemoCommand implements Callable<Integer> {
         return ((png[16] & 0xff) << 24) | ((png[17] & 0xff) << 16) | ((png[18] & 0xff) << 8) | (png[19] & 0xff);
     }
 
-    static String captionOf(String file) {
-        String base = file.replace(".png", "").replace('-', ' ');
+    static String captionOf(String file, String times) {
         return switch (file) {
-            case "arrival-vs-ambient.png" -> "Onshore-flow arrival time at each site against the ambient wind speed, one line "
-                    + "per ambient direction (breeze type).";
-            case "penetration-vs-ambient.png" -> "Maximum inland penetration of the onshore flow against the ambient wind speed, "
-                    + "one line per ambient direction (breeze type).";
-            case "post-passage-by-type.png" -> "Changes at the sites in the two hours after the onshore flow arrives, by breeze type "
+            case "arrival-vs-ambient.png" -> "The " + times + " at each site against the ambient wind speed, one marker per "
+                    + "breeze type (the ambient direction relative to the coast); open circles on the top frame: members in "
+                    + "which it never gets there.";
+            case "penetration-vs-ambient.png" -> "Maximum inland penetration of the front against the ambient wind speed, one "
+                    + "marker per breeze type; open triangles: lower bounds (the front reached the limit of the search); open "
+                    + "circles on the bottom frame: no front.";
+            case "post-passage-by-type.png" -> "Changes at the sites in the two hours after the front arrives, by breeze type "
                     + "(members grouped by the ambient wind relative to the coast).";
-            default -> "Sweep comparison: " + base + ".";
+            default -> "Sweep comparison: " + file.replace(".png", "").replace('-', ' ') + ".";
         };
     }
 

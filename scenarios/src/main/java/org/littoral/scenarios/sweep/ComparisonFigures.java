@@ -68,7 +68,7 @@ public final class ComparisonFigures {
      * What the members' times are: "front arrival" (nonlinear), the linear model's "onset of onshore flow (linear theory
      * has no front)", or both names when a sweep mixes the models.
      */
-    static String timesLabel(ComparisonTable t) {
+    public static String timesLabel(ComparisonTable t) {
         boolean linear = false;
         boolean fronts = false;
         for (String m : t.columns().contains("model") ? t.texts("model") : List.<String>of()) {
