@@ -120,9 +120,10 @@ public final class PlanCommand implements Callable<Integer> {
         DenseWindow[][] windows = windows(plan, members, probe, threads, log);
         Files.createDirectories(dir);
         checkResumeInputs(plan, model, windows, dir, resume);
-        PlanMemberRunner runner = new PlanMemberRunner(plan, solver, windows, settings);
+        PlanMemberRunner runner = probe.withWindows(windows);
         SweepExecutor.Outcome so = SweepExecutor.run(plan.ensemble(), members, dir, runner,
                 new SweepExecutor.Options(threads, resume, log, System.console() != null, 15_000));
+        runner.clearPilots();
         MemberStore store = new MemberStore(dir);
         List<JsonNode> records = new ArrayList<>();
         for (Member mm : members) {

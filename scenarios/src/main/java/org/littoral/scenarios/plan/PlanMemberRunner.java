@@ -55,6 +55,7 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
         this.solver = solver;
         this.windows = windows;
         this.analysis = analysis.validate();
+        this.pilots = new java.util.concurrent.ConcurrentHashMap<>();
     }
 
     public Scenario scenarioOf(Member m) {
@@ -82,18 +83,47 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
         return out;
     }
 
-    /** Truths only (for the pilot members that set the automatic dense windows). */
-    public double[] truthsOf(Member m) {
-        Scenario s = scenarioOf(m);
-        return truths(s, solver.solve(s));
+    /**
+     * What a member gives before any cadence is chosen: the truths and the soundings flown at the finest cadence of
+     * any option at every candidate. Neither depends on the dense windows, so a pilot member's are kept for its
+     * scoring run instead of solving it twice.
+     */
+    private record Flown(double[] truth, List<Profile> profiles, String modelName) {
     }
 
-    @Override
-    public MemberResult apply(Member m) {
+    /** Pilot members' flights, from {@link #truthsOf} until {@link #apply} takes them (shared by {@link #withWindows}). */
+    private final java.util.concurrent.ConcurrentHashMap<String, Flown> pilots;
+
+    private PlanMemberRunner(PlanMemberRunner from, DenseWindow[][] windows) {
+        this.plan = from.plan;
+        this.scenarios = from.scenarios;
+        this.solver = from.solver;
+        this.windows = windows;
+        this.analysis = from.analysis;
+        this.pilots = from.pilots;
+    }
+
+    /** The same runner with the dense windows set, keeping the pilot members' flights so they are not solved again. */
+    public PlanMemberRunner withWindows(DenseWindow[][] windows) {
+        return new PlanMemberRunner(this, windows);
+    }
+
+    /** Forgets the pilot members' flights (e.g. after a resumed run that did not need them). */
+    public void clearPilots() {
+        pilots.clear();
+    }
+
+    /** Truths only (for the pilot members that set the automatic dense windows); the member's flights are kept for scoring. */
+    public double[] truthsOf(Member m) {
+        Flown f = fly(m);
+        pilots.put(m.id(), f);
+        return f.truth();
+    }
+
+    private Flown fly(Member m) {
         Scenario s = scenarioOf(m);
         BreezeSolution sol = solver.solve(s);
         double[] truth = truths(s, sol);
-        Coast coast = s.coast();
         boolean periodic = s.kind() == Scenario.Kind.LINEAR;
         double finest = finestIntervalMin();
         FlightSchedule all = FlightSchedule.regular(finest, plan.operatingStartH(), plan.operatingEndH());
@@ -104,8 +134,20 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
         }
         SoundingSpec spec = new SoundingSpec(plan.ceilingM(), PLAN_BIN_M, SoundingSpec.DEFAULT_ASCENT_RATE_M_PER_S,
                 PLAN_NODE_SPACING_SEC, null, m.id(), 0);
-        List<Profile> flown = new SoundingSampler(sol, coast, sites, all, spec, periodic).sampleAll();
-        List<SiteDay> byCandidate = AnalysisChain.group(flown);
+        return new Flown(truth, new SoundingSampler(sol, s.coast(), sites, all, spec, periodic).sampleAll(), sol.modelName());
+    }
+
+    @Override
+    public MemberResult apply(Member m) {
+        Scenario s = scenarioOf(m);
+        Flown fl = pilots.remove(m.id());
+        if (fl == null) {
+            fl = fly(m);
+        }
+        double[] truth = fl.truth();
+        Coast coast = s.coast();
+        double[] x = candidateXM();
+        List<SiteDay> byCandidate = AnalysisChain.group(fl.profiles());
         List<PassageDetector> detectors = PassageFinder.detectors(analysis.detection);
 
         JsonNodeFactory f = JsonNodeFactory.instance;
@@ -148,7 +190,7 @@ public final class PlanMemberRunner implements Function<Member, MemberResult> {
             co.set("profiles_after", ints(after));
             co.set("flights", ints(flights));
         }
-        out.put("model", sol.modelName());
+        out.put("model", fl.modelName());
         return new MemberResult(out);
     }
 
