@@ -32,6 +32,7 @@ import org.littoral.scenarios.plan.PlanSpec;
 import org.littoral.scenarios.report.HtmlReport;
 import org.littoral.scenarios.report.ClockTime;
 import org.littoral.scenarios.report.Table;
+import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.timing.CheckTimingCommand;
 import org.littoral.scenarios.timing.CheckTimingResult;
 import org.littoral.scenarios.timing.TimingFlag;
@@ -64,16 +65,22 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
-    @Option(names = "--sweep", paramLabel = "SWEEP", defaultValue = "hypotheses",
-            description = "Hypothesis sweep to run (built-in name or file; default: ${DEFAULT-VALUE}).")
+    @Option(names = "--sweep", paramLabel = "SWEEP",
+            description = "Hypothesis sweep to run (built-in name or file; default: hypotheses, nonlinear).")
     String sweepRef;
 
-    @Option(names = "--plan", paramLabel = "PLAN", defaultValue = "quillmarsh-plan-nonlinear",
-            description = "Plan to run (built-in name or file; default: ${DEFAULT-VALUE}; quillmarsh-plan is the linear quick look).")
+    @Option(names = "--plan", paramLabel = "PLAN",
+            description = "Plan to run (built-in name or file; default: quillmarsh-plan-nonlinear; quillmarsh-plan is the linear "
+                    + "quick look).")
     String planRef;
 
     @Option(names = "--resume", description = "Keep sweep and plan members already computed in DIR.")
     boolean resume;
+
+    @Option(names = "--quick", description = "The linear quick look for every part (seconds instead of a minute): the linear "
+            + "sweep quillmarsh-ambient and plan quillmarsh-plan unless --sweep or --plan say otherwise, and the linear model "
+            + "for the comparison and the timing check. Linear theory has no front: its times are the onset of onshore flow.")
+    boolean quick;
 
     /** Scenario compared with the observations (the invented coast on a weak-offshore day). */
     static final String COMPARE_SCENARIO = "quillmarsh-reach";
@@ -84,6 +91,13 @@ public final class DemoCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        if (sweepRef == null) {
+            sweepRef = quick ? "quillmarsh-ambient" : "hypotheses";
+        }
+        if (planRef == null) {
+            planRef = quick ? "quillmarsh-plan" : "quillmarsh-plan-nonlinear";
+        }
+        String jobModel = quick ? "linear" : "nonlinear";
         Progress p = new Progress(System.err, 6);
         Files.createDirectories(out);
         HtmlReport rep = HtmlReport.create("littoral demo: the INVENTED Quillmarsh Reach campaign");
@@ -118,10 +132,10 @@ public final class DemoCommand implements Callable<Integer> {
         AnalysisReport.addSections(rep, ar, o.qc(), figs, true);
 
         p.step("model against the observations (" + COMPARE_SCENARIO + ", pure days)");
-        compareSection(rep, dataDir, out.resolve("compare"));
+        compareSection(rep, dataDir, out.resolve("compare"), jobModel);
 
         p.step("timing check of the observed passages on " + CHECK_DAY);
-        timingSection(rep, dataDir, obsDir.resolve("passages.csv"), out.resolve("check-timing"), n);
+        timingSection(rep, dataDir, obsDir.resolve("passages.csv"), out.resolve("check-timing"), n, jobModel);
 
         p.step("site and cadence plan for the invented coast (" + planRef + ")");
         PlanSpec plan = PlanFile.load(planRef);
@@ -191,15 +205,16 @@ public final class DemoCommand implements Callable<Integer> {
                 compactSweepTable(sr.table()));
     }
 
-    private static void compareSection(HtmlReport rep, Path dataDir, Path dir) throws IOException {
+    private static void compareSection(HtmlReport rep, Path dataDir, Path dir, String model) throws IOException {
         org.littoral.scenarios.compare.CompareCommand.Outcome o = org.littoral.scenarios.compare.CompareCommand.run(
-                COMPARE_SCENARIO, "nonlinear", dataDir.resolve("binned/profiles-binned.csv.gz"),
+                COMPARE_SCENARIO, model, dataDir.resolve("binned/profiles-binned.csv.gz"),
                 dataDir.resolve("coast.yaml").toString(), dataDir.resolve("days.csv"), "scenario", dir, null);
         org.littoral.scenarios.compare.Comparison.Result r = o.result();
         rep.section("The model against the observations");
         rep.paragraph("The built-in scenario " + COMPARE_SCENARIO + " (the invented coast on a weak-offshore day) was run once "
-                + "with the " + r.modelName() + " model (linear theory has no front, so compare runs the nonlinear model, on a "
-                + "200 x 2 km grid); its synthetic soundings at the two sites went through the same analysis chain as the "
+                + "with the " + r.modelName() + " model (" + (JobModel.isLinear(r.modelName()) ? "the linear quick look: its "
+                + "times are the onset of onshore flow" : "linear theory has no front, so compare runs the nonlinear model, on a "
+                + "200 x 2 km grid") + "); its synthetic soundings at the two sites went through the same analysis chain as the "
                 + "observations, and were compared with the " + r.days().size() + " observed days of the same breeze type ("
                 + r.pairs() + " paired profiles). Full tables and the per-day metrics: compare/.");
         if (!r.notes().isEmpty()) {
@@ -233,7 +248,8 @@ public final class DemoCommand implements Callable<Integer> {
      * planted error, all against one ensemble (run once; the other checks reuse its members). Every caption and verdict is
      * computed from the flags, so a caption can never contradict its table.
      */
-    private static void timingSection(HtmlReport rep, Path dataDir, Path chainPassages, Path dir, int threads) throws IOException {
+    private static void timingSection(HtmlReport rep, Path dataDir, Path chainPassages, Path dir, int threads, String model)
+            throws IOException {
         Path day = dataDir.resolve("check-timing-" + CHECK_DAY + ".yaml");
         rep.section("Timing check of one day's passages");
         if (!Files.isRegularFile(day)) {
@@ -243,9 +259,9 @@ public final class DemoCommand implements Callable<Integer> {
         PrintStream quiet = new PrintStream(java.io.OutputStream.nullOutputStream(), false, java.nio.charset.StandardCharsets.UTF_8);
         Path truth = dataDir.resolve("truth/passages.csv");
         CheckTimingResult c = CheckTimingCommand.run(truth, day, dir.resolve("true-passages"),
-                new CheckTimingCommand.Options(null, threads, false, quiet, false));
+                new CheckTimingCommand.Options(model, threads, false, quiet, false));
         CheckTimingResult chain = CheckTimingCommand.run(chainPassages, day, reuseEnsemble(dir.resolve("true-passages"),
-                dir.resolve("chain-passages")), new CheckTimingCommand.Options(null, threads, true, quiet, false));
+                dir.resolve("chain-passages")), new CheckTimingCommand.Options(model, threads, true, quiet, false));
         rep.paragraph("The passage times of " + CHECK_DAY + ", a consistent day of the invented campaign (weak offshore wind, a "
                 + "bay breeze and then the sea breeze), against an ensemble of " + c.members() + " plausible versions of that day ("
                 + c.model() + " model; day file " + day.getFileName() + "), and the speed implied between the sites against a "
@@ -290,7 +306,7 @@ public final class DemoCommand implements Callable<Integer> {
             Path cdir = reuseEnsemble(dir.resolve("true-passages"), dir.resolve("planted-" + pc.name()));
             Path csv = cdir.resolve("passages.csv");
             org.littoral.scenarios.output.AtomicFile.write(csv, pc.csv().getBytes(java.nio.charset.StandardCharsets.UTF_8));
-            CheckTimingResult r = CheckTimingCommand.run(csv, day, cdir, new CheckTimingCommand.Options(null, threads, true, quiet,
+            CheckTimingResult r = CheckTimingCommand.run(csv, day, cdir, new CheckTimingCommand.Options(model, threads, true, quiet,
                     false));
             List<String> raised = new ArrayList<>();
             boolean ok = false;

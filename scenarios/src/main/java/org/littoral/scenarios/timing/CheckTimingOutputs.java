@@ -109,7 +109,8 @@ final class CheckTimingOutputs {
     }
 
     static String envelopeCaption(Inputs in) {
-        String what = JobModel.isLinear(in.model()) ? "the " + JobModel.LINEAR_TIMES : "the model front's arrival";
+        String what = JobModel.isLinear(in.model()) ? "the onset of onshore flow; linear theory has no front"
+                : "the model front's arrival";
         return "Where each observed sea-breeze passage falls among the ensemble members' times (" + what + ") at its site: "
                 + "percentiles of the members (local time; a member that never arrives counts as later than any time, and a "
                 + "percentile among those reads 'never'), the observed time with its uncertainty, and its percentile (mid-rank).";
@@ -269,7 +270,7 @@ final class CheckTimingOutputs {
     }
 
     static String caption(DaySpec spec, Inputs in) {
-        String what = JobModel.isLinear(in.model()) ? "The " + JobModel.LINEAR_TIMES + " (docs/fronts.md)"
+        String what = JobModel.isLinear(in.model()) ? "The onset of onshore flow (linear theory has no front; docs/fronts.md)"
                 : "Model front arrival (docs/fronts.md)";
         return String.format(Locale.ROOT, "%s against distance inland for %s: median, 25-75 %% and 5-95 %% bands of %d %s-model "
                 + "ensemble members (uncertain inputs drawn as listed in the report), with the observed passage times and their "

@@ -15,30 +15,43 @@ import org.littoral.scenarios.report.LineFigure;
 class DemoCommandTest {
 
     /**
-     * The whole demo end to end, with the linear sweep and the linear quick-look plan so that it runs in
-     * seconds: one report with every step's section, every figure embedded, the cautions, and each step's
-     * own files.
+     * The whole demo end to end as the linear quick look (--quick), so that it runs in seconds: one report with every
+     * step's section, every figure embedded, the cautions, and each step's own files; the timing check flags every
+     * planted error with its reason, and its captions are computed from its flags.
      */
     @Test
     void theDemoWritesOneReportWithEveryStepAndEveryFigureEmbedded(@TempDir Path tmp) throws Exception {
         Path out = tmp.resolve("demo");
         int rc = new picocli.CommandLine(new org.littoral.scenarios.cli.Main()).execute("demo", "--out", out.toString(),
-                "--data", tmp.resolve("no-data-here").toString(), "--sweep", "quillmarsh-ambient", "--plan", "quillmarsh-plan",
-                "--threads", "2");
+                "--data", tmp.resolve("no-data-here").toString(), "--quick", "--threads", "2");
         assertEquals(0, rc);
         String html = Files.readString(out.resolve("index.html"));
         for (String heading : new String[] {"What was run and why", "Hypotheses: the ambient flow", "what the analysis chain finds",
-            "The model against the observations", "Timing check of the observed passages", "Recommended site sets and cadences",
-            "Cautions"}) {
+            "The model against the observations", "Timing check of one day", "Recommended site sets and cadences",
+            "Why capture is at most", "Cautions"}) {
             assertTrue(html.contains(heading), "section '" + heading + "'");
         }
         int figures = html.split("<img src=\"data:image/png;base64,", -1).length - 1;
         assertTrue(figures >= 10, "figures embedded: " + figures);
         assertTrue(html.contains("Drone operations follow local aviation rules"));
         assertTrue(html.contains("INVENTED"));
+        assertTrue(html.contains("3 of the 3 planted errors are flagged with the expected reason"), "planted errors");
+        assertTrue(html.contains("onset of onshore flow (linear theory has no front)"), "the quick look labels its times");
+        assertTrue(!html.contains("(none: the timings are consistent)"), "no fixed caption above the flags");
         for (String f : new String[] {"sweep/comparison.csv", "observe/passages.csv", "compare/metrics.csv",
-            "check-timing/flags.csv", "plan/plan.json"}) {
+            "check-timing/true-passages/flags.csv", "check-timing/chain-passages/flags.csv",
+            "check-timing/planted-too-fast/flags.csv", "plan/plan.json"}) {
             assertTrue(Files.isRegularFile(out.resolve(f)), f);
+        }
+    }
+
+    @Test
+    void theBundledPlantedErrorsAreTheOnesInDemoData() throws Exception {
+        Path repo = Path.of("").toAbsolutePath().getParent();
+        Path inRepo = repo.resolve("demo-data/" + DemoCommand.PLANTED);
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isRegularFile(inRepo), "run from the scenarios module of a checkout");
+        try (var in = DemoCommand.class.getResourceAsStream("/org/littoral/scenarios/demo/" + DemoCommand.PLANTED)) {
+            assertEquals(Files.readString(inRepo), new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8));
         }
     }
 

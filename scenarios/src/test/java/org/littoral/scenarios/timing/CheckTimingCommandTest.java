@@ -189,7 +189,7 @@ class CheckTimingCommandTest {
         assertTrue(r.check().passages().get(0).envelopePercentile() > 95, "the percentile is still reported");
         assertTrue(r.flagsCaption().startsWith("No flag") && r.flagsCaption().contains("never flags a passage on its own"),
                 r.flagsCaption());
-        assertTrue(r.figureCaption().contains("onset of onshore flow (linear theory has no front)"), r.figureCaption());
+        assertTrue(r.figureCaption().contains("onset of onshore flow (linear theory has no front"), r.figureCaption());
     }
 
     @Test
