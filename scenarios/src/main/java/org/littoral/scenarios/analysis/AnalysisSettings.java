@@ -53,6 +53,12 @@ public final class AnalysisSettings {
      */
     public java.time.ZoneId localZone;
 
+    /**
+     * Inland distance (m) of each site, from the coast file's {@code sites:} list (empty when none): passage order
+     * between sites is checked against it ({@link ConventionCheck}).
+     */
+    public Map<String, Double> siteInlandM = new LinkedHashMap<>();
+
     public AnalysisSettings validate() {
         ingest.validate();
         detection.validate();

@@ -43,6 +43,13 @@ public final class AnalysisReport {
         rep.meta("analysed", what);
         rep.meta("coast", String.format(Locale.ROOT, "latitude %.2f deg, land-to-sea bearing %.0f deg", coast.latitudeDeg(),
                 coast.bearingLandToSeaDeg()));
+        List<String> conv = org.littoral.scenarios.analysis.ConventionCheck.warnings(r, coast, s);
+        if (!conv.isEmpty()) {
+            rep.section("Check the conventions");
+            for (String w : conv) {
+                rep.paragraph("Warning: " + w + ".");
+            }
+        }
         addSections(rep, r, qc, figs, false);
         rep.cautions();
         Path html = out.resolve("report.html");

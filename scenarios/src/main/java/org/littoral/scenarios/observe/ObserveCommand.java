@@ -57,6 +57,7 @@ public final class ObserveCommand implements Callable<Integer> {
         AnalysisSettings settings = new AnalysisSettings();
         ColumnMap map = columns == null ? null : ColumnMap.load(columns);
         settings.localZone = localZone(map, coast);
+        settings.siteInlandM.putAll(org.littoral.scenarios.compare.ObservedSites.inlandM(coastRef));
         Observed o = ingest(obs, settings, map);
         if (days != null) {
             settings.dayAttributes.putAll(DayTableReader.read(days));
@@ -67,6 +68,9 @@ public final class ObserveCommand implements Callable<Integer> {
             System.err.println("littoral: QC warning: " + w);
         }
         AnalysisResult r = AnalysisChain.run(o.profiles(), coast, settings);
+        for (String w : org.littoral.scenarios.analysis.ConventionCheck.warnings(r, coast, settings)) {
+            System.err.println("littoral: WARNING: " + w);
+        }
         List<Path> files = AnalysisOutputs.write(out, r, o.qc(), "observed profiles " + obs, coast, o.profiles(), settings);
         System.out.println("littoral: analysed " + o.profiles().size() + " profiles in " + r.siteDays().size() + " site-days; "
                 + r.passages().size() + " passages; wrote " + files.size() + " files to " + out + " (open report.html)");

@@ -209,7 +209,7 @@ public final class PassageFinder {
     }
 
     /** Signed turn from direction a to b, degrees in (-180, 180] (positive clockwise, veering). */
-    static double signedTurnDeg(double a, double b) {
+    public static double signedTurnDeg(double a, double b) {
         double d = (b - a) % 360.0;
         if (d > 180.0) {
             d -= 360.0;
