@@ -45,6 +45,9 @@ public final class ObserveCommand implements Callable<Integer> {
             description = "Coast file (latitude_deg, bearing_land_to_sea_deg, ...), a scenario file, or a built-in scenario name.")
     String coastRef;
 
+    @Option(names = "--descent", description = "Use the descending part of raw flights too, as profiles of their own (default: ascent only).")
+    boolean descent;
+
     @Option(names = "--days", paramLabel = "DAYS.csv", description = "Per-day attribute table (day[, site], breeze_type, convection, tags, ...).")
     Path days;
 
@@ -57,6 +60,7 @@ public final class ObserveCommand implements Callable<Integer> {
         AnalysisSettings settings = new AnalysisSettings();
         ColumnMap map = columns == null ? null : ColumnMap.load(columns);
         settings.localZone = localZone(map, coast);
+        settings.ingest.useDescent = descent;
         settings.siteInlandM.putAll(org.littoral.scenarios.compare.ObservedSites.inlandM(coastRef));
         Observed o = ingest(obs, settings, map);
         if (days != null) {

@@ -121,6 +121,20 @@ class OwnColumnsTest {
     }
 
     @Test
+    void withDescentEachFlightGivesAnAscentAndADescentProfile() throws IOException {
+        AnalysisSettings s = new AnalysisSettings();
+        s.ingest.useDescent = true;
+        List<Profile> ps = ObserveCommand.ingest(campaignCsv(), s, ColumnMap.load(write("cols.yaml", MAP))).profiles();
+        assertEquals(42, ps.size());
+        Profile up = ps.get(0);
+        Profile down = ps.get(1);
+        assertEquals(7.0, up.timeHours(), 1.0 / 3600.0);
+        assertEquals(7.0 + 134.0 / 3600.0, down.timeHours(), 0.5 / 3600.0); // the top (400 m) is the sample at 134 s
+        assertEquals(down.temperatureK()[20], up.temperatureK()[20], 0.05);
+        assertTrue(down.heightM()[down.size() - 1] >= 395.0);
+    }
+
+    @Test
     void anUnknownUnitNamesTheMapFileTheKeyAndTheFix() throws IOException {
         Path m = write("cols.yaml", MAP.replace("unit: knots", "unit: furlongs_per_fortnightz"));
         String msg = assertThrows(UserInputException.class, () -> ColumnMap.load(m)).getMessage();

@@ -46,14 +46,48 @@ public final class AscentBinner {
             log.add(f.file(), f.firstLine(), f.day(), f.site(), prof, ProfileColumns.HEIGHT_M, Integer.toString(before),
                     QcLog.Action.REMOVED_SAMPLE, "pre-launch-samples", before + " samples before the lowest point of the ascent");
         }
-        if (after > 0) {
+        if (after > 0 && !s.useDescent) {
             log.add(f.file(), f.firstLine(), f.day(), f.site(), prof, ProfileColumns.HEIGHT_M, Integer.toString(after),
                     QcLog.Action.REMOVED_SAMPLE, "descent-samples", after + " samples after the top of the ascent (descent kept out)");
         }
+        return binRange(f, s, log, i0, iMax, zMin, zMax, prof, "ascent");
+    }
+
+    /**
+     * The descending part of a flight (from the top down to the lowest sample after it) as a profile of its own, timed
+     * at the start of the descent; null (logged) when it has too few samples. Used with ingest.useDescent.
+     */
+    public static Profile binDescent(RawFlight f, IngestSettings s, QcLog log) {
+        int n = f.size();
+        String prof = "flight " + f.flightId() + " descent";
+        int iMax = -1;
+        double zMax = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            if (f.heightM()[i] > zMax) {
+                zMax = f.heightM()[i];
+                iMax = i;
+            }
+        }
+        if (iMax < 0) {
+            return null;
+        }
+        int i1 = iMax;
+        double zMin = Double.POSITIVE_INFINITY;
+        for (int i = iMax; i < n; i++) {
+            if (f.heightM()[i] < zMin) {
+                zMin = f.heightM()[i];
+                i1 = i;
+            }
+        }
+        return binRange(f, s, log, iMax, i1, zMin, zMax, prof, "descent");
+    }
+
+    private static Profile binRange(RawFlight f, IngestSettings s, QcLog log, int i0, int iMax, double zMin, double zMax,
+                                    String prof, String part) {
         int m = iMax - i0 + 1;
         if (m < s.minAscentSamples) {
             log.add(f.file(), f.firstLine(), f.day(), f.site(), prof, ProfileColumns.HEIGHT_M, Integer.toString(m),
-                    QcLog.Action.REMOVED_PROFILE, "short-ascent", "only " + m + " ascending samples (< " + s.minAscentSamples + ")");
+                    QcLog.Action.REMOVED_PROFILE, "short-" + part, "only " + m + " " + part + " samples (< " + s.minAscentSamples + ")");
             return null;
         }
         double step = s.binStepM;

@@ -30,6 +30,11 @@ public final class IngestSettings {
     public int windSpikeHalfWindowBins = 3;
     /** Mixing ratio above this (g/kg) is removed. */
     public double mixingRatioMaxGPerKg = 50.0;
+    /**
+     * Also use the descending part of each raw flight as a profile of its own (timed at the start of the descent).
+     * Default false (ascent only): a descending drone flies into its own downwash and sensors lag the other way.
+     */
+    public boolean useDescent = false;
     /** A raw flight with fewer ascending samples than this is removed (logged). */
     public int minAscentSamples = 5;
 

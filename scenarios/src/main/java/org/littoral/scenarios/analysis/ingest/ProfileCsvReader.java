@@ -256,6 +256,13 @@ public final class ProfileCsvReader {
                 }
                 out.add(prof2);
             }
+            if (settings.useDescent) {
+                Profile down = AscentBinner.binDescent(f, settings, log);
+                if (down != null) {
+                    despikeWind(down, t.fileName(), null, t.line(start), prof + " descent", log);
+                    out.add(down);
+                }
+            }
             start = end;
         }
         return new IngestResult(out, log, true, extraAttributes(t, c, log));
