@@ -49,6 +49,9 @@ public final class CompareCommand implements Callable<Integer> {
     @Option(names = "--days", paramLabel = "DAYS.csv", description = "Per-day attribute table (breeze_type, ...), as for observe.")
     Path days;
 
+    @Option(names = "--settings", paramLabel = "FILE", description = "Analysis settings (YAML), as for observe.")
+    Path settingsFile;
+
     @Option(names = "--columns", paramLabel = "MAP.yaml",
             description = "Column map of the observations (your column names, units, delimiter, time zone), as for observe.")
     Path columns;
@@ -86,7 +89,7 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Outcome o = run(scenario, JobModel.check("--model", model), obs, coastRef, days, columns, breezeType, out,
+        Outcome o = run(scenario, JobModel.check("--model", model), obs, coastRef, days, columns, settingsFile, breezeType, out,
                 System.console() != null ? System.err : null);
         Comparison.Result r = o.result();
         System.out.println("littoral: compared " + r.scenarioName() + " with " + r.days().size() + " observed day(s) at "
@@ -115,9 +118,18 @@ public final class CompareCommand implements Callable<Integer> {
     /** As above, with a column map of the observations ({@code columns}, may be null). */
     public static Outcome run(String scenarioRef, String model, Path obs, String coastRef, Path days, Path columns,
                               String breezeType, Path out, PrintStream progress) throws IOException {
+        return run(scenarioRef, model, obs, coastRef, days, columns, null, breezeType, out, progress);
+    }
+
+    /** As above, with an analysis settings file ({@code settingsFile}, may be null). */
+    public static Outcome run(String scenarioRef, String model, Path obs, String coastRef, Path days, Path columns,
+                              Path settingsFile, String breezeType, Path out, PrintStream progress) throws IOException {
         Scenario sc = withModel(BuiltinScenarios.resolve(scenarioRef), model);
         Coast coast = coastRef == null ? sc.coast() : CoastFile.load(coastRef);
         AnalysisSettings settings = new AnalysisSettings();
+        if (settingsFile != null) {
+            org.littoral.scenarios.analysis.SettingsFile.apply(settingsFile, settings);
+        }
         org.littoral.scenarios.analysis.ingest.ColumnMap map = columns == null ? null
                 : org.littoral.scenarios.analysis.ingest.ColumnMap.load(columns);
         settings.localZone = ObserveCommand.localZone(map, coast);

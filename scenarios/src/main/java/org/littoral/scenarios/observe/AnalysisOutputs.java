@@ -45,6 +45,7 @@ public final class AnalysisOutputs {
         root.put("qc_entries", qc.entries().size());
         root.set("qc_warnings", json.valueToTree(qc.warnings()));
         root.put("comparison_note", r.comparisonNote());
+        root.set("settings", org.littoral.scenarios.analysis.SettingsFile.toJson(settings));
         root.set("convention_warnings", json.valueToTree(org.littoral.scenarios.analysis.ConventionCheck.warnings(r, coast, settings)));
         root.set("notes", json.valueToTree(r.notes()));
         ArrayNode days = root.putArray("site_day_summary");

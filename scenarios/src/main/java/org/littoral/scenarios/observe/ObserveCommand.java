@@ -45,6 +45,10 @@ public final class ObserveCommand implements Callable<Integer> {
             description = "Coast file (latitude_deg, bearing_land_to_sea_deg, ...), a scenario file, or a built-in scenario name.")
     String coastRef;
 
+    @Option(names = "--settings", paramLabel = "FILE",
+            description = "Analysis settings (YAML; names and defaults in docs/analysis.md); the resolved settings go to analysis.json.")
+    Path settingsFile;
+
     @Option(names = "--descent", description = "Use the descending part of raw flights too, as profiles of their own (default: ascent only).")
     boolean descent;
 
@@ -58,9 +62,12 @@ public final class ObserveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Coast coast = CoastFile.load(coastRef);
         AnalysisSettings settings = new AnalysisSettings();
+        if (settingsFile != null) {
+            org.littoral.scenarios.analysis.SettingsFile.apply(settingsFile, settings);
+        }
         ColumnMap map = columns == null ? null : ColumnMap.load(columns);
         settings.localZone = localZone(map, coast);
-        settings.ingest.useDescent = descent;
+        settings.ingest.useDescent = settings.ingest.useDescent || descent;
         settings.siteInlandM.putAll(org.littoral.scenarios.compare.ObservedSites.inlandM(coastRef));
         Observed o = ingest(obs, settings, map);
         if (days != null) {

@@ -53,6 +53,10 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
+    @Option(names = "--settings", paramLabel = "FILE",
+            description = "Analysis settings (YAML) for the synthetic soundings' passage detection, as for observe; echoed into plan.json.")
+    Path settingsFile;
+
     @Option(names = "--model", paramLabel = "MODEL", description = "Override the plan's model: nonlinear (fronts; a linear base "
             + "scenario runs on the 200 x 2 km ensemble grid unless the plan sets grid keys) or linear (a quick look: its times "
             + "are the onset of onshore flow, linear theory has no front).")
@@ -70,7 +74,11 @@ public final class PlanCommand implements Callable<Integer> {
         if (model != null) {
             JobModel.check("--model", model);
         }
-        PlanOutcome o = run(plan, m, dir, n, resume, System.err);
+        AnalysisSettings as = new AnalysisSettings();
+        if (settingsFile != null) {
+            org.littoral.scenarios.analysis.SettingsFile.apply(settingsFile, as);
+        }
+        PlanOutcome o = run(plan, m, dir, n, resume, System.err, Solver.standard(), as);
         PlanOutputs.printSummary(plan, o.result(), System.out);
         System.out.println("littoral: plan written to " + dir.resolve("plan.json") + ", " + dir.resolve("report.html"));
         return 0;
@@ -89,6 +97,12 @@ public final class PlanCommand implements Callable<Integer> {
     /** As {@link #run(PlanSpec, String, Path, int, boolean, java.io.PrintStream)} with a given solver (tests, validation). */
     public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
                                   Solver solver) throws IOException, InterruptedException {
+        return run(plan, model, dir, threads, resume, log, solver, new AnalysisSettings());
+    }
+
+    /** As above with given analysis settings (a --settings file). */
+    public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
+                                  Solver solver, AnalysisSettings settings) throws IOException, InterruptedException {
         long t0 = System.nanoTime();
         if (model.equals("nonlinear")) {
             boolean gridSet = plan.ensemble().fixed().stream().anyMatch(f -> f.path().toString().startsWith("grid."));
@@ -104,7 +118,6 @@ public final class PlanCommand implements Callable<Integer> {
             plan.ensemble().base().put("kind", "linear");
         }
         List<Member> members = MemberExpander.expand(plan.ensemble());
-        AnalysisSettings settings = new AnalysisSettings();
         PlanMemberRunner probe = new PlanMemberRunner(plan, solver, null, settings);
         for (Member mm : members) {
             probe.scenarioOf(mm);
@@ -147,7 +160,7 @@ public final class PlanCommand implements Callable<Integer> {
             result.notes.add(so.failed() + " member(s) failed (see members/*.json); they are left out of every score");
         }
         double wall = (System.nanoTime() - t0) / 1e9;
-        PlanOutputs.write(dir, plan, model, first, result, windows, wall);
+        PlanOutputs.write(dir, plan, model, first, result, windows, wall, settings);
         return new PlanOutcome(result, windows, dir, wall);
     }
 

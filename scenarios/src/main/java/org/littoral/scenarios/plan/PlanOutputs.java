@@ -39,8 +39,8 @@ public final class PlanOutputs {
     private PlanOutputs() {
     }
 
-    static void write(Path dir, PlanSpec plan, String model, Scenario base, PlanResult r, DenseWindow[][] windows, double wallSeconds)
-            throws IOException {
+    static void write(Path dir, PlanSpec plan, String model, Scenario base, PlanResult r, DenseWindow[][] windows, double wallSeconds,
+                      org.littoral.scenarios.analysis.AnalysisSettings analysis) throws IOException {
         AtomicFile.write(dir.resolve("site-capture.csv"), siteCsv(r).getBytes(StandardCharsets.UTF_8));
         AtomicFile.write(dir.resolve("recommendations.csv"), recommendationsCsv(r, r.ranked.size()).getBytes(StandardCharsets.UTF_8));
         AtomicFile.write(dir.resolve("arrival-fan.csv"), fanCsv(r).getBytes(StandardCharsets.UTF_8));
@@ -49,6 +49,7 @@ public final class PlanOutputs {
         root.put("plan", plan.ensemble().name());
         root.put("caution", CAUTION);
         root.put("ceiling_caution", ceilingCaution(plan.ceilingM()));
+        root.set("analysis_settings", org.littoral.scenarios.analysis.SettingsFile.toJson(analysis));
         root.put("base_scenario", plan.ensemble().baseLabel());
         root.put("model", model.equals("scenario") ? base.kind().name().toLowerCase(Locale.ROOT) : model);
         root.put("members", r.members);
