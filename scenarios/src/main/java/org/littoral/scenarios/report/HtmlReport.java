@@ -130,8 +130,9 @@ public final class HtmlReport {
     public HtmlReport table(String caption, Table t) {
         int n = ++tables;
         blocks.add(sb -> {
-            sb.append("<div class=\"tablewrap\"><table class=\"data\" id=\"table-").append(n).append("\">\n<caption><b>Table ").append(n)
-                    .append(".</b> ").append(escape(caption)).append("</caption>\n<thead><tr>");
+            // the caption sits above the scrolling box, so a wide table never pushes it out of view; long cells wrap
+            sb.append("<p class=\"tcaption\" id=\"table-").append(n).append("\"><b>Table ").append(n).append(".</b> ")
+                    .append(escape(caption)).append("</p>\n<div class=\"tablewrap\"><table class=\"data\">\n<thead><tr>");
             int nc = t.columns().size();
             boolean[] numeric = new boolean[nc];
             int[] dec = new int[nc];
@@ -319,9 +320,11 @@ public final class HtmlReport {
             ".caution{background:#fff8e6;border-left:5px solid #d99a00;padding:10px 14px;margin:12px 0;font-size:14px}",
             "figure{margin:18px 0 24px}figure img{width:100%;height:auto;border:1px solid #eee;display:block}",
             "figcaption{font-size:14px;color:#333;margin-top:6px}",
-            "table{border-collapse:collapse;margin:14px 0 22px;font-size:14px}",
+            "table{border-collapse:collapse;margin:4px 0 22px;font-size:14px}",
             ".tablewrap{overflow-x:auto;max-width:100%}",
-            "table.data caption{caption-side:top;text-align:left;padding-bottom:6px;font-size:14px}",
+            "p.tcaption{font-size:14px;margin:18px 0 4px}",
+            "table.data td{max-width:28em;overflow-wrap:break-word;vertical-align:top}",
+            "table.data th{vertical-align:bottom}",
             "table.data th{background:#f0f2f5;border-bottom:2px solid #ccc;padding:5px 10px;text-align:left}",
             "table.data td{border-bottom:1px solid #e6e6e6;padding:4px 10px}",
             "table.data tbody tr:nth-child(even){background:#fafbfc}",

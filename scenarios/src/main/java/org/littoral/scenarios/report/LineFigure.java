@@ -195,6 +195,17 @@ public class LineFigure extends Figure {
 
     /** Ticks of an axis: over its fixed range, or the data range (rounded out to whole ticks when loose). */
     private static NiceTicks ticks(AxisSpec a, double[] data, boolean looseDefault, int nTicks) {
+        if (a.clock()) {
+            // a time of day: ticks on clock divisions, labelled HH:MM
+            double lo = a.fixed() || Double.isFinite(a.min) ? a.min : data[0];
+            double hi = a.fixed() || Double.isFinite(a.max) ? a.max : data[1];
+            if (!Double.isFinite(lo) || !Double.isFinite(hi)) {
+                lo = 0;
+                hi = 24;
+            }
+            boolean loose = !a.fixed() && (a.loose != null ? a.loose : looseDefault);
+            return NiceTicks.clock(lo, hi, nTicks, loose);
+        }
         if (a.fixed()) {
             return NiceTicks.within(a.min, a.max, nTicks);
         }

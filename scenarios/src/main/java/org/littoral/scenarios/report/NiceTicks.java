@@ -165,6 +165,11 @@ public final class NiceTicks {
         return spacing;
     }
 
+    /** True for ticks of a time of day (clock divisions of hours, labelled HH:MM). */
+    public boolean clock() {
+        return clock;
+    }
+
     public int fractionDigits() {
         return fractionDigits;
     }

@@ -112,6 +112,13 @@ final class XChartStyle {
         // every label with the digits the spacing needs (Heckbert 1990), as on the project's own figures
         s.setXAxisDecimalPattern(decimalPattern(x.fractionDigits()));
         s.setYAxisDecimalPattern(decimalPattern(y.fractionDigits()));
+        // a time of day reads HH:MM (never decimal hours)
+        if (x.clock()) {
+            s.setxAxisTickLabelsFormattingFunction(ClockTime::hhmm);
+        }
+        if (y.clock()) {
+            s.setyAxisTickLabelsFormattingFunction(ClockTime::hhmm);
+        }
     }
 
     private static String decimalPattern(int fractionDigits) {
