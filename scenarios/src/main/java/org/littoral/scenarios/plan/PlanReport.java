@@ -197,8 +197,8 @@ public final class PlanReport {
             }
             int reach = n - o[SiteOutcome.Result.NO_FRONT.ordinal()];
             List<String> lost = new ArrayList<>();
-            String[] words = {null, "the chain finds no onshore passage in %d", "it finds one more than %.0f min from the model's "
-                    + "time in %d", "too few profiles before or after it in %d"};
+            String[] words = {null, "the chain finds no onshore passage in %d", "the chain's passage is more than %.0f min from "
+                    + "the model's time in %d", "too few profiles flank the passage in %d"};
             for (SiteOutcome.Result k : List.of(SiteOutcome.Result.NOT_DETECTED, SiteOutcome.Result.OFF_TIME,
                     SiteOutcome.Result.TOO_FEW_PROFILES)) {
                 int c = o[k.ordinal()];
