@@ -45,6 +45,55 @@ public final class AnalysisFigures {
     /** At most this many days in one small-multiples image (larger campaigns get several). */
     static final int DAYS_PER_GRID = 24;
 
+    /** Fewer first onshore passages than this get a sentence instead of a histogram. */
+    static final int MIN_FOR_HISTOGRAM = 5;
+    /** Groups with fewer values than this get a sentence instead of a box. */
+    static final int MIN_FOR_BOX = 3;
+
+    /**
+     * What the histogram and box plots leave out because the sample is too small, as sentences with the values
+     * (a campaign of one or a few days): an empty histogram or a one-value box says nothing a sentence cannot.
+     */
+    public static List<String> smallSampleSentences(AnalysisResult r) {
+        List<String> out = new ArrayList<>();
+        List<String> firsts = new ArrayList<>();
+        for (SiteDayResult d : r.siteDays()) {
+            Passage p = d.firstOnshorePassage();
+            if (p != null) {
+                firsts.add(d.siteDay().site() + " on " + d.siteDay().day() + " at " + org.littoral.scenarios.report.ClockTime.hhmm(p.timeHours()));
+            }
+        }
+        if (firsts.isEmpty()) {
+            out.add("No site-day has a passage that turns the wind onshore, so there is no passage-time histogram.");
+        } else if (firsts.size() < MIN_FOR_HISTOGRAM) {
+            out.add("First onshore passage: " + String.join("; ", firsts) + " (too few for a histogram).");
+        }
+        Map<String, String> typeOf = new LinkedHashMap<>();
+        for (SiteDayResult d : r.siteDays()) {
+            typeOf.put(d.siteDay().key(), d.breezeType().name().toLowerCase(Locale.ROOT));
+        }
+        Layer layer = r.responses().isEmpty() ? null : r.responses().get(0).layer();
+        for (Variable v : List.of(Variable.THETA, Variable.MIXING_RATIO, Variable.THETA_E)) {
+            Map<String, List<Double>> groups = new TreeMap<>();
+            for (PassageResponse pr : r.responses()) {
+                if (pr.variable() == v && pr.layer().equals(layer) && pr.passage().turnsOnshore() && Double.isFinite(pr.change())) {
+                    groups.computeIfAbsent(typeOf.getOrDefault(pr.passage().day() + "/" + pr.passage().site(), "?"),
+                            k -> new ArrayList<>()).add(pr.change());
+                }
+            }
+            for (Map.Entry<String, List<Double>> e : groups.entrySet()) {
+                if (e.getValue().size() < MIN_FOR_BOX) {
+                    List<String> vals = new ArrayList<>();
+                    e.getValue().forEach(x -> vals.add(String.format(Locale.ROOT, "%+.2f", x)));
+                    out.add(String.format(Locale.ROOT, "Change of %s (%s) across the onshore passage%s of %s days: %s %s "
+                            + "(too few for a box plot).", label(v), ReaderText.layer(layer.label()), e.getValue().size() > 1 ? "es" : "",
+                            e.getKey(), String.join(", ", vals), v.unit()));
+                }
+            }
+        }
+        return out;
+    }
+
     /** All figures, in reading order. */
     public static List<CaptionedFigure> all(AnalysisResult r, AnalysisSettings s, Coast coast) {
         List<CaptionedFigure> out = new ArrayList<>(dayPanels(r, s, coast));
@@ -156,8 +205,9 @@ public final class AnalysisFigures {
                 bySite.computeIfAbsent(d.siteDay().site(), k -> new ArrayList<>()).add(p.timeHours());
             }
         }
-        if (bySite.isEmpty()) {
-            return java.util.Optional.empty();
+        int total = bySite.values().stream().mapToInt(List::size).sum();
+        if (total < MIN_FOR_HISTOGRAM) {
+            return java.util.Optional.empty(); // said in a sentence instead (smallSampleSentences)
         }
         HistogramFigure.Builder b = HistogramFigure.builder().size(900, 500).title("First onshore passage time by site")
                 .x("local time", "h").binWidth(0.5);
@@ -192,10 +242,16 @@ public final class AnalysisFigures {
             }
             BoxPlotFigure.Builder b = BoxPlotFigure.builder().size(480, 420).title("Change of " + label(v) + ", " + ReaderText.layer(layer.label()))
                     .y("change " + label(v), v.unit()).x("breeze type").showMean(true);
+            int boxes = 0;
             for (Map.Entry<String, List<Double>> e : groups.entrySet()) {
-                b.group(e.getKey(), toArray(e.getValue()));
+                if (e.getValue().size() >= MIN_FOR_BOX) {
+                    b.group(e.getKey(), toArray(e.getValue()));
+                    boxes++;
+                }
             }
-            panels.add(b.build());
+            if (boxes > 0) {
+                panels.add(b.build());
+            }
         }
         List<CaptionedFigure> out = new ArrayList<>();
         if (!panels.isEmpty()) {

@@ -98,6 +98,9 @@ public final class AnalysisReport {
                 + "column)." : "Detected passages per site and day (passages.csv has every column).") + " Timing uncertainty is at "
                 + "least half the local flight interval; confidence is the detectors' agreement.", t);
         rep.section("Responses, distributions and composites");
+        for (String sentence : AnalysisFigures.smallSampleSentences(r)) {
+            rep.paragraph(sentence);
+        }
         for (CaptionedFigure c : figs) {
             if (!c.fileName().startsWith("wind-direction")) {
                 rep.figure(c.figure(), c.caption());

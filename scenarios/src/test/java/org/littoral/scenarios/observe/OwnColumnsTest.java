@@ -105,6 +105,17 @@ class OwnColumnsTest {
     }
 
     @Test
+    void aOneDayReportSaysInSentencesWhatTooSmallASampleCannotPlot() throws IOException {
+        Path out = dir.resolve("out1");
+        assertEquals(0, Main.execute("observe", campaignCsv().toString(), "--columns", write("cols.yaml", MAP).toString(),
+                "--coast", coast().toString(), "--out", out.toString()));
+        String html = Files.readString(out.resolve("report.html"));
+        assertTrue(html.contains("First onshore passage: ridge-3km on 2026-12-05 at 12:"), "sentence for the histogram");
+        assertTrue(html.contains("(too few for a box plot)"), "sentence for the one-value boxes");
+        assertTrue(!Files.exists(out.resolve("passage-times.png")) && !Files.exists(out.resolve("response-boxes.png")));
+    }
+
+    @Test
     void mappedUnitsAreConvertedAndTheThreeSensorsAveraged() throws IOException {
         AnalysisSettings s = new AnalysisSettings();
         s.localZone = ZoneOffset.ofHours(11);
