@@ -12,8 +12,8 @@ import org.littoral.scenarios.bench.Benchmark;
 import org.littoral.scenarios.run.Solver;
 
 /**
- * {@code littoral bench check-timing}: the default check-timing ensemble (24 linear-model members on the default
- * 512 x 1 km, 48-level ensemble grid, 12 harmonics) on the built-in sea-barrier-bay coast, on all cores, end to end
+ * {@code littoral bench check-timing}: the default check-timing ensemble (24 nonlinear-model members on the default
+ * 200 x 2 km, 32-level ensemble grid) on the built-in sea-barrier-bay coast, on all cores, end to end
  * (members, envelope, flags, figure, report). Target: the quick look done within 90 s wall on 2 cores (our target:
  * a check a person waits for at the end of a flight day).
  */
@@ -34,7 +34,7 @@ public final class TimingBenchmark implements Benchmark {
 
     @Override
     public String description() {
-        return "default 24-member linear check-timing ensemble end to end on all cores: wall time (target <= 90 s on 2 cores)";
+        return "default 24-member nonlinear check-timing ensemble end to end on all cores: wall time (target <= 90 s on 2 cores)";
     }
 
     @Override
