@@ -23,6 +23,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("plan", new org.littoral.scenarios.plan.PlanBenchmark());
         m.put("check-timing", new org.littoral.scenarios.timing.TimingBenchmark());
         m.put("gradual-turns", new org.littoral.scenarios.demo.GradualTurnSkill());
+        m.put("input-fuzz", new InputFuzzBenchmark());
         return m;
     }
 

@@ -45,14 +45,14 @@ public final class Main implements Callable<Integer> {
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             boolean dbg = parseResult.hasMatchedOption("--debug") || main.debug
                     || java.util.Arrays.asList(args).contains("--debug");
-            if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
-                commandLine.getErr().println("littoral: error: " + ex.getMessage());
+            if (exitCode(ex) == 2) {
+                commandLine.getErr().println("littoral: error: " + message(ex));
                 if (dbg) {
                     ex.printStackTrace(commandLine.getErr());
                 }
                 return 2;
             }
-            commandLine.getErr().println("littoral: failed: " + ex);
+            commandLine.getErr().println("littoral: failed: " + message(ex));
             if (dbg) {
                 ex.printStackTrace(commandLine.getErr());
             } else {
@@ -61,6 +61,16 @@ public final class Main implements Callable<Integer> {
             return 1;
         });
         return cl.execute(args);
+    }
+
+    /** The exit code for an error a command raised: 2 for bad input, 1 for anything else. */
+    public static int exitCode(Throwable ex) {
+        return ex instanceof UserInputException || ex instanceof IllegalArgumentException ? 2 : 1;
+    }
+
+    /** The text printed after "littoral: error: " (exit 2) or "littoral: failed: " (exit 1). */
+    public static String message(Throwable ex) {
+        return exitCode(ex) == 2 ? ex.getMessage() : String.valueOf(ex);
     }
 
     public static void main(String[] args) {
