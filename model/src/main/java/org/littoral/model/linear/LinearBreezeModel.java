@@ -346,7 +346,11 @@ public final class LinearBreezeModel {
         return map;
     }
 
-    private static void check(LinearConfig c) {
+    /**
+     * The checks {@link #solve} makes before any work, callable on their own so that an application can refuse a
+     * configuration before it starts (combinations that are singular only at some wavenumbers are found by solve).
+     */
+    public static void check(LinearConfig c) {
         if (c.coast() == null || c.surface() == null || c.xGrid() == null || c.zGrid() == null || c.heating() == null) {
             throw new IllegalArgumentException("linear model configuration is missing coast, surface, xGrid, zGrid or heating");
         }

@@ -66,8 +66,8 @@ public final class AnalysisChain {
                 try {
                     type = BreezeType.valueOf(ut.trim().toUpperCase(Locale.ROOT));
                 } catch (IllegalArgumentException e) {
-                    throw new UserInputException("day attribute breeze_type = '" + ut + "' for " + sd.key()
-                            + " is not one of " + java.util.Arrays.toString(BreezeType.values()));
+                    throw new UserInputException("day attribute breeze_type = " + org.littoral.scenarios.input.Shown.text(ut) + " for "
+                            + sd.key() + " is not a breeze type; use one of " + java.util.Arrays.toString(BreezeType.values()));
                 }
                 source = source.equals("none") ? "user" : source;
             } else {
@@ -206,7 +206,8 @@ public final class AnalysisChain {
         try {
             return Double.parseDouble(v.trim());
         } catch (NumberFormatException e) {
-            throw new UserInputException("day attribute " + key + " = '" + v + "' for " + sd.key() + " is not a number");
+            throw new UserInputException("day attribute " + key + " = " + org.littoral.scenarios.input.Shown.text(v) + " for "
+                    + sd.key() + " is not a number; write a decimal number in the per-day table");
         }
     }
 

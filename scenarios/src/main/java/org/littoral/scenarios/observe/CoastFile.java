@@ -1,16 +1,15 @@
 package org.littoral.scenarios.observe;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
-import java.io.IOException;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import org.littoral.model.coast.Coast;
+import org.littoral.scenarios.input.InputDocument;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.ScenarioFile;
@@ -28,58 +27,37 @@ public final class CoastFile {
     }
 
     public static Coast load(String ref) {
-        Path p = Path.of(ref);
-        if (!Files.isRegularFile(p)) {
+        Path p;
+        try {
+            p = Path.of(ref);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UserInputException("coast " + Shown.text(ref) + " is not a valid path; give a coast file or a scenario file or name");
+        }
+        if (!Files.exists(p)) {
             if (BuiltinScenarios.names().contains(ref)) {
                 return BuiltinScenarios.resolve(ref).coast();
             }
-            throw new UserInputException("coast '" + ref + "': no such file and not a built-in scenario; give a coast file "
-                    + "(keys " + KEYS + ") or a scenario file or name");
+            throw new UserInputException("coast " + Shown.text(ref) + ": no such file and not a built-in scenario; give a coast file "
+                    + "(keys " + String.join(", ", KEYS) + ") or a scenario file or name");
         }
-        JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readString(p));
-        } catch (IOException e) {
-            throw new UserInputException("coast file " + p + ": cannot be read as YAML/JSON: " + e.getMessage(), e);
-        }
-        if (root != null && root.has("kind") || root != null && root.has("surface") && root.has("grid")) {
+        InputDocument doc = InputDocument.read(p, "coast file");
+        ObjectNode root = doc.rootMapping("coast keys (" + String.join(", ", KEYS) + ")");
+        if (root.has("kind") || root.has("surface") && root.has("grid")) {
             return ScenarioFile.load(p).coast();
         }
-        JsonNode c = root != null && root.has("coast") ? root.get("coast") : root;
-        if (c == null || !c.isObject()) {
-            throw new UserInputException("coast file " + p + ": expected a mapping with " + KEYS);
+        boolean nested = root.has("coast");
+        String path = nested ? "coast" : "";
+        JsonNode c = nested ? root.get("coast") : root;
+        if (!c.isObject()) {
+            throw doc.error("coast", "coast = " + Shown.value(c) + ": not a mapping; give the keys " + String.join(", ", KEYS)
+                    + " indented under coast:");
         }
-        for (Iterator<String> it = c.fieldNames(); it.hasNext(); ) {
-            String k = it.next();
-            if (!KEYS.contains(k)) {
-                throw new UserInputException("coast file " + p + ": coast." + k + ": unknown key; allowed keys are " + KEYS);
-            }
-        }
-        double lat = num(p, c, "latitude_deg", -90, 90, Double.NaN);
-        double lon = num(p, c, "longitude_deg", -180, 180, 0.0);
-        double utc = num(p, c, "utc_offset_h", -14, 14, Math.rint(lon / 15.0));
-        double bearing = num(p, c, "bearing_land_to_sea_deg", 0, 360, Double.NaN);
-        int day = (int) num(p, c, "day_of_year", 1, 366, 180);
+        doc.onlyKeys(c, path, KEYS);
+        double lat = doc.number(c, path, "latitude_deg", -90, 90, "deg", Double.NaN);
+        double lon = doc.number(c, path, "longitude_deg", -180, 180, "deg", 0.0);
+        double utc = doc.number(c, path, "utc_offset_h", -12, 14, "h", Math.rint(lon / 15.0));
+        double bearing = doc.number(c, path, "bearing_land_to_sea_deg", 0, 360, "deg", Double.NaN);
+        int day = (int) doc.integer(c, path, "day_of_year", 1, 366, "", 180L);
         return new Coast(lat, lon, utc, bearing, day);
-    }
-
-    private static double num(Path p, JsonNode c, String key, double lo, double hi, double dflt) {
-        JsonNode v = c.get(key);
-        if (v == null) {
-            if (Double.isNaN(dflt)) {
-                throw new UserInputException("coast file " + p + ": coast." + key + ": missing; give a number in " + lo + ".." + hi);
-            }
-            return dflt;
-        }
-        if (!v.isNumber()) {
-            throw new UserInputException("coast file " + p + ": coast." + key + ": value " + v + " is not a number; allowed "
-                    + lo + ".." + hi);
-        }
-        double d = v.asDouble();
-        if (!(d >= lo && d <= hi)) {
-            throw new UserInputException("coast file " + p + ": coast." + key + ": value " + v + " is outside the allowed range "
-                    + lo + ".." + hi);
-        }
-        return d;
     }
 }

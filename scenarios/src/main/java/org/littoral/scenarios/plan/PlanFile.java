@@ -17,6 +17,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.TreeSet;
+import org.littoral.scenarios.input.InputDocument;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.sweep.ScenarioMemberRunner;
 import org.littoral.scenarios.sweep.SweepFile;
@@ -39,9 +41,11 @@ public final class PlanFile {
             "dense_window"));
 
     private final String source;
+    private final InputDocument doc;
 
-    private PlanFile(String source) {
+    private PlanFile(String source, InputDocument doc) {
         this.source = source;
+        this.doc = doc;
     }
 
     /** The YAML text of a built-in plan. */
@@ -67,7 +71,8 @@ public final class PlanFile {
                 if (in == null) {
                     throw new UserInputException("built-in plan '" + ref + "' is missing from this build");
                 }
-                return parse("built-in plan " + ref, new String(in.readAllBytes(), StandardCharsets.UTF_8), null, ref);
+                String name = "built-in plan " + ref;
+                return parse(name, InputDocument.parse(name, new String(in.readAllBytes(), StandardCharsets.UTF_8), false), null, ref);
             } catch (IOException e) {
                 throw new UserInputException("built-in plan '" + ref + "' cannot be read: " + e.getMessage(), e);
             }
@@ -77,54 +82,41 @@ public final class PlanFile {
     }
 
     public static PlanSpec read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
+        if (!Files.exists(file)) {
             throw new UserInputException("plan file " + file + " does not exist; check the path");
-        } catch (IOException e) {
-            throw new UserInputException("plan file " + file + " cannot be read: " + e.getMessage(), e);
         }
+        InputDocument doc = InputDocument.read(file, "plan file");
         String base = file.getFileName().toString().replaceFirst("\\.(ya?ml|json)$", "");
-        return parse(file.toString(), text, file.toAbsolutePath().getParent(), base);
+        return parse(file.toString(), doc, file.toAbsolutePath().getParent(), base);
     }
 
     public static PlanSpec parse(String source, String text, Path folder, String defaultName) {
-        JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(text);
-        } catch (JsonProcessingException e) {
-            String where = e.getLocation() == null ? "" : ":" + e.getLocation().getLineNr() + ":" + e.getLocation().getColumnNr();
-            throw new UserInputException("plan file " + source + where + ": not valid YAML/JSON: " + e.getOriginalMessage());
-        }
-        if (root == null || !root.isObject()) {
-            throw new UserInputException("plan file " + source + ": expected a mapping with 'base', 'ensemble' and 'plan'");
-        }
-        ObjectNode sweepPart = ((ObjectNode) root).deepCopy();
+        return parse(source, InputDocument.parse("plan file " + source, text, false), folder, defaultName);
+    }
+
+    private static PlanSpec parse(String source, InputDocument doc, Path folder, String defaultName) {
+        ObjectNode root = doc.rootMapping("plan keys (base, ensemble and plan)");
+        ObjectNode sweepPart = root.deepCopy();
         JsonNode plan = sweepPart.remove("plan");
-        PlanFile pf = new PlanFile(source);
+        PlanFile pf = new PlanFile(source, doc);
         if (plan == null || !plan.isObject()) {
-            throw pf.err("plan", "missing or not a mapping; give the campaign options (candidates_km, sites_per_set, cadences, ...)");
+            throw pf.err("plan", (plan == null ? "missing" : Shown.value(plan) + " is not a mapping")
+                    + "; give the campaign options (candidates_km, sites_per_set, cadences, ...) indented under plan:");
         }
-        SweepSpec spec = SweepFile.parse(source, sweepPart, folder, ScenarioMemberRunner.scenarioSource(), defaultName);
+        SweepSpec spec = SweepFile.parse(source, doc, sweepPart, folder, ScenarioMemberRunner.scenarioSource(), defaultName);
         return pf.parsePlan((ObjectNode) plan, spec);
     }
 
     private UserInputException err(String keyPath, String problem) {
-        return new UserInputException("plan file " + source + ": " + keyPath + ": " + problem);
+        return new UserInputException(doc.where(keyPath) + ": " + keyPath + ": " + problem);
     }
 
     private PlanSpec parsePlan(ObjectNode plan, SweepSpec spec) {
-        for (Iterator<String> it = plan.fieldNames(); it.hasNext(); ) {
-            String k = it.next();
-            if (!PLAN_KEYS.contains(k)) {
-                throw err("plan." + k, "unknown key; allowed keys are " + PLAN_KEYS);
-            }
-        }
+        doc.onlyKeys(plan, "plan", PLAN_KEYS);
         double[] candidates = candidates(plan.get("candidates_km"));
         int sitesPerSet = (int) number(plan, "sites_per_set", 2, 1, 6, "sites", true);
         if (sitesPerSet > candidates.length) {
-            throw err("plan.sites_per_set", "value " + sitesPerSet + " is more than the " + candidates.length
+            throw err("plan.sites_per_set", sitesPerSet + " is more than the " + candidates.length
                     + " candidate distances; give more candidates or fewer sites");
         }
         JsonNode hours = plan.get("operating_hours");
@@ -132,19 +124,15 @@ public final class PlanFile {
         double end = 19.0;
         if (hours != null) {
             if (!hours.isObject()) {
-                throw err("plan.operating_hours", "value " + hours + " must be a mapping {start_h, end_h}");
+                throw err("plan.operating_hours", Shown.value(hours) + " is not a mapping; give {start_h, end_h}");
             }
-            for (Iterator<String> it = hours.fieldNames(); it.hasNext(); ) {
-                String k = it.next();
-                if (!k.equals("start_h") && !k.equals("end_h")) {
-                    throw err("plan.operating_hours." + k, "unknown key; allowed keys are [end_h, start_h]");
-                }
-            }
+            doc.onlyKeys(hours, "plan.operating_hours", List.of("start_h", "end_h"));
             start = number((ObjectNode) hours, "start_h", 7, 0, 24, "h local clock", false, "plan.operating_hours.");
             end = number((ObjectNode) hours, "end_h", 19, 0, 24, "h local clock", false, "plan.operating_hours.");
         }
         if (!(end > start + 1)) {
-            throw err("plan.operating_hours", "end_h = " + end + " must be at least an hour after start_h = " + start);
+            throw err("plan.operating_hours", "end_h = " + fmt(end) + " is not at least an hour after start_h = " + fmt(start)
+                    + "; give a later end_h");
         }
         List<CadenceOption> cadences = cadences(plan.get("cadences"), start, end);
         int maxFlights = (int) number(plan, "max_flights_per_site_per_day", 48, 1, 500, "flights", true);
@@ -157,8 +145,9 @@ public final class PlanFile {
         int pilot = (int) number(plan, "pilot_members", Math.min(spec.memberCount(), 20), 1, 100000, "members", true);
         // fronts need the nonlinear model (linear theory has none): it is the default
         String model = plan.has("model") ? plan.get("model").asText() : "nonlinear";
-        if (!List.of("scenario", "linear", "nonlinear").contains(model)) {
-            throw err("plan.model", "value '" + model + "' is not one of [scenario, linear, nonlinear]");
+        if (!plan.path("model").isMissingNode() && !plan.get("model").isTextual()
+                || !List.of("scenario", "linear", "nonlinear").contains(model)) {
+            throw err("plan.model", Shown.value(plan.get("model")) + " is not a model; use scenario, linear or nonlinear");
         }
         return new PlanSpec(spec, candidates, sitesPerSet, cadences, start, end, maxFlights, ceiling,
                 new PlanCriteria(before, after, tolMin / 60.0, speedTol), top, model, pilot);
@@ -172,23 +161,18 @@ public final class PlanFile {
         List<Double> out = new ArrayList<>();
         if (n.isArray()) {
             for (int i = 0; i < n.size(); i++) {
-                if (!n.get(i).isNumber()) {
-                    throw err(key + "[" + i + "]", "value " + n.get(i) + " is not a number (km)");
+                if (!n.get(i).isNumber() || !Double.isFinite(n.get(i).asDouble())) {
+                    throw err(key + "[" + i + "]", Shown.value(n.get(i)) + " is not a number; give an inland distance in km");
                 }
                 out.add(n.get(i).asDouble());
             }
         } else if (n.isObject()) {
-            for (Iterator<String> it = n.fieldNames(); it.hasNext(); ) {
-                String k = it.next();
-                if (!List.of("from", "to", "step").contains(k)) {
-                    throw err(key + "." + k, "unknown key; allowed keys are [from, step, to]");
-                }
-            }
+            doc.onlyKeys(n, key, List.of("from", "to", "step"));
             double from = number((ObjectNode) n, "from", Double.NaN, -500, 500, "km", false, key + ".");
             double to = number((ObjectNode) n, "to", Double.NaN, -500, 500, "km", false, key + ".");
             double step = number((ObjectNode) n, "step", Double.NaN, 0.01, 500, "km", false, key + ".");
             if (!(to >= from)) {
-                throw err(key, "to = " + to + " km must not be less than from = " + from + " km");
+                throw err(key, "to = " + fmt(to) + " km is less than from = " + fmt(from) + " km; swap them");
             }
             long count = Math.round(Math.floor((to - from) / step + 1e-9)) + 1;
             if (count > 400) {
@@ -198,15 +182,14 @@ public final class PlanFile {
                 out.add(Math.round((from + i * step) * 1e6) / 1e6);
             }
         } else {
-            throw err(key, "value " + n + " must be a list of km or {from, to, step}");
+            throw err(key, Shown.value(n) + " is not a list of distances; give a list of km or {from, to, step}");
         }
         if (out.isEmpty()) {
             throw err(key, "no candidate distances; give at least one");
         }
         for (int i = 0; i < out.size(); i++) {
             if (!(out.get(i) > 0)) {
-                throw err(key + "[" + i + "]", "value " + out.get(i) + " km is not inland; candidate sites must be at positive "
-                        + "inland distances (x > 0)");
+                throw err(key + "[" + i + "]", fmt(out.get(i)) + " km is not inland; give positive inland distances (x > 0)");
             }
         }
         return out.stream().mapToDouble(Double::doubleValue).sorted().distinct().toArray();
@@ -221,29 +204,26 @@ public final class PlanFile {
             return out;
         }
         if (!n.isArray() || n.isEmpty()) {
-            throw err(key, "value " + n + " must be a non-empty list of {name, interval_min, dense_interval_min, dense_window}");
+            throw err(key, Shown.value(n) + " is not a list of cadences; give a non-empty list of {name, interval_min, "
+                    + "dense_interval_min, dense_window}");
         }
         for (int i = 0; i < n.size(); i++) {
             String k = key + "[" + i + "]";
             JsonNode c = n.get(i);
             if (!c.isObject()) {
-                throw err(k, "value " + c + " must be a mapping");
+                throw err(k, Shown.value(c) + " is not a mapping; give {name, interval_min, dense_interval_min, dense_window}");
             }
-            for (Iterator<String> it = c.fieldNames(); it.hasNext(); ) {
-                String f = it.next();
-                if (!CADENCE_KEYS.contains(f)) {
-                    throw err(k + "." + f, "unknown key; allowed keys are " + CADENCE_KEYS);
-                }
-            }
+            doc.onlyKeys(c, k, CADENCE_KEYS);
             ObjectNode o = (ObjectNode) c;
             double interval = number(o, "interval_min", Double.NaN, 1, 240, "minutes", false, k + ".");
             double dense = number(o, "dense_interval_min", 0, 0, 240, "minutes", false, k + ".");
             if (dense > 0 && !(dense < interval)) {
-                throw err(k + ".dense_interval_min", "value " + dense + " must be shorter than interval_min = " + interval);
+                throw err(k + ".dense_interval_min", fmt(dense) + " is not shorter than interval_min = " + fmt(interval)
+                        + "; give a shorter dense interval, or 0 for none");
             }
             if (dense > 0 && Math.abs(interval / dense - Math.rint(interval / dense)) > 1e-9) {
-                throw err(k + ".dense_interval_min", "value " + dense + " must divide interval_min = " + interval
-                        + " exactly (so that dense flights include every base flight), e.g. " + interval / 2);
+                throw err(k + ".dense_interval_min", fmt(dense) + " does not divide interval_min = " + fmt(interval)
+                        + " exactly (dense flights must include every base flight); give e.g. " + fmt(interval / 2));
             }
             boolean auto = true;
             double ds = Double.NaN;
@@ -251,13 +231,17 @@ public final class PlanFile {
             JsonNode w = o.get("dense_window");
             if (w != null && !(w.isTextual() && w.asText().equals("auto"))) {
                 if (!w.isObject()) {
-                    throw err(k + ".dense_window", "value " + w + " must be 'auto' or {start_h, end_h}");
+                    throw err(k + ".dense_window", Shown.value(w) + " is not a window; give 'auto' or {start_h, end_h}");
                 }
+                doc.onlyKeys(w, k + ".dense_window", List.of("start_h", "end_h"));
                 auto = false;
                 ds = number((ObjectNode) w, "start_h", Double.NaN, start, end, "h local clock (inside operating hours)", false,
                         k + ".dense_window.");
                 de = number((ObjectNode) w, "end_h", Double.NaN, ds, end, "h local clock (after start_h)", false,
                         k + ".dense_window.");
+            }
+            if (o.has("name") && (!o.get("name").isTextual() || o.get("name").asText().isBlank() || o.get("name").asText().length() > 80)) {
+                throw err(k + ".name", Shown.value(o.get("name")) + " is not a cadence name; give a short text (at most 80 characters)");
             }
             String name = o.has("name") ? o.get("name").asText() : String.format(Locale.ROOT, "%.0f min%s", interval,
                     dense > 0 ? String.format(Locale.ROOT, ", %.0f min dense", dense) : "");
@@ -273,26 +257,27 @@ public final class PlanFile {
     private double number(ObjectNode o, String key, double dflt, double lo, double hi, String unit, boolean integer,
                           String prefix) {
         JsonNode v = o.get(key);
+        String range = InputDocument.range(lo, hi, unit, integer);
         if (v == null || v.isNull()) {
             if (Double.isNaN(dflt)) {
-                throw err(prefix + key, "missing; give a number in " + lo + ".." + hi + " " + unit);
+                throw err(prefix + key, "missing; give " + range);
             }
             return dflt;
         }
-        if (!v.isNumber()) {
-            throw err(prefix + key, "value " + v + " is not a number; allowed range " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+        if (!v.isNumber() || !Double.isFinite(v.asDouble())) {
+            throw err(prefix + key, Shown.value(v) + " is not a number; give " + range);
         }
         double d = v.asDouble();
         if (integer && d != Math.rint(d)) {
-            throw err(prefix + key, "value " + v + " must be a whole number in " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+            throw err(prefix + key, Shown.value(v) + " is not a whole number; give " + range);
         }
         if (!(d >= lo && d <= hi)) {
-            throw err(prefix + key, "value " + v + " is outside the allowed range " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+            throw err(prefix + key, Shown.value(v) + " is outside the allowed range; give " + range);
         }
         return d;
     }
 
     private static String fmt(double d) {
-        return d == Math.rint(d) ? String.valueOf((long) d) : String.valueOf(d);
+        return Shown.number(d);
     }
 }

@@ -1,24 +1,12 @@
 package org.littoral.scenarios.scenario;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.coast.SurfaceMap;
@@ -34,6 +22,7 @@ import org.littoral.model.sounding.VirtualSite;
 import org.littoral.model.surface.SolarGeometry;
 import org.littoral.model.surface.SurfaceEnergyBalance;
 import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.input.InputDocument;
 import org.littoral.scenarios.input.UserInputException;
 
 /**
@@ -48,53 +37,47 @@ public final class ScenarioFile {
 
     /** Reads and validates a file on disk. */
     public static Scenario load(Path path) {
-        String text;
-        try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
+        if (!Files.exists(path) && !Files.isSymbolicLink(path)) {
             throw new UserInputException(path + ": no such scenario file; give a path to a .yaml/.json file or a built-in name ("
                     + String.join(", ", BuiltinScenarios.names()) + ")");
-        } catch (IOException e) {
-            throw new UserInputException(path + ": cannot read the scenario file (" + e.getMessage() + "); check the path and permissions");
         }
-        return parse(path.toString(), text, path.getFileName().toString().toLowerCase().endsWith(".json"));
+        return build(InputDocument.read(path, ""), path.toString());
     }
 
     /** Parses and validates scenario text; {@code displayName} is used in messages. */
     public static Scenario parse(String displayName, String text, boolean json) {
-        JsonFactory factory = json ? new JsonFactory() : new YAMLFactory();
-        factory.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
-        Map<String, JsonLocation> locations = new HashMap<>();
-        JsonNode tree;
-        try {
-            try (JsonParser p = factory.createParser(text)) {
-                if (p.nextToken() != null) {
-                    locate(p, "", locations);
-                }
-            }
-            tree = new ObjectMapper(factory).readTree(text);
-        } catch (JsonProcessingException e) {
-            JsonLocation loc = e.getLocation();
-            String where = loc == null ? displayName : displayName + ":" + loc.getLineNr() + ":" + loc.getColumnNr();
-            String msg = e.getOriginalMessage().lines().findFirst().orElse("syntax error").trim();
-            throw new UserInputException(where + ": " + (json ? "JSON" : "YAML") + " syntax error: " + msg
-                    + "; fix the file there (indent with spaces, 'key: value', lists with '- ')", e);
-        } catch (IOException e) {
-            throw new UserInputException(displayName + ": cannot read (" + e.getMessage() + ")", e);
-        }
+        return build(InputDocument.parse(displayName, text, json), displayName);
+    }
+
+    /** Validates a scenario tree that was built in memory (no line numbers); {@code displayName} starts messages. */
+    public static Scenario fromTree(String displayName, JsonNode tree) {
+        return build(InputDocument.of(displayName, tree.deepCopy()), displayName);
+    }
+
+    private static Scenario build(InputDocument doc, String displayName) {
+        JsonNode tree = doc.root();
         if (tree == null || tree.isMissingNode() || tree.isNull()) {
             throw new UserInputException(displayName + ": the scenario file is empty; start from a built-in one (littoral scenarios --show classic-45N)");
         }
+        doc.rootMapping("scenario keys (name, description, coast, sites, ...)");
         if (tree instanceof ObjectNode o && o.path("kind").asText("").equals("nonlinear") && o.get("heating") == null) {
             // the heating default depends on the kind: the nonlinear model heats the land by the energy balance
             o.putObject("heating").put("shape", "energy_balance");
         }
-        SchemaValidator v = new SchemaValidator(displayName, locations);
+        SchemaValidator v = new SchemaValidator(doc);
         ObjectNode n = v.validate(ScenarioSchema.ROOT, tree);
         fail(v.problems());
         Builder b = new Builder(n, v);
-        Scenario s = b.build(displayName);
+        Scenario s;
+        try {
+            s = b.build(displayName);
+        } catch (IllegalArgumentException e) {
+            // the model's own checks: the schema and the rules above should have caught it first
+            throw new UserInputException(displayName + ": the model refuses these values: " + ModelLimits.inYamlTerms(e.getMessage())
+                    + "; change that key", e);
+        }
         fail(b.problems);
+        ModelLimits.check(s, displayName);
         return s;
     }
 
@@ -102,27 +85,6 @@ public final class ScenarioFile {
         if (!problems.isEmpty()) {
             String more = problems.size() > 1 ? " (and " + (problems.size() - 1) + " more problem" + (problems.size() > 2 ? "s" : "") + ")" : "";
             throw new UserInputException(problems.get(0) + more);
-        }
-    }
-
-    /** Records where each value starts, keyed by the same paths the validator uses ("coast.latitude_deg", "sites[1].name"). */
-    private static void locate(JsonParser p, String path, Map<String, JsonLocation> out) throws IOException {
-        JsonToken t = p.currentToken();
-        out.put(path, p.currentTokenLocation());
-        if (t == JsonToken.START_OBJECT) {
-            while (p.nextToken() == JsonToken.FIELD_NAME) {
-                String key = p.currentName();
-                String child = path.isEmpty() ? key : path + "." + key;
-                out.put(child + SchemaValidator.KEY_SUFFIX, p.currentTokenLocation());
-                p.nextToken();
-                locate(p, child, out);
-            }
-        } else if (t == JsonToken.START_ARRAY) {
-            int k = 0;
-            while (p.nextToken() != JsonToken.END_ARRAY) {
-                locate(p, path + "[" + k + "]", out);
-                k++;
-            }
         }
     }
 
@@ -230,6 +192,11 @@ public final class ScenarioFile {
             Scenario.Physics physics = new Scenario.Physics(d(ph, "friction_per_s"), cooling == null ? d(ph, "friction_per_s") : cooling,
                     ph.get("hydrostatic").booleanValue(), ph.get("harmonics").intValue());
 
+            if (!nonlinear && heating instanceof HeatingSpec.SlabMixedLayer && !(physics.frictionPerS() > 0 && physics.coolingPerS() > 0)) {
+                problem("physics.friction_per_s", "physics.friction_per_s = " + Schema.fmt(physics.frictionPerS()) + " and cooling_per_s = "
+                        + Schema.fmt(physics.coolingPerS()) + ": the slab heating has a daily mean, whose steady linear response needs "
+                        + "both above 0; set them to e.g. 1e-5");
+            }
             List<VirtualSite> sites = sites(n.get("sites"), xg);
             Scenario.Flights flights = flights(n.get("flights"), top, n.get("name").asText());
             Scenario.Output output = output(n.get("output"), top);
@@ -279,7 +246,7 @@ public final class ScenarioFile {
                     }
                     to = Double.POSITIVE_INFINITY;
                 } else if (endKm == null) {
-                    problem(p, "missing key '" + p + ".ends_at_km'; every segment but the last needs the cross-shore position (km) where it ends");
+                    problem(p, "missing key '" + p + ".ends_at_km'; add it: every segment but the last needs the cross-shore position (km) where it ends");
                     return SurfaceMap.simpleCoast(293.15, 0.2, 1.0, 0.1);
                 } else {
                     to = endKm * 1000.0;
@@ -404,7 +371,8 @@ public final class ScenarioFile {
             }
             double zs = d(o, "near_surface_m");
             if (zs > top) {
-                problem("output.near_surface_m", "output.near_surface_m = " + Schema.fmt(zs) + " is above the model top " + Schema.fmt(top) + " m");
+                problem("output.near_surface_m", "output.near_surface_m = " + Schema.fmt(zs) + " is above the model top grid.top_m = "
+                        + Schema.fmt(top) + " m; lower it or raise the top");
             }
             return new Scenario.Output(start, end, d(o, "step_min"), zs, d(o, "onshore_threshold_m_per_s"));
         }

@@ -30,8 +30,9 @@ public final class ScenarioSchema {
             num("latitude_deg", "deg", -90, 90, null, "Latitude, negative in the Southern Hemisphere; sets the Coriolis parameter f = 2 Omega sin(latitude)."),
             num("longitude_deg", "deg", -180, 180, 0.0, "Longitude, east positive; with utc_offset_h converts local solar time to clock time."),
             num("utc_offset_h", "h", -12, 14, 0.0, "Offset of the local clock from UTC (e.g. -4 for EDT); all times you read are in this clock."),
-            new Field("bearing_land_to_sea_deg", new Schema.Num("deg", 0, 360, false, true), Presence.REQUIRED, null,
-                    "Compass bearing pointing from land to sea, clockwise from north (270: the sea lies to the west)."),
+            new Field("bearing_land_to_sea_deg", new Schema.Num("deg", 0, 360, false, false), Presence.REQUIRED, null,
+                    "Compass bearing pointing from land to sea, clockwise from north (270: the sea lies to the west; 0 and 360 "
+                            + "both mean north)."),
             integer("day_of_year", 1, 366, 172, "Day of the year (172 is 21 June); sets solar geometry and the equation of time."));
 
     static final Field SURFACE = new Field("surface", new ListOf(new Variant("type",
@@ -86,8 +87,9 @@ public final class ScenarioSchema {
                     + "The nonlinear model takes it as the geostrophic wind: it holds above the boundary layer, while surface drag "
                     + "slows and turns the wind near the ground (more over rough land than over water).",
             num("speed_m_per_s", "m/s", 0, 40, 0.0, "Wind speed."),
-            new Field("from_deg", new Schema.Num("deg", 0, 360, false, true), Presence.DEFAULTED, 0.0,
-                    "Direction the wind blows FROM, clockwise from north (onshore on a coast with bearing_land_to_sea_deg B is from B)."));
+            new Field("from_deg", new Schema.Num("deg", 0, 360, false, false), Presence.DEFAULTED, 0.0,
+                    "Direction the wind blows FROM, clockwise from north (onshore on a coast with bearing_land_to_sea_deg B is from B; "
+                            + "0 and 360 both mean a north wind)."));
 
     static final Field HEATING = new Field("heating", new Variant("shape", List.of(),
             Schema.forms(
@@ -164,6 +166,57 @@ public final class ScenarioSchema {
             pos("onshore_threshold_m_per_s", "m/s", 0, 20, 0.5,
                     "Onshore means the total cross-shore wind and the breeze wind (the model wind minus the ambient wind) both reach "
                             + "this (docs/fronts.md)."));
+
+    /**
+     * The numeric type of a key given by the object keys on its way down ({@code [surface, sst_K]}), or null when
+     * there is no such key or it is not a number. Where the forms of a variant give one key different ranges
+     * (heating.sunrise_solar_h), the widest range is returned: the full check of each scenario decides.
+     */
+    public static Schema.Num numberAt(List<String> keys) {
+        List<Schema.Type> level = List.of(ROOT);
+        for (String k : keys) {
+            List<Schema.Type> next = new java.util.ArrayList<>();
+            for (Schema.Type t : level) {
+                while (t instanceof ListOf l) {
+                    t = l.item();
+                }
+                if (t instanceof Section s) {
+                    Field f = s.field(k);
+                    if (f != null) {
+                        next.add(f.type());
+                    }
+                } else if (t instanceof Variant v) {
+                    for (String form : v.forms().keySet()) {
+                        Field f = v.sectionFor(form).field(k);
+                        if (f != null) {
+                            next.add(f.type());
+                        }
+                    }
+                }
+            }
+            if (next.isEmpty()) {
+                return null;
+            }
+            level = next;
+        }
+        Schema.Num out = null;
+        for (Schema.Type t : level) {
+            Schema.Num n = t instanceof Schema.Num x ? x
+                    : t instanceof Schema.Int i ? new Schema.Num("", i.min(), i.max(), false, false) : null;
+            if (n == null) {
+                continue;
+            }
+            if (out == null) {
+                out = n;
+            } else {
+                boolean lo = n.min() < out.min();
+                boolean hi = n.max() > out.max();
+                out = new Schema.Num(out.unit(), lo ? n.min() : out.min(), hi ? n.max() : out.max(),
+                        lo ? n.minOpen() : out.minOpen(), hi ? n.maxOpen() : out.maxOpen());
+            }
+        }
+        return out;
+    }
 
     /** The whole file. */
     public static final Section ROOT = new Section(List.of(

@@ -1,6 +1,5 @@
 package org.littoral.scenarios.scenario;
 
-import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
@@ -8,7 +7,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Map;
+import org.littoral.scenarios.input.InputDocument;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.scenario.Schema.Choice;
 import org.littoral.scenarios.scenario.Schema.Field;
 import org.littoral.scenarios.scenario.Schema.Flag;
@@ -30,15 +30,17 @@ final class SchemaValidator {
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     /** Location-map suffix for where a key itself (rather than its value) starts. */
-    static final String KEY_SUFFIX = "#key";
+    static final String KEY_SUFFIX = InputDocument.KEY_SUFFIX;
+    /** Longest name (site, segment, scenario): names become parts of file names and table cells. */
+    static final int MAX_NAME = 120;
+    /** Longest description. */
+    static final int MAX_DESCRIPTION = 2000;
 
-    private final String file;
-    private final Map<String, JsonLocation> locations;
+    private final InputDocument doc;
     private final List<String> problems = new ArrayList<>();
 
-    SchemaValidator(String file, Map<String, JsonLocation> locations) {
-        this.file = file;
-        this.locations = locations;
+    SchemaValidator(InputDocument doc) {
+        this.doc = doc;
     }
 
     List<String> problems() {
@@ -50,13 +52,10 @@ final class SchemaValidator {
         return out instanceof ObjectNode o ? o : NODES.objectNode();
     }
 
-    /** "file:line:col: " for a key path, or "file: " when the path has no location. */
+    /** "file:line:col: " for a key path (or its nearest located parent), or "file: ". */
     String where(String path) {
-        JsonLocation loc = locations.get(path);
-        if (loc == null) {
-            return file + ": ";
-        }
-        return file + ":" + loc.getLineNr() + ":" + loc.getColumnNr() + ": ";
+        return (path.endsWith(KEY_SUFFIX) ? doc.whereKey(path.substring(0, path.length() - KEY_SUFFIX.length()))
+                : doc.where(path)) + ": ";
     }
 
     private void problem(String path, String message) {
@@ -68,62 +67,55 @@ final class SchemaValidator {
     }
 
     private static String shown(JsonNode v) {
-        if (v.isTextual()) {
-            return "'" + v.asText() + "'";
-        }
-        if (v.isObject()) {
-            return "a mapping";
-        }
-        if (v.isArray()) {
-            return "a list";
-        }
-        if (v.isNull()) {
-            return "empty (null)";
-        }
-        return v.toString();
+        return Shown.value(v);
     }
 
     private JsonNode check(Type type, JsonNode v, String path) {
         String label = path.isEmpty() ? "the file" : path;
         if (type instanceof Num n) {
             if (!v.isNumber()) {
-                problem(path, label + " = " + shown(v) + " is not a number; give " + n.allowed());
+                problem(path, label + " = " + shown(v) + ": not a number; give " + n.allowed());
                 return v;
             }
             if (!n.accepts(v.doubleValue())) {
-                problem(path, label + " = " + v.asText() + " is out of range; allowed: " + n.allowed());
+                problem(path, label + " = " + shown(v) + ": outside the allowed range; give " + n.allowed());
             }
             return NODES.numberNode(v.doubleValue());
         }
         if (type instanceof Int i) {
             if (!v.isNumber() || v.doubleValue() != Math.rint(v.doubleValue())) {
-                problem(path, label + " = " + shown(v) + " is not a whole number; give " + i.allowed());
+                problem(path, label + " = " + shown(v) + ": not a whole number; give " + i.allowed());
                 return v;
             }
             if (v.doubleValue() < i.min() || v.doubleValue() > i.max()) {
-                problem(path, label + " = " + v.asText() + " is out of range; allowed: " + i.allowed());
+                problem(path, label + " = " + shown(v) + ": outside the allowed range; give " + i.allowed());
             }
             return NODES.numberNode(v.longValue());
         }
         if (type instanceof Text) {
             if (!v.isTextual() && !v.isNumber()) {
-                problem(path, label + " = " + shown(v) + " should be text");
+                problem(path, label + " = " + shown(v) + ": not a text; give a text (in quotes if it holds ': ' or starts with "
+                        + "a special character)");
                 return v;
             }
             if (v.asText().isBlank()) {
                 problem(path, label + " is blank; give a non-empty text");
             }
+            int max = path.endsWith("description") ? MAX_DESCRIPTION : MAX_NAME;
+            if (v.asText().length() > max) {
+                problem(path, label + " = " + shown(v) + ": longer than " + max + " characters; shorten it");
+            }
             return NODES.textNode(v.asText());
         }
         if (type instanceof Flag) {
             if (!v.isBoolean()) {
-                problem(path, label + " = " + shown(v) + " is not true or false");
+                problem(path, label + " = " + shown(v) + ": not true or false; write true or false");
             }
             return v;
         }
         if (type instanceof Choice c) {
             if (!v.isTextual() || !c.values().contains(v.asText())) {
-                problem(path, label + " = " + shown(v) + " is not allowed; use " + c.allowed());
+                problem(path, label + " = " + shown(v) + ": not allowed; use " + c.allowed());
             }
             return v;
         }
@@ -132,11 +124,11 @@ final class SchemaValidator {
         }
         if (type instanceof ListOf l) {
             if (!v.isArray()) {
-                problem(path, label + " = " + shown(v) + " should be a list (lines starting with '- ')");
+                problem(path, label + " = " + shown(v) + ": not a list; write its items as lines starting with '- '");
                 return v;
             }
             if (v.size() < l.minItems() || v.size() > l.maxItems()) {
-                problem(path, label + " has " + v.size() + " items; allowed " + l.minItems() + " to " + l.maxItems());
+                problem(path, label + " has " + v.size() + " items; give " + l.minItems() + " to " + l.maxItems());
             }
             ArrayNode out = NODES.arrayNode();
             for (int k = 0; k < v.size(); k++) {
@@ -146,17 +138,17 @@ final class SchemaValidator {
         }
         if (type instanceof Variant var) {
             if (!v.isObject()) {
-                problem(path, label + " = " + shown(v) + " should be " + var.allowed());
+                problem(path, label + " = " + shown(v) + ": not a mapping; give " + var.allowed());
                 return v;
             }
             JsonNode d = v.get(var.discriminator());
             if (d == null) {
-                problem(path, label + " needs '" + var.discriminator() + "': one of " + String.join(", ", var.forms().keySet()));
+                problem(path, label + " needs '" + var.discriminator() + "'; add it: one of " + String.join(", ", var.forms().keySet()));
                 return v;
             }
             if (!d.isTextual() || !var.forms().containsKey(d.asText())) {
                 problem(child(path, var.discriminator()), child(path, var.discriminator()) + " = " + shown(d)
-                        + " is not allowed; use one of " + String.join(", ", var.forms().keySet()));
+                        + ": not allowed; use one of " + String.join(", ", var.forms().keySet()));
                 return v;
             }
             return checkSection(var.sectionFor(d.asText()), v, path);
@@ -167,7 +159,8 @@ final class SchemaValidator {
     private JsonNode checkSection(Section s, JsonNode v, String path) {
         String label = path.isEmpty() ? "the file" : path;
         if (!v.isObject()) {
-            problem(path, label + " = " + shown(v) + " should be a mapping of keys (key: value)");
+            problem(path, label + " = " + shown(v) + ": not a mapping; write its keys as 'key: value' lines indented under '"
+                    + label + ":'");
             return v;
         }
         ObjectNode out = NODES.objectNode();
@@ -175,8 +168,9 @@ final class SchemaValidator {
             String key = it.next();
             if (s.field(key) == null) {
                 String near = nearest(key, s.keys());
-                problem(child(path, key) + KEY_SUFFIX, "unknown key '" + child(path, key) + "'" + (near == null ? "" : " (did you mean '" + near + "'?)")
-                        + "; valid keys " + (path.isEmpty() ? "at the top level" : "in '" + path + "'") + ": " + String.join(", ", s.keys()));
+                problem(child(path, key) + KEY_SUFFIX, "unknown key " + Shown.text(child(path, key)) + (near == null ? "" : " (did you mean '" + near + "'?)")
+                        + "; valid keys " + (path.isEmpty() ? "at the top level" : "in '" + path + "'") + ": " + String.join(", ", s.keys())
+                        + "; check the spelling or remove it");
             }
         }
         for (Field f : s.fields()) {
@@ -229,36 +223,8 @@ final class SchemaValidator {
         return dot < 0 ? doc.replaceAll("\\.$", "") : doc.substring(0, dot);
     }
 
-    /** The valid key closest to a misspelt one (Levenshtein distance at most 3), or null. */
+    /** The valid key closest to a misspelt one (edit distance at most 3), or null. */
     static String nearest(String key, List<String> keys) {
-        String best = null;
-        int bestD = 4;
-        for (String k : keys) {
-            int d = levenshtein(key.toLowerCase(), k.toLowerCase());
-            if (d < bestD) {
-                bestD = d;
-                best = k;
-            }
-        }
-        return best;
-    }
-
-    private static int levenshtein(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int c = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + c);
-            }
-            int[] t = prev;
-            prev = cur;
-            cur = t;
-        }
-        return prev[b.length()];
+        return InputDocument.nearest(key, keys);
     }
 }

@@ -104,6 +104,17 @@ public final class KeyPath {
     }
 
     /** The last object key of the path (e.g. {@code sst_K}), or null if the path ends in a list element. */
+    /** The object keys along the path, without list indices or selectors: {@code surface[name=bay].sst_K} gives [surface, sst_K]. */
+    public List<String> fieldNames() {
+        List<String> out = new ArrayList<>();
+        for (Step st : steps) {
+            if (st.isField()) {
+                out.add(st.field);
+            }
+        }
+        return out;
+    }
+
     public String leafKey() {
         Step last = steps.get(steps.size() - 1);
         return last.isField() ? last.field : null;

@@ -51,13 +51,18 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
 
     /** Base scenarios as the scenario reader sees them: every default filled in, so every key can be swept. */
     public static ScenarioSource scenarioSource() {
-        return (ref, relativeTo) -> {
-            Path p = Path.of(ref);
-            if (!p.isAbsolute() && relativeTo != null && Files.isRegularFile(relativeTo.resolve(p))) {
-                p = relativeTo.resolve(p);
+        return new ScenarioSource() {
+            @Override
+            public ObjectNode load(String ref, Path relativeTo) {
+                Path p = ScenarioSource.resolveFile(ref, relativeTo);
+                Scenario s = p != null ? ScenarioFile.load(p) : BuiltinScenarios.resolve(ref);
+                return s.inputs().deepCopy();
             }
-            Scenario s = Files.isRegularFile(p) ? ScenarioFile.load(p) : BuiltinScenarios.resolve(ref);
-            return s.inputs().deepCopy();
+
+            @Override
+            public ObjectNode inline(ObjectNode tree, String label) {
+                return ScenarioFile.fromTree(label, tree).inputs().deepCopy();
+            }
         };
     }
 

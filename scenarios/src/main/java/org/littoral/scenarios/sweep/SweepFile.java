@@ -17,6 +17,8 @@ import java.util.Map;
 import java.util.Set;
 import org.apache.commons.math3.special.Erf;
 import org.littoral.scenarios.analysis.stats.BreezeTyping;
+import org.littoral.scenarios.input.InputDocument;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 
 /**
@@ -33,16 +35,22 @@ public final class SweepFile {
     private static final Set<String> TOP_KEYS = Set.of("name", "description", "base", "set", "mode", "axes",
             "ensemble", "breeze_typing");
     private static final int MAX_AXIS_VALUES = 10_000;
-    private static final int MAX_MEMBERS = 100_000;
+    /**
+     * Most members a sweep, plan or ensemble may have: each member holds its scenario document in memory (a few tens
+     * of KB), and 20,000 linear members take about a day on two cores.
+     */
+    public static final int MAX_MEMBERS = 20_000;
 
     private final String source;
+    private final InputDocument doc;
     private final ObjectNode root;
     private final Path folder;
     private final ScenarioSource scenarios;
     private final String defaultName;
 
-    private SweepFile(String source, ObjectNode root, Path folder, ScenarioSource scenarios, String defaultName) {
+    private SweepFile(String source, InputDocument doc, ObjectNode root, Path folder, ScenarioSource scenarios, String defaultName) {
         this.source = source;
+        this.doc = doc;
         this.root = root;
         this.folder = folder;
         this.scenarios = scenarios;
@@ -63,16 +71,12 @@ public final class SweepFile {
     }
 
     public static SweepSpec read(Path file, ScenarioSource scenarios) {
-        ObjectNode root;
-        try {
-            root = ScenarioSource.readDocument(file);
-        } catch (UserInputException e) {
-            throw new UserInputException("sweep file " + e.getMessage(), e);
-        }
+        InputDocument doc = InputDocument.read(file, "sweep file");
+        ObjectNode root = doc.rootMapping("sweep keys (name, base, axes, ensemble, ...)");
         String fn = file.getFileName().toString();
         int dot = fn.lastIndexOf('.');
         Path parent = file.toAbsolutePath().getParent();
-        return new SweepFile(file.toString(), root, parent, scenarios, dot > 0 ? fn.substring(0, dot) : fn).parse();
+        return new SweepFile(file.toString(), doc, root, parent, scenarios, dot > 0 ? fn.substring(0, dot) : fn).parse();
     }
 
     public static SweepSpec readBuiltin(String name, ScenarioSource scenarios) {
@@ -81,32 +85,38 @@ public final class SweepFile {
             if (in == null) {
                 throw new UserInputException("no built-in sweep '" + name + "'; choose one of " + BUILTINS);
             }
-            JsonNode n = ScenarioSource.yaml().readTree(in);
-            return parse("built-in sweep " + name, (ObjectNode) n, null, scenarios, name);
+            InputDocument doc = InputDocument.parse("built-in sweep " + name, new String(in.readAllBytes(),
+                    java.nio.charset.StandardCharsets.UTF_8), false);
+            return new SweepFile("built-in sweep " + name, doc, doc.rootMapping("sweep keys"), null, scenarios, name).parse();
         } catch (IOException e) {
             throw new UserInputException("built-in sweep '" + name + "' cannot be read: " + e.getMessage(), e);
         }
     }
 
-    /** Parses an already-read tree (tests, inline use). */
+    /** Parses an already-read tree (tests, inline use); messages start with "sweep file SOURCE". */
     public static SweepSpec parse(String source, ObjectNode root, Path folder, ScenarioSource scenarios, String defaultName) {
-        return new SweepFile(source, root, folder, scenarios, defaultName).parse();
+        return new SweepFile(source, InputDocument.of("sweep file " + source, root), root, folder, scenarios, defaultName).parse();
+    }
+
+    /**
+     * Parses the sweep part of a larger file (a plan file): {@code doc} gives the places and the name messages start
+     * with, {@code root} the keys that belong to the sweep.
+     */
+    public static SweepSpec parse(String source, InputDocument doc, ObjectNode root, Path folder, ScenarioSource scenarios,
+                                  String defaultName) {
+        return new SweepFile(source, doc, root, folder, scenarios, defaultName).parse();
     }
 
     private UserInputException err(String keyPath, String problem) {
-        return new UserInputException("sweep file " + source + ": " + keyPath + ": " + problem);
+        return new UserInputException(doc.where(keyPath) + ": " + keyPath + ": " + problem);
     }
 
     private SweepSpec parse() {
-        for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
-            String k = it.next();
-            if (!TOP_KEYS.contains(k)) {
-                throw err(k, "unknown key; allowed keys are " + sorted(TOP_KEYS));
-            }
-        }
+        doc.onlyKeys(root, "", TOP_KEYS);
         String name = root.has("name") ? text("name", root.get("name")) : defaultName;
-        if (!name.matches("[A-Za-z0-9._-]+")) {
-            throw err("name", "'" + name + "' must use only letters, digits, '.', '_' and '-'");
+        if (!name.matches("[A-Za-z0-9._-]{1,80}") || name.matches("\\.+")) {
+            throw err("name", Shown.text(name) + ": a sweep name becomes a folder name; rename it with 1 to 80 letters, digits, "
+                    + "'.', '_' and '-'");
         }
         String description = root.has("description") ? text("description", root.get("description")) : "";
 
@@ -125,9 +135,15 @@ public final class SweepFile {
             }
         } else if (baseNode.isObject()) {
             baseLabel = "(inline)";
-            base = (ObjectNode) baseNode;
+            // the same reader as a scenario file: every default filled in, so every key can be swept
+            try {
+                base = scenarios.inline((ObjectNode) baseNode, doc.name() + " (inline base)");
+            } catch (UserInputException e) {
+                throw err("base", "the inline base scenario: " + e.getMessage().replace(doc.name() + " (inline base): ", ""));
+            }
         } else {
-            throw err("base", "value " + baseNode + " is neither a scenario name or path nor an inline scenario");
+            throw err("base", Shown.value(baseNode) + " is neither a scenario name or path nor an inline scenario; give a "
+                    + "built-in name, a path to a scenario file, or the scenario's keys indented under base:");
         }
 
         List<SweepSpec.Setting> fixed = new ArrayList<>();
@@ -151,7 +167,7 @@ public final class SweepFile {
             if (m.equals("zip")) {
                 zip = true;
             } else if (!m.equals("cartesian")) {
-                throw err("mode", "value '" + m + "' is not allowed; use 'cartesian' (every combination) or 'zip'"
+                throw err("mode", "value " + Shown.text(m) + " is not allowed; use 'cartesian' (every combination) or 'zip'"
                         + " (axes advance together)");
             }
         }
@@ -174,7 +190,8 @@ public final class SweepFile {
             for (Axis a : axes) {
                 if (a.values().size() != axes.get(0).values().size()) {
                     throw err("axes." + a.path(), "has " + a.values().size() + " values but axes." + axes.get(0).path()
-                            + " has " + axes.get(0).values().size() + "; in zip mode every axis needs the same number of values");
+                            + " has " + axes.get(0).values().size() + "; in zip mode give every axis the same number of values, or "
+                            + "use mode: cartesian");
                 }
             }
         }
@@ -185,16 +202,19 @@ public final class SweepFile {
             ensemble = ensemble(ens, base, used);
         }
         if (axes.isEmpty() && ensemble == null) {
-            throw err("axes", "missing; a sweep needs at least one axis or an ensemble");
+            throw err("axes", "missing; a sweep needs at least one axis or an ensemble: add axes: or ensemble:");
         }
         SweepSpec.Typing typing = typing(root.get("breeze_typing"));
-        SweepSpec spec = new SweepSpec(source, name, description, baseLabel, base, fixed, zip, axes, ensemble, typing);
-        long total = (long) spec.axisPoints() * (ensemble == null ? 1 : ensemble.members());
+        long points = 1;
+        for (Axis a : axes) {
+            points = zip ? a.values().size() : Math.min((long) MAX_MEMBERS + 1, points * a.values().size());
+        }
+        long total = points * (ensemble == null ? 1 : ensemble.members());
         if (total > MAX_MEMBERS) {
             throw err(ensemble == null ? "axes" : "ensemble.members", "the sweep would have " + total
                     + " members; the limit is " + MAX_MEMBERS + ", split it into several sweeps");
         }
-        return spec;
+        return new SweepSpec(source, name, description, baseLabel, base, fixed, zip, axes, ensemble, typing);
     }
 
     private KeyPath path(String where, String text, JsonNode base) {
@@ -202,12 +222,12 @@ public final class SweepFile {
         try {
             p = KeyPath.parse(text);
         } catch (IllegalArgumentException e) {
-            throw err(where, e.getMessage());
+            throw err(where, Shown.clip(e.getMessage(), 160) + "; write the key path as in docs/sweeps.md, e.g. ambient_wind.speed_m_per_s");
         }
         try {
             p.get(base);
         } catch (IllegalArgumentException e) {
-            throw err(where, "not in the base scenario: " + e.getMessage()
+            throw err(where, "not in the base scenario: " + Shown.clip(e.getMessage(), 200)
                     + " (check the spelling, or set the key in the base scenario first)");
         }
         return p;
@@ -246,11 +266,11 @@ public final class SweepFile {
             double to = number(where + ".to", spec.get("to"));
             double step = number(where + ".step", spec.get("step"));
             if (!(step > 0)) {
-                throw err(where + ".step", "value " + spec.get("step") + " must be > 0");
+                throw err(where + ".step", Shown.value(spec.get("step")) + " is not above 0; give a positive step");
             }
             if (to < from) {
-                throw err(where + ".to", "value " + spec.get("to") + " is below from = " + spec.get("from")
-                        + "; a range runs upward from 'from' to 'to'");
+                throw err(where + ".to", Shown.value(spec.get("to")) + " is below from = " + Shown.value(spec.get("from"))
+                        + "; a range runs upward from 'from' to 'to': swap them");
             }
             BigDecimal f = new BigDecimal(spec.get("from").asText());
             BigDecimal s = new BigDecimal(spec.get("step").asText());
@@ -266,8 +286,8 @@ public final class SweepFile {
                 out.add(AxisValue.of(node));
             }
         } else {
-            throw err(where, "value " + spec + " is not a list of values, a range {from, to, step}, or"
-                    + " {choices: {label: value, ...}}");
+            throw err(where, Shown.value(spec) + " is not a list of values, a range or choices; give [v1, v2, ...],"
+                    + " {from, to, step} or {choices: {label: value, ...}}");
         }
         return out;
     }
@@ -277,11 +297,11 @@ public final class SweepFile {
         onlyKeys("ensemble", ens, Set.of("members", "seed", "draws"));
         JsonNode m = ens.get("members");
         if (m == null || !m.canConvertToInt() || !m.isIntegralNumber() || m.asInt() < 1 || m.asInt() > MAX_MEMBERS) {
-            throw err("ensemble.members", "value " + m + " must be a whole number in 1.." + MAX_MEMBERS);
+            throw err("ensemble.members", Shown.value(m) + " is not a member count; give a whole number, 1 to " + MAX_MEMBERS);
         }
         JsonNode s = ens.get("seed");
         if (s == null || !s.isIntegralNumber() || !s.canConvertToLong()) {
-            throw err("ensemble.seed", "value " + s + " must be a whole number (the same seed draws the same members)");
+            throw err("ensemble.seed", Shown.value(s) + " is not a seed; give a whole number (the same seed draws the same members)");
         }
         JsonNode draws = ens.get("draws");
         if (draws == null || !draws.isObject() || draws.isEmpty()) {
@@ -303,7 +323,7 @@ public final class SweepFile {
 
     private Distribution distribution(String where, KeyPath p, JsonNode base, JsonNode d) {
         if (!d.isObject() || d.size() < 1) {
-            throw err(where, "value " + d + " is not a distribution; use {uniform: {from, to}}, {normal: {mean, sd, min,"
+            throw err(where, Shown.value(d) + " is not a distribution; use {uniform: {from, to}}, {normal: {mean, sd, min,"
                     + " max}} or {choice: [...]}");
         }
         KeyRanges.Range range = KeyRanges.forPath(p);
@@ -318,7 +338,8 @@ public final class SweepFile {
             double from = number(w + ".from", u.get("from"));
             double to = number(w + ".to", u.get("to"));
             if (!(to > from)) {
-                throw err(w + ".to", "value " + u.get("to") + " must be above from = " + u.get("from"));
+                throw err(w + ".to", Shown.value(u.get("to")) + " is not above from = " + Shown.value(u.get("from"))
+                        + "; give a 'to' above 'from'");
             }
             if (range != null && !circular) {
                 inRange(w + ".from", p, from, range);
@@ -336,7 +357,7 @@ public final class SweepFile {
             double mean = number(w + ".mean", n.get("mean"));
             double sd = number(w + ".sd", n.get("sd"));
             if (!(sd > 0)) {
-                throw err(w + ".sd", "value " + n.get("sd") + " must be > 0");
+                throw err(w + ".sd", Shown.value(n.get("sd")) + " is not above 0; give a positive standard deviation");
             }
             double lo = n.has("min") ? number(w + ".min", n.get("min")) : (range != null && !circular ? range.min() : Double.NEGATIVE_INFINITY);
             double hi = n.has("max") ? number(w + ".max", n.get("max")) : (range != null && !circular ? range.max() : Double.POSITIVE_INFINITY);
@@ -344,11 +365,15 @@ public final class SweepFile {
                 throw err(w, "a direction is drawn on the circle (wrapped into 0..360); leave out min and max");
             }
             if (!(hi > lo)) {
-                throw err(w + ".max", "value " + hi + " must be above min = " + lo);
+                throw err(w + ".max", KeyRanges.fmt(hi) + " is not above min = " + KeyRanges.fmt(lo) + "; give a max above the min");
             }
             if (range != null && !circular) {
-                inRange(w + ".min", p, lo, range);
-                inRange(w + ".max", p, hi, range);
+                if (n.has("min")) {
+                    inRange(w + ".min", p, lo, range);
+                }
+                if (n.has("max")) {
+                    inRange(w + ".max", p, hi, range);
+                }
             }
             double inside = 0.5 * (Erf.erf((hi - mean) / (sd * Math.sqrt(2))) - Erf.erf((lo - mean) / (sd * Math.sqrt(2))));
             if (!(inside >= 1e-3)) {
@@ -374,7 +399,8 @@ public final class SweepFile {
                     opts.add(new AxisValue(e.getKey(), e.getValue()));
                 }
             } else {
-                throw err(where + ".choice", "value " + c + " must be a non-empty list of values or {label: value, ...}");
+                throw err(where + ".choice", Shown.value(c) + " is not a list of choices; give a non-empty list of values or "
+                        + "{label: value, ...}");
             }
             double[] w = new double[opts.size()];
             JsonNode wn = d.get("weights");
@@ -382,13 +408,13 @@ public final class SweepFile {
                 java.util.Arrays.fill(w, 1.0);
             } else {
                 if (!wn.isArray() || wn.size() != opts.size()) {
-                    throw err(where + ".weights", "value " + wn + " must be a list of " + opts.size()
+                    throw err(where + ".weights", Shown.value(wn) + " does not match the choices; give a list of " + opts.size()
                             + " numbers, one per choice");
                 }
                 for (int i = 0; i < w.length; i++) {
                     w[i] = number(where + ".weights[" + i + "]", wn.get(i));
                     if (!(w[i] >= 0)) {
-                        throw err(where + ".weights[" + i + "]", "value " + wn.get(i) + " must be >= 0");
+                        throw err(where + ".weights[" + i + "]", Shown.value(wn.get(i)) + " is negative; give a weight of 0 or more");
                     }
                 }
                 if (java.util.Arrays.stream(w).sum() <= 0) {
@@ -397,7 +423,7 @@ public final class SweepFile {
             }
             return new Distribution.Choice(List.copyOf(opts), w);
         }
-        throw err(where, "unknown distribution " + sorted(fieldNames(d)) + "; use uniform, normal or choice");
+        throw err(where, "unknown distribution " + Shown.text(String.join(", ", sorted(fieldNames(d)))) + "; use uniform, normal or choice");
     }
 
     private SweepSpec.Typing typing(JsonNode t) {
@@ -416,12 +442,12 @@ public final class SweepFile {
                 : d.offshoreHalfWidthDeg;
         if (!(on >= 0 && off >= 0 && on + off <= 180)) {
             throw err(w, "onshore_half_width_deg " + KeyRanges.fmt(on) + " and offshore_half_width_deg " + KeyRanges.fmt(off)
-                    + " must be >= 0 and add up to at most 180 deg (45 and 45 give quadrants)");
+                    + " must be >= 0 and add up to at most 180 deg; give e.g. 45 and 45 (quadrants)");
         }
         double weak = t.has("weak_below_m_per_s") ? number(w + ".weak_below_m_per_s", t.get("weak_below_m_per_s"))
                 : d.weakWindMPerS;
         if (!(weak >= 0 && weak <= 40)) {
-            throw err(w + ".weak_below_m_per_s", "value " + KeyRanges.fmt(weak) + " must be in 0..40 m/s");
+            throw err(w + ".weak_below_m_per_s", KeyRanges.fmt(weak) + " is outside the allowed range; give a number, 0 to 40 m/s");
         }
         return new SweepSpec.Typing(
                 keyOr(t, w, "from_deg_key", def.fromDeg()), keyOr(t, w, "speed_key", def.speedMPerS()),
@@ -436,7 +462,7 @@ public final class SweepFile {
         try {
             return KeyPath.parse(text(w + "." + key, t.get(key)));
         } catch (IllegalArgumentException e) {
-            throw err(w + "." + key, e.getMessage());
+            throw err(w + "." + key, Shown.clip(e.getMessage(), 160) + "; give a key path of the scenario, e.g. ambient_wind.from_deg");
         }
     }
 
@@ -456,7 +482,8 @@ public final class SweepFile {
             want = "a list";
         }
         if (want != null) {
-            throw err(where, "value " + v + " is not " + want + " (the base scenario has " + b + " at " + p + ")");
+            throw err(where, Shown.value(v) + " is not " + want + "; give " + want + " (the base scenario has " + Shown.value(b)
+                    + " at " + p + ")");
         }
         KeyRanges.Range r = KeyRanges.forPath(p);
         if (r != null && v.isNumber()) {
@@ -466,14 +493,14 @@ public final class SweepFile {
 
     private void inRange(String where, KeyPath p, double v, KeyRanges.Range r) {
         if (!Double.isFinite(v) || !r.contains(v)) {
-            throw err(where, "value " + KeyRanges.fmt(v) + " is outside the allowed range " + r.describe() + " for " + p);
+            throw err(where, KeyRanges.fmt(v) + " is outside the allowed range for " + p + "; give " + r.describe());
         }
     }
 
     private void requireNumericLeaf(String where, KeyPath p, JsonNode base) {
         JsonNode b = p.get(base);
         if (!b.isNumber()) {
-            throw err(where, "uniform and normal draws need a number, but the base scenario has " + b + " at " + p
+            throw err(where, "uniform and normal draws need a number, but the base scenario has " + Shown.value(b) + " at " + p
                     + "; use {choice: [...]} instead");
         }
     }
@@ -483,30 +510,26 @@ public final class SweepFile {
             throw err(where, "missing; give a number");
         }
         if (!n.isNumber() || !Double.isFinite(n.asDouble())) {
-            throw err(where, "value " + n + " is not a number");
+            throw err(where, Shown.value(n) + " is not a number; give a number");
         }
         return n.asDouble();
     }
 
     private String text(String where, JsonNode n) {
         if (!n.isTextual()) {
-            throw err(where, "value " + n + " must be text");
+            throw err(where, Shown.value(n) + " is not a text; give a text");
         }
         return n.asText();
     }
 
     private void requireObject(String where, JsonNode n) {
         if (!n.isObject()) {
-            throw err(where, "value " + n + " must be a set of keys");
+            throw err(where, Shown.value(n) + " is not a mapping; give its keys as 'key: value' lines indented under it");
         }
     }
 
     private void onlyKeys(String where, JsonNode n, Set<String> allowed) {
-        for (String k : fieldNames(n)) {
-            if (!allowed.contains(k)) {
-                throw err(where + "." + k, "unknown key; allowed here: " + sorted(allowed));
-            }
-        }
+        doc.onlyKeys(n, where, allowed);
     }
 
     private static List<String> fieldNames(JsonNode n) {

@@ -18,6 +18,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.TreeMap;
+import org.littoral.scenarios.input.InputDocument;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.JobModel;
@@ -58,11 +60,13 @@ public final class DayFile {
     private final Path folder;
     /** The model asked for on the command line (overrides ensemble.model), or null. */
     private final String modelOverride;
+    private final InputDocument doc;
 
-    private DayFile(String source, Path folder, String modelOverride) {
+    private DayFile(String source, Path folder, String modelOverride, InputDocument doc) {
         this.source = source;
         this.folder = folder;
         this.modelOverride = modelOverride;
+        this.doc = doc;
     }
 
     public static DaySpec read(Path file) {
@@ -74,36 +78,23 @@ public final class DayFile {
      * the ensemble grid's defaults are set, since the two models have different defaults.
      */
     public static DaySpec read(Path file, String model) {
-        if (!Files.isRegularFile(file)) {
+        if (!Files.exists(file)) {
             throw new UserInputException("day file " + file + " does not exist; give a YAML day file (docs/timing-checks.md)");
         }
-        ObjectNode root;
-        try {
-            root = ScenarioSource.readDocument(file);
-        } catch (UserInputException e) {
-            throw new UserInputException("day file " + e.getMessage(), e);
-        }
-        return new DayFile(file.toString(), file.toAbsolutePath().getParent(), model).parse(root);
+        InputDocument d = InputDocument.read(file, "day file");
+        ObjectNode root = d.rootMapping("day keys (date, coast, ambient_wind, ...)");
+        return new DayFile(file.toString(), file.toAbsolutePath().getParent(), model, d).parse(root);
     }
 
     /** Parses day-file text (tests); relative coast paths resolve against {@code folder} (may be null) and the working folder. */
     public static DaySpec parse(String source, String yaml, Path folder) {
-        JsonNode n;
-        try {
-            n = ScenarioSource.yaml().readTree(yaml);
-        } catch (JsonProcessingException e) {
-            String where = e.getLocation() == null ? "" : ":" + e.getLocation().getLineNr();
-            throw new UserInputException("day file " + source + where + ": not valid YAML: "
-                    + e.getOriginalMessage().lines().findFirst().orElse(""));
-        }
-        if (n == null || !n.isObject()) {
-            throw new UserInputException("day file " + source + ": expected a set of keys (date, coast, ambient_wind, ...)");
-        }
-        return new DayFile(source, folder, null).parse((ObjectNode) n);
+        InputDocument d = InputDocument.parse("day file " + source, yaml, false);
+        ObjectNode root = d.rootMapping("day keys (date, coast, ambient_wind, ...)");
+        return new DayFile(source, folder, null, d).parse(root);
     }
 
     private UserInputException err(String key, String problem) {
-        return new UserInputException("day file " + source + ": " + key + ": " + problem);
+        return new UserInputException(doc.where(key) + ": " + key + ": " + problem);
     }
 
     private DaySpec parse(ObjectNode root) {
@@ -111,7 +102,7 @@ public final class DayFile {
         String date = dateOf(root.get("date"));
         JsonNode coastRef = root.get("coast");
         if (coastRef == null || !coastRef.isTextual()) {
-            throw err("coast", "value " + coastRef + " must name a coast file (coast, surface, sites sections), a scenario file"
+            throw err("coast", (coastRef == null ? "missing" : Shown.value(coastRef) + " is not a file name") + "; give a coast file (coast, surface, sites sections), a scenario file"
                     + " or a built-in scenario (" + String.join(", ", BuiltinScenarios.names()) + ")");
         }
         ObjectNode ens = obj(root, "ensemble");
@@ -156,8 +147,8 @@ public final class DayFile {
             if (m != null) {
                 model = m.asText();
                 if (!List.of("linear", "nonlinear").contains(model)) {
-                    throw err("ensemble.model", "value '" + m.asText() + "' is not one of [nonlinear, linear] (nonlinear: "
-                            + "fronts, the default; linear: a quick look whose times are the " + JobModel.LINEAR_TIMES + ")");
+                    throw err("ensemble.model", Shown.value(m) + " is not a model; use nonlinear (fronts, the default) or "
+                            + "linear (a quick look whose times are the " + JobModel.LINEAR_TIMES + ")");
                 }
             }
         }
@@ -180,8 +171,8 @@ public final class DayFile {
         int points = (int) number(g, "ensemble.grid.points", linear ? 512 : JobModel.ENSEMBLE_POINTS, 16, 16384,
                 linear ? "(a power of two)" : "(a product of 2, 3 and 5)", true);
         if (linear && Integer.bitCount(points) != 1) {
-            throw err("ensemble.grid.points", "value " + points + " must be a power of two (FFT) for the linear model, e.g. "
-                    + Integer.highestOneBit(points));
+            throw err("ensemble.grid.points", points + " is not a power of two (the linear model's FFT needs one); use "
+                    + Integer.highestOneBit(points) + " or " + 2 * Integer.highestOneBit(points));
         }
         bg.put("points", points);
         bg.put("spacing_km", number(g, "ensemble.grid.spacing_km", linear ? 1.0 : JobModel.ENSEMBLE_SPACING_KM, 0.05, 100, "km",
@@ -233,7 +224,7 @@ public final class DayFile {
         if (Double.isNaN(layer)) {
             layer = Double.POSITIVE_INFINITY;
         } else if (!(layer > depth)) {
-            throw err("front.layer_depth_m", "value " + fmt(layer) + " m must be deeper than breeze_depth_m = " + fmt(depth)
+            throw err("front.layer_depth_m", fmt(layer) + " m is not deeper than breeze_depth_m = " + fmt(depth)
                     + " m (the current runs under it); leave it out for the deep limit");
         }
         double onset = number(front, "front.earliest_onset_h", Double.NaN, 0, 24, "h local clock", false, true);
@@ -262,25 +253,24 @@ public final class DayFile {
         try {
             return LocalDate.parse(d.asText()).toString();
         } catch (DateTimeParseException ex) {
-            throw err("date", "value '" + d.asText() + "' is not a date; write YYYY-MM-DD, e.g. 2031-06-25");
+            throw err("date", Shown.value(d) + " is not a date; write YYYY-MM-DD, e.g. 2031-06-25");
         }
     }
 
     /** The base scenario document: a scenario (file or built-in) as is, or a coast file inside our template. */
     private ObjectNode baseDocument(String ref, String date) {
-        Path p = Path.of(ref);
-        Path found = null;
-        if (!p.isAbsolute() && folder != null && Files.isRegularFile(folder.resolve(p))) {
-            found = folder.resolve(p);
-        } else if (Files.isRegularFile(p)) {
-            found = p;
+        Path found;
+        try {
+            found = ScenarioSource.resolveFile(ref, folder, "coast");
+        } catch (UserInputException ex) {
+            throw err("coast", ex.getMessage());
         }
         if (found == null) {
             if (BuiltinScenarios.names().contains(ref)) {
                 return BuiltinScenarios.resolve(ref).inputs().deepCopy();
             }
-            throw err("coast", "value '" + ref + "' is neither a file (looked in " + (folder == null ? "" : folder + " and ")
-                    + "the working folder) nor a built-in scenario; built-ins: " + String.join(", ", BuiltinScenarios.names()));
+            throw err("coast", Shown.text(ref) + " is neither a file (looked in " + (folder == null ? "" : folder + " and ")
+                    + "the working folder) nor a built-in scenario; give a coast file or one of " + String.join(", ", BuiltinScenarios.names()));
         }
         ObjectNode doc;
         try {
@@ -292,7 +282,7 @@ public final class DayFile {
             return scenarioFrom(found).inputs().deepCopy();
         }
         if (!doc.path("coast").isObject()) {
-            throw err("coast", found + " has no 'coast' section; a coast file needs coast (latitude_deg, bearing_land_to_sea_deg, "
+            throw err("coast", found + " has no 'coast' section; give a coast file with coast (latitude_deg, bearing_land_to_sea_deg, "
                     + "...) and may have surface and sites sections");
         }
         // Coast file: our template for a summer day (slab heating through a growing mixed layer); the model is set later.
@@ -338,12 +328,9 @@ public final class DayFile {
 
     private Scenario scenario(ObjectNode base) {
         try {
-            return ScenarioFile.parse("day file " + source + " (base scenario)", new com.fasterxml.jackson.databind.ObjectMapper().writeValueAsString(base), true);
-        } catch (JsonProcessingException ex) {
-            throw new IllegalStateException(ex);
+            return ScenarioFile.fromTree(doc.name() + " (base scenario)", base);
         } catch (UserInputException ex) {
-            throw new UserInputException(ex.getMessage().replaceFirst("\\(base scenario\\):\\d+:\\d+:", "(base scenario):")
-                    + " (check coast, ambient_wind, sites and ensemble.grid)", ex);
+            throw new UserInputException(ex.getMessage() + " (check coast, ambient_wind, sites and ensemble.grid)", ex);
         }
     }
 
@@ -360,22 +347,22 @@ public final class DayFile {
             }
         } else {
             if (!n.isArray() || n.isEmpty()) {
-                throw err("sites", "value " + n + " must be a non-empty list of {name, inland_km, flight_interval_min}");
+                throw err("sites", Shown.value(n) + " is not a list of sites; give a non-empty list of {name, inland_km, flight_interval_min}");
             }
             Set<String> names = new TreeSet<>();
             for (int i = 0; i < n.size(); i++) {
                 String k = "sites[" + i + "]";
                 JsonNode s = n.get(i);
                 if (!s.isObject()) {
-                    throw err(k, "value " + s + " must be {name, inland_km, flight_interval_min}");
+                    throw err(k, Shown.value(s) + " is not a site; give {name, inland_km, flight_interval_min}");
                 }
                 onlyKeys(k, s, Set.of("name", "inland_km", "flight_interval_min"));
-                if (!s.path("name").isTextual() || s.get("name").asText().isBlank()) {
+                if (!s.path("name").isTextual() || s.get("name").asText().isBlank() || s.get("name").asText().length() > 120) {
                     throw err(k + ".name", "missing or not text; give the site's name as in the passage table");
                 }
                 String name = s.get("name").asText();
                 if (!names.add(name)) {
-                    throw err(k + ".name", "'" + name + "' is listed twice; give each site once");
+                    throw err(k + ".name", Shown.text(name) + " is listed twice; give each site once");
                 }
                 double km = number((ObjectNode) s, k + ".inland_km", Double.NaN, -5000, 5000, "km (positive inland)", false);
                 double iv = number((ObjectNode) s, k + ".flight_interval_min", interval, 1, 240, "min", false);
@@ -464,8 +451,8 @@ public final class DayFile {
             if (v != null && !paths.containsKey(name)) {
                 throw err("ensemble." + name, "this coast's base scenario has no such input ("
                         + (name.startsWith("heating") || name.startsWith("mixed") ? "heating shape is "
-                        + heat.path("shape").asText("classic") : "no water segment with sst_K") + "); allowed here: "
-                        + paths.keySet());
+                        + heat.path("shape").asText("classic") : "no water segment with sst_K") + "); remove it, or use one of "
+                        + String.join(", ", paths.keySet()));
             }
             if (!paths.containsKey(name)) {
                 continue;
@@ -475,7 +462,7 @@ public final class DayFile {
                 continue;
             }
             if (v != null && !v.isObject()) {
-                throw err("ensemble." + name, "value " + v + " must be a distribution ({normal: {mean, sd, min, max}}, "
+                throw err("ensemble." + name, Shown.value(v) + " is not a distribution; give a distribution ({normal: {mean, sd, min, max}}, "
                         + "{uniform: {from, to}}, {choice: [...]}) or 'fixed'");
             }
             JsonNode d = v != null ? v : defaults.get(name);
@@ -486,7 +473,7 @@ public final class DayFile {
         JsonNode extra = e.get("draws");
         if (extra != null) {
             if (!extra.isObject()) {
-                throw err("ensemble.draws", "value " + extra + " must map scenario key paths to distributions");
+                throw err("ensemble.draws", Shown.value(extra) + " is not a mapping; give scenario key paths with a distribution each");
             }
             for (Iterator<Map.Entry<String, JsonNode>> it = extra.fields(); it.hasNext(); ) {
                 Map.Entry<String, JsonNode> x = it.next();
@@ -511,6 +498,7 @@ public final class DayFile {
         en.put("seed", seed);
         en.set("draws", draws);
         String prefix = "sweep file " + source + ": ";
+        String located = "sweep file " + source + ":";
         try {
             return SweepFile.parse(source, sweep, folder, ScenarioMemberRunner.scenarioSource(), "check-timing-" + date);
         } catch (UserInputException ex) {
@@ -525,7 +513,9 @@ public final class DayFile {
                     }
                 }
             }
-            throw new UserInputException("day file " + source + ": " + msg, ex);
+            int colon = msg.indexOf(": ");
+            String key = colon > 0 && !msg.startsWith(located) ? msg.substring(0, colon) : "ensemble";
+            throw new UserInputException(doc.where(key) + ": " + msg, ex);
         }
     }
 
@@ -555,18 +545,13 @@ public final class DayFile {
             return null;
         }
         if (!n.isObject()) {
-            throw err(key, "value " + n + " must be a set of keys");
+            throw err(key, Shown.value(n) + " is not a mapping; give its keys as 'key: value' lines indented under " + key + ":");
         }
         return (ObjectNode) n;
     }
 
     private void onlyKeys(String where, JsonNode n, Set<String> allowed) {
-        for (Iterator<String> it = n.fieldNames(); it.hasNext(); ) {
-            String k = it.next();
-            if (!allowed.contains(k)) {
-                throw err(where.isEmpty() ? k : where + "." + k, "unknown key; allowed keys are " + new TreeSet<>(allowed));
-            }
-        }
+        doc.onlyKeys(n, where, allowed);
     }
 
     private double number(JsonNode o, String key, double dflt, double lo, double hi, String unit, boolean integer) {
@@ -577,21 +562,22 @@ public final class DayFile {
     private double number(JsonNode o, String key, double dflt, double lo, double hi, String unit, boolean integer, boolean optional) {
         String leaf = key.substring(key.lastIndexOf('.') + 1);
         JsonNode v = o.get(leaf);
+        String range = InputDocument.range(lo, hi, unit, integer);
         if (v == null || v.isNull()) {
             if (Double.isNaN(dflt) && !optional) {
-                throw err(key, "missing; give a number in " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+                throw err(key, "missing; give " + range);
             }
             return dflt;
         }
-        if (!v.isNumber()) {
-            throw err(key, "value " + v + " is not a number; allowed range " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+        if (!v.isNumber() || !Double.isFinite(v.asDouble())) {
+            throw err(key, Shown.value(v) + " is not a number; give " + range);
         }
         double d = v.asDouble();
         if (integer && d != Math.rint(d)) {
-            throw err(key, "value " + v + " must be a whole number in " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+            throw err(key, Shown.value(v) + " is not a whole number; give " + range);
         }
         if (!(d >= lo && d <= hi)) {
-            throw err(key, "value " + v + " is outside the allowed range " + fmt(lo) + ".." + fmt(hi) + " " + unit);
+            throw err(key, Shown.value(v) + " is outside the allowed range; give " + range);
         }
         return d;
     }

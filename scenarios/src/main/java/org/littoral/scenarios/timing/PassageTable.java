@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeSet;
 import org.littoral.scenarios.analysis.ingest.CsvTable;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 
 /**
@@ -45,14 +46,18 @@ public final class PassageTable {
                 : org.littoral.scenarios.analysis.ingest.MappedProfileFile.passageTable(file,
                         org.littoral.scenarios.analysis.ingest.ColumnMap.load(columns));
         if (t.has("time_local_h") && t.has("turns_onshore") && t.has("day")) {
+            if (!t.has("site")) {
+                throw new UserInputException("passage table " + file + " line 1: missing column(s) [site]; add it to the header "
+                        + "line (littoral observe's passages.csv has day, site, time_local_h, uncertainty_h, turns_onshore, kind)");
+            }
             return readObserve(t, day);
         }
         if (t.has("site") && (t.has("date") || t.has("day")) && (t.has("passage_time_local") || t.has("time_local"))) {
             return readUser(t, day);
         }
-        throw new UserInputException("passage table " + file + ": columns " + t.header() + " are neither littoral observe's "
-                + "passages.csv (day, site, time_local_h, uncertainty_h, turns_onshore, kind) nor a user table (site, date, "
-                + "passage_time_local[, uncertainty_min, label]); see docs/timing-checks.md");
+        throw new UserInputException("passage table " + file + " line 1: columns " + Shown.text(String.join(",", t.header()))
+                + " are neither littoral observe's passages.csv (day, site, time_local_h, uncertainty_h, turns_onshore, kind) nor a "
+                + "user table; give the columns site, date, passage_time_local[, uncertainty_min, label] (docs/timing-checks.md)");
     }
 
     private static Read readObserve(CsvTable t, DaySpec day) {
@@ -80,8 +85,8 @@ public final class PassageTable {
             String site = t.cell(r, cSite);
             double time = t.number(r, cTime);
             if (!(time >= 0 && time <= 48)) {
-                throw new UserInputException(t.where(r) + ": column 'time_local_h' value '" + t.cell(r, cTime)
-                        + "' is not a clock time in 0..48 h");
+                throw new UserInputException(t.where(r) + ": column 'time_local_h' value " + Shown.text(t.cell(r, cTime))
+                        + " is not a clock time; give hours from 0 to 48");
             }
             double unc = cUnc >= 0 ? t.number(r, cUnc) : Double.NaN;
             boolean strengthening = cKind >= 0 && t.cell(r, cKind).equals("ONSHORE_STRENGTHENING");
@@ -142,13 +147,13 @@ public final class PassageTable {
             double time = clock(t, r, cTime);
             double unc = cUnc >= 0 && !CsvTable.isMissing(t.cell(r, cUnc)) ? t.number(r, cUnc) / 60.0 : defaultUnc(day, s);
             if (!(unc >= 0 && unc <= 3)) {
-                throw new UserInputException(t.where(r) + ": column 'uncertainty_min' value '" + t.cell(r, cUnc)
-                        + "' is outside 0..180 min");
+                throw new UserInputException(t.where(r) + ": column 'uncertainty_min' value " + Shown.text(t.cell(r, cUnc))
+                        + " is outside the allowed range; give 0 to 180 min");
             }
             String label = cLabel >= 0 && !CsvTable.isMissing(t.cell(r, cLabel)) ? t.cell(r, cLabel) : "sea_breeze";
             String key = site + "|" + label;
             if (seen.containsKey(key)) {
-                throw new UserInputException(t.where(r) + ": a second " + label + " passage at " + site + " on " + day.date()
+                throw new UserInputException(t.where(r) + ": a second " + Shown.text(label) + " passage at " + Shown.text(site) + " on " + day.date()
                         + " (the first is on line " + seen.get(key) + "); give one passage per site and label, or label the "
                         + "other one (e.g. bay_breeze)");
             }
@@ -163,7 +168,7 @@ public final class PassageTable {
         if (rows == 0) {
             String list = days.size() <= 6 ? days.toString() : days.first() + " .. " + days.last() + " (" + days.size() + " days)";
             throw new UserInputException("passage table " + t.fileName() + ": no passages on " + day.date() + " (the day file's "
-                    + "date); the table has " + list + "; give the day file of one of those days");
+                    + "date); the table has " + Shown.clip(list, 120) + "; give the day file of one of those days");
         }
     }
 
@@ -197,8 +202,8 @@ public final class PassageTable {
             }
             return h;
         } catch (NumberFormatException e) {
-            throw new UserInputException(String.format(Locale.ROOT, "%s: column '%s' value '%s' is not a local clock time; write "
-                    + "HH:MM, HH:MM:SS or decimal hours in 0..48", t.where(r), t.header().get(c), v));
+            throw new UserInputException(String.format(Locale.ROOT, "%s: column %s value %s is not a local clock time; write "
+                    + "HH:MM, HH:MM:SS or decimal hours in 0..48", t.where(r), Shown.text(t.header().get(c)), Shown.text(v)));
         }
     }
 }

@@ -93,19 +93,19 @@ class BadInputTest {
 
     @Test
     void aWrongTypeNamesKeyValueAndWhatIsAllowed() throws Exception {
-        assertOneLineError(runWith(GOOD.replace("points: 256", "points: lots")), "case.yaml:7:11: grid.points = 'lots' is not a whole number",
+        assertOneLineError(runWith(GOOD.replace("points: 256", "points: lots")), "case.yaml:7:11: grid.points = 'lots': not a whole number",
                 "16 to 16384");
     }
 
     @Test
     void latitude95IsOutOfRange() throws Exception {
         assertOneLineError(runWith(GOOD.replace("latitude_deg: 45", "latitude_deg: 95")),
-                "case.yaml:4:17: coast.latitude_deg = 95 is out of range; allowed: a number, -90 to 90 deg");
+                "case.yaml:4:17: coast.latitude_deg = 95: outside the allowed range; give a number, -90 to 90 deg");
     }
 
     @Test
     void aNegativeGridSizeIsOutOfRange() throws Exception {
-        assertOneLineError(runWith(GOOD.replace("points: 256", "points: -256")), "case.yaml:7:11: grid.points = -256 is out of range",
+        assertOneLineError(runWith(GOOD.replace("points: 256", "points: -256")), "case.yaml:7:11: grid.points = -256: outside the allowed range",
                 "16 to 16384");
     }
 
@@ -132,7 +132,7 @@ class BadInputTest {
     @Test
     void aNonlinearScenarioWithAnAmbientSpeedOutOfRangeGetsOneLine() throws Exception {
         String yaml = GOOD.replace("points: 256", "points: 400\n  spacing_km: 1") + "kind: nonlinear\nambient_wind:\n  speed_m_per_s: 45\n";
-        assertOneLineError(runWith(yaml), "case.yaml:13:18: ambient_wind.speed_m_per_s = 45 is out of range", "0 to 40 m/s");
+        assertOneLineError(runWith(yaml), "case.yaml:13:18: ambient_wind.speed_m_per_s = 45: outside the allowed range", "0 to 40 m/s");
     }
 
     @Test

@@ -62,11 +62,12 @@ class BuiltinSweepsTest {
     @Test
     void aMemberTheScenarioReaderRejectsIsNamedBeforeAnythingRuns() throws Exception {
         Path f = tmp.resolve("bad.yaml");
-        Files.writeString(f, "base: offshore-ambient\naxes:\n  heating.amplitude_K_per_h: [0.5, 80]\n");
+        // each value is in its own range; only the whole member breaks a rule (the ascent ceiling above the model top)
+        Files.writeString(f, "base: offshore-ambient\naxes:\n  grid.top_m: [4000, 300]\n");
         SweepSpec s = SweepFile.read(f, ScenarioMemberRunner.scenarioSource());
         ScenarioMemberRunner r = new ScenarioMemberRunner(s.source(), null, Solver.standard());
         String e = assertThrows(UserInputException.class, () -> r.checkAll(MemberExpander.expand(s))).getMessage();
-        assertTrue(e.contains("member m0001") && e.contains("heating.amplitude_K_per_h=80") && e.contains("amplitude_K_per_h"), e);
+        assertTrue(e.contains("member m0001") && e.contains("grid.top_m=300") && e.contains("flights.ceiling_m"), e);
     }
 
     @Test
@@ -84,6 +85,6 @@ class BuiltinSweepsTest {
         }
         assertEquals(2, code);
         String msg = err.toString();
-        assertTrue(msg.contains("typo.yaml: axes.ambient_wind.from_degrees") && msg.contains("from_deg"), msg);
+        assertTrue(msg.contains("typo.yaml:3:30: axes.ambient_wind.from_degrees") && msg.contains("from_deg"), msg);
     }
 }

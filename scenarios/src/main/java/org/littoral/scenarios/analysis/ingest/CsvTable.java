@@ -2,13 +2,13 @@ package org.littoral.scenarios.analysis.ingest;
 
 import java.io.BufferedReader;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.littoral.scenarios.input.InputText;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 
 /**
@@ -53,14 +53,30 @@ public final class CsvTable {
      * @param delimiter ',', ';' or '\t'; '\0' detects it from the header line (the one of the three that splits it most)
      */
     public static CsvTable read(Path file, char delimiter) {
-        // Gzipped CSV (name ending in .gz) is read transparently: the demo campaign ships that way.
-        try (BufferedReader r = file.getFileName().toString().endsWith(".gz")
-                ? new BufferedReader(new java.io.InputStreamReader(
-                        new java.util.zip.GZIPInputStream(Files.newInputStream(file), 1 << 16), StandardCharsets.UTF_8))
-                : Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        // Gzipped CSV is read transparently (the demo campaign ships that way); text must be UTF-8 (InputText).
+        LineCounter lines = new LineCounter(InputText.open(file, ""));
+        try (BufferedReader r = lines) {
             return read(file.getFileName().toString(), r, delimiter);
         } catch (IOException e) {
-            throw new UserInputException(file + ": cannot read (" + e.getMessage() + "); check the path");
+            throw InputText.failure(file, "", e, lines.lines + 1);
+        }
+    }
+
+    /** Counts the lines read, so a decoding or gzip failure can name the line it happened on. */
+    private static final class LineCounter extends BufferedReader {
+        long lines;
+
+        LineCounter(BufferedReader in) {
+            super(in, 1 << 12);
+        }
+
+        @Override
+        public String readLine() throws IOException {
+            String l = super.readLine();
+            if (l != null) {
+                lines++;
+            }
+            return l;
         }
     }
 
@@ -97,8 +113,8 @@ public final class CsvTable {
                 java.util.Set<String> seen = new java.util.HashSet<>();
                 for (String h : header) {
                     if (!seen.add(h)) {
-                        throw new UserInputException(fileName + " line " + headerLine + ": column '" + h
-                                + "' appears twice in the header; give each column a distinct name");
+                        throw new UserInputException(fileName + " line " + headerLine + ": column " + Shown.text(h)
+                                + " appears twice in the header; give each column a distinct name");
                     }
                 }
                 continue;
@@ -111,7 +127,8 @@ public final class CsvTable {
             lines.add(lineNo);
         }
         if (header == null) {
-            throw new UserInputException(fileName + " line 1: the file is empty; expected a header line with column names");
+            throw new UserInputException(fileName + " line 1: the file is empty; give a header line with the column names, "
+                    + "then one row per sample");
         }
         int[] ln = new int[lines.size()];
         for (int i = 0; i < ln.length; i++) {
@@ -133,7 +150,7 @@ public final class CsvTable {
     public String describe(int column) {
         String h = header.get(column);
         String o = origins.get(h);
-        return o == null ? "column '" + h + "'" : "column '" + h + "' (" + o + ")";
+        return o == null ? "column " + Shown.text(h) : "column " + Shown.text(h) + " (" + Shown.clip(o, 80) + ")";
     }
 
     /** Where the tidy column came from, or null for a plain file's own column. */
@@ -255,10 +272,14 @@ public final class CsvTable {
             return Double.NaN;
         }
         try {
-            return Double.parseDouble(c);
+            double v = Double.parseDouble(c);
+            if (!Double.isFinite(v) || c.endsWith("d") || c.endsWith("D") || c.endsWith("f") || c.endsWith("F")) {
+                throw new NumberFormatException(c);
+            }
+            return v;
         } catch (NumberFormatException e) {
-            throw new UserInputException(where(row) + ": " + describe(column) + " value '" + c
-                    + "' is not a number; write a decimal number (point as separator) or leave the cell empty for missing");
+            throw new UserInputException(where(row) + ": " + describe(column) + " value " + Shown.text(c)
+                    + " is not a number; write a decimal number (point as separator) or leave the cell empty for missing");
         }
     }
 }

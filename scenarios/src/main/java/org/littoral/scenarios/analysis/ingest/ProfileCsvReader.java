@@ -18,6 +18,7 @@ import java.util.TreeMap;
 import org.littoral.model.coast.Coast;
 import org.littoral.model.sounding.Profile;
 import org.littoral.model.thermo.Thermo;
+import org.littoral.scenarios.input.Shown;
 import org.littoral.scenarios.input.UserInputException;
 
 /**
@@ -96,8 +97,8 @@ public final class ProfileCsvReader {
             }
             int[] prev = seen.get(key);
             if (prev != null) {
-                throw new UserInputException(t.where(start) + ": profile (day " + t.cell(start, c.day) + ", site "
-                        + t.cell(start, c.site) + ", time_local " + t.cell(start, c.time) + ") was already given on lines "
+                throw new UserInputException(t.where(start) + ": profile (day " + Shown.bare(t.cell(start, c.day)) + ", site "
+                        + Shown.bare(t.cell(start, c.site)) + ", time_local " + Shown.bare(t.cell(start, c.time)) + ") was already given on lines "
                         + prev[0] + "-" + prev[1] + "; remove the duplicate or give it its own time_local");
             }
             seen.put(key, new int[] {t.line(start), t.line(end - 1)});
@@ -129,7 +130,7 @@ public final class ProfileCsvReader {
                 z[j] = zRaw[order[j]];
                 if (j > 0 && z[j] == z[j - 1]) {
                     throw new UserInputException(t.where(row) + ": height_m " + fmt(z[j]) + " appears twice in profile (day "
-                            + day + ", site " + site + ", " + prof + ") (also line " + t.line(start + order[j - 1])
+                            + Shown.bare(day) + ", site " + Shown.bare(site) + ", " + Shown.bare(prof) + ") (also line " + t.line(start + order[j - 1])
                             + "); give each bin once");
                 }
                 Qc q = new Qc(t, row, day, site, prof, log);
@@ -163,8 +164,8 @@ public final class ProfileCsvReader {
         Cols c = new Cols(t);
         int[] tSensors = sensorColumns(t, ProfileColumns.TEMPERATURE_C_SENSOR_PREFIX, ProfileColumns.TEMPERATURE_C);
         if (tSensors.length == 0) {
-            throw new UserInputException(t.fileName() + " line 1: missing column(s) [temperature_C or temperature_C_1..n]; a raw file needs: "
-                    + String.join(", ", rawExpected()));
+            throw new UserInputException(t.fileName() + " line 1: missing column(s) [temperature_C or temperature_C_1..n]; add it to "
+                    + "the header line (a raw file needs: " + String.join(", ", rawExpected()) + ")");
         }
         int[] hSensors = sensorColumns(t, ProfileColumns.RH_PERCENT_SENSOR_PREFIX, ProfileColumns.RH_PERCENT);
         int cHumAlt = -1;
@@ -187,8 +188,8 @@ public final class ProfileCsvReader {
             }
             int[] prev = seen.get(key);
             if (prev != null) {
-                throw new UserInputException(t.where(start) + ": flight " + t.cell(start, c.flight) + " (day " + t.cell(start, c.day)
-                        + ", site " + t.cell(start, c.site) + ") was already given on lines " + prev[0] + "-" + prev[1]
+                throw new UserInputException(t.where(start) + ": flight " + Shown.bare(t.cell(start, c.flight)) + " (day " + Shown.bare(t.cell(start, c.day))
+                        + ", site " + Shown.bare(t.cell(start, c.site)) + ") was already given on lines " + prev[0] + "-" + prev[1]
                         + "; keep each flight's rows together and give each flight its own flight_id");
             }
             seen.put(key, new int[] {t.line(start), t.line(end - 1)});
@@ -215,8 +216,8 @@ public final class ProfileCsvReader {
                 }
                 if (i > 0 && ti < ts[i - 1]) {
                     throw new UserInputException(t.where(row) + ": time " + fmt(ti) + " s is earlier than " + fmt(ts[i - 1])
-                            + " s on line " + t.line(row - 1) + " within flight " + flight + " (day " + day + ", site " + site
-                            + "); the samples of a flight must be in time order");
+                            + " s on line " + t.line(row - 1) + " within flight " + Shown.bare(flight) + " (day " + Shown.bare(day) + ", site " + Shown.bare(site)
+                            + "); sort the samples of each flight by time");
                 }
                 ts[i] = ti;
                 z[i] = t.number(row, c.height);
@@ -250,7 +251,7 @@ public final class ProfileCsvReader {
                 String lk = day + "\u0000" + site + "\u0000" + String.format(Locale.ROOT, "%.6f", prof2.timeHours());
                 Integer other = launchSeen.putIfAbsent(lk, t.line(start));
                 if (other != null) {
-                    throw new UserInputException(t.where(start) + ": flight " + flight + " (day " + day + ", site " + site
+                    throw new UserInputException(t.where(start) + ": flight " + Shown.bare(flight) + " (day " + Shown.bare(day) + ", site " + Shown.bare(site)
                             + ") starts its ascent at the same time as the flight on line " + other
                             + "; this looks like a duplicate profile: remove one of them");
                 }
@@ -295,6 +296,7 @@ public final class ProfileCsvReader {
                     continue;
                 }
                 String name = t.header().get(col);
+                DayTableReader.checkAttribute(t.where(row), name, v);
                 String old = m.putIfAbsent(name, v);
                 if (old != null && !old.equals(v)) {
                     log.add(t.fileName(), t.line(row), day, site, "", name, v, QcLog.Action.FLAGGED,
@@ -369,7 +371,8 @@ public final class ProfileCsvReader {
         }
         if (!missing.isEmpty()) {
             throw new UserInputException(t.fileName() + " line 1: missing column(s) " + missing + "; a " + kind
-                    + " profile file needs: " + String.join(", ", expected) + " (units in the names; see docs/analysis.md)");
+                    + " profile file needs: " + String.join(", ", expected) + "; add them to the header line (units in the names; "
+                    + "see docs/analysis.md)");
         }
     }
 
@@ -380,7 +383,7 @@ public final class ProfileCsvReader {
             }
         }
         throw new UserInputException(t.fileName() + " line 1: missing column(s) [one of " + ProfileColumns.HUMIDITY_ANY
-                + "]; the file needs: " + String.join(", ", expected));
+                + "]; add one to the header line (the file needs: " + String.join(", ", expected) + ")");
     }
 
     /** Numbered sensor columns prefix1..prefixN in numeric order, or the single column, or none. */
@@ -428,8 +431,8 @@ public final class ProfileCsvReader {
             }
             return h;
         } catch (DateTimeParseException | NumberFormatException e) {
-            throw new UserInputException(t.where(row) + ": column 'time_local' value '" + s
-                    + "' is neither an ISO local date-time (2024-07-15T13:05:00), HH:MM[:SS] nor decimal hours; fix the time");
+            throw new UserInputException(t.where(row) + ": column 'time_local' value " + Shown.text(s)
+                    + " is neither an ISO local date-time (2024-07-15T13:05:00), HH:MM[:SS] nor decimal hours; fix the time");
         }
     }
 

@@ -79,7 +79,7 @@ class ProfileCsvReaderTest {
                 "2024-07-01,A,F1,10.0,0.1,1,1000,20,20,50,50,3,270",
                 "2024-07-01,A,F1,10.0,0.05,2,1000,20,20,50,50,3,270");
         String m = error(p).getMessage();
-        assertTrue(m.startsWith("raw.csv line 4:") && m.contains("line 3") && m.contains("time order"), m);
+        assertTrue(m.startsWith("raw.csv line 4:") && m.contains("line 3") && m.contains("sort the samples of each flight by time"), m);
     }
 
     @Test
