@@ -40,6 +40,15 @@ public record FlightSchedule(double cadenceMin, double windowStartH, double wind
         return denseCadenceMin > 0;
     }
 
+    /** An upper bound of the number of launches, counted without listing them (a size check before a run). */
+    public long launchCountAtMost() {
+        long n = (long) Math.floor((windowEndH - windowStartH) * 60.0 / cadenceMin + 1e-9) + 1;
+        if (hasDenseWindow() && denseEndH >= denseStartH) {
+            n += (long) Math.floor((denseEndH - denseStartH) * 60.0 / denseCadenceMin + 1e-9) + 1;
+        }
+        return n;
+    }
+
     /** Launch times, local clock hours, increasing (allocates). */
     public List<Double> launchTimesClockHours() {
         List<Double> times = new ArrayList<>();

@@ -24,6 +24,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("check-timing", new org.littoral.scenarios.timing.TimingBenchmark());
         m.put("gradual-turns", new org.littoral.scenarios.demo.GradualTurnSkill());
         m.put("input-fuzz", new InputFuzzBenchmark());
+        m.put("memory-estimate", new MemoryEstimateBenchmark());
         return m;
     }
 

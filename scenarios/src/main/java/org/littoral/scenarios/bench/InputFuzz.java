@@ -90,7 +90,7 @@ public final class InputFuzz {
     private static final Pattern CAMEL = Pattern.compile("\\b[a-z]+[A-Z][A-Za-z]*\\b");
     private static final Pattern FIX = Pattern.compile("\\b(give|use|set|remove|fix|write|check|add|make|choose|lower|raise|"
             + "move|split|leave|rename|convert|list|swap|delete|save|widen|replace|keep|put|start|end|pick|try|quote|indent|"
-            + "shorten|drop|label|spread|narrow|reduce|increase|coarsen|change|close|separate|save|simplify|complete|unpack|free|rerun)\\b", Pattern.CASE_INSENSITIVE);
+            + "shorten|drop|label|spread|narrow|reduce|increase|coarsen|change|close|separate|save|simplify|complete|unpack|free|rerun|sort)\\b", Pattern.CASE_INSENSITIVE);
     /** Text of files that must never be echoed (a leaked system file). */
     private static final Pattern LEAK = Pattern.compile("root:.*:0:0:");
 

@@ -15,6 +15,7 @@ import org.littoral.scenarios.plan.PlanFile;
 import org.littoral.scenarios.plan.PlanMemberRunner;
 import org.littoral.scenarios.plan.PlanSpec;
 import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.run.WorkEstimate;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;
@@ -51,17 +52,18 @@ public final class InputFuzzBenchmark implements Benchmark {
      */
     public static Map<InputFuzz.Kind, InputFuzz.Reader> standardReaders(Path work) throws Exception {
         Map<InputFuzz.Kind, InputFuzz.Reader> m = new EnumMap<>(InputFuzz.Kind.class);
-        m.put(InputFuzz.Kind.SCENARIO, f -> BuiltinScenarios.resolve(f.toString()));
+        // littoral run: read, then the memory estimate before solving
+        m.put(InputFuzz.Kind.SCENARIO, f -> WorkEstimate.of(BuiltinScenarios.resolve(f.toString())).check(1, f.toString()));
         m.put(InputFuzz.Kind.SWEEP, f -> {
             SweepSpec spec = SweepFile.load(f.toString(), ScenarioMemberRunner.scenarioSource());
             List<Member> members = MemberExpander.expand(spec);
-            new ScenarioMemberRunner(spec.source(), null, Solver.standard()).checkAll(members);
+            new ScenarioMemberRunner(spec.source(), null, Solver.standard()).checkAll(members, 2);
         });
         m.put(InputFuzz.Kind.PLAN, f -> {
             PlanSpec plan = PlanFile.load(f.toString());
             PlanMemberRunner probe = new PlanMemberRunner(plan, Solver.standard(), null, new AnalysisSettings());
             for (Member mm : MemberExpander.expand(plan.ensemble())) {
-                probe.scenarioOf(mm);
+                WorkEstimate.of(probe.scenarioOf(mm)).check(2, f.toString());
             }
         });
         m.put(InputFuzz.Kind.COAST, f -> CoastFile.load(f.toString()));
@@ -69,7 +71,7 @@ public final class InputFuzzBenchmark implements Benchmark {
             DaySpec d = DayFile.read(f);
             ArrivalMemberRunner r = new ArrivalMemberRunner(d.source(), Solver.standard(), new double[] {1000.0});
             for (Member mm : MemberExpander.expand(d.ensemble())) {
-                r.scenarioOf(mm);
+                WorkEstimate.of(r.scenarioOf(mm)).check(2, f.toString());
             }
         });
         m.put(InputFuzz.Kind.OBSERVATIONS, f -> ObserveCommand.ingest(f, new AnalysisSettings()));

@@ -60,17 +60,57 @@ public final class Main implements Callable<Integer> {
             }
             return 1;
         });
-        return cl.execute(args);
+        try {
+            return cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            // the work estimates should prevent this; if it happens anyway, one line and what to do
+            System.err.println("littoral: failed: out of memory (the Java heap limit is "
+                    + Runtime.getRuntime().maxMemory() / 1048576 + " MB); make the run smaller (grid, output.step_min, "
+                    + "flights) or give Java more memory: LITTORAL_JAVA_OPTS=-Xmx8g");
+            return 1;
+        }
     }
 
-    /** The exit code for an error a command raised: 2 for bad input, 1 for anything else. */
+    /**
+     * The exit code for an error a command raised: 2 for bad input (including an output folder that cannot be
+     * written: no permission, a read-only or full disk), 1 for anything else.
+     */
     public static int exitCode(Throwable ex) {
-        return ex instanceof UserInputException || ex instanceof IllegalArgumentException ? 2 : 1;
+        if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
+            return 2;
+        }
+        return writeProblem(ex) != null ? 2 : 1;
     }
 
     /** The text printed after "littoral: error: " (exit 2) or "littoral: failed: " (exit 1). */
     public static String message(Throwable ex) {
-        return exitCode(ex) == 2 ? ex.getMessage() : String.valueOf(ex);
+        if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
+            return ex.getMessage();
+        }
+        String w = writeProblem(ex);
+        return w != null ? w : String.valueOf(ex);
+    }
+
+    /** One line for a file that could not be written because of the disk or permissions, or null. */
+    static String writeProblem(Throwable ex) {
+        for (Throwable c = ex; c != null; c = c.getCause()) {
+            if (c instanceof java.nio.file.AccessDeniedException a) {
+                return "cannot write " + a.getFile() + ": permission denied; give an --out folder you can write to";
+            }
+            if (c instanceof java.io.IOException io) {
+                String m = String.valueOf(io.getMessage());
+                String file = io instanceof java.nio.file.FileSystemException fs && fs.getFile() != null ? fs.getFile() : null;
+                if (m.contains("No space left") || m.contains("Disk quota")) {
+                    return "cannot write " + (file != null ? file : "the outputs") + ": the disk is full; free some space or "
+                            + "give an --out folder on another disk";
+                }
+                if (m.contains("Read-only file system")) {
+                    return "cannot write " + (file != null ? file : "the outputs") + ": the disk is read-only; give an --out "
+                            + "folder you can write to";
+                }
+            }
+        }
+        return null;
     }
 
     public static void main(String[] args) {

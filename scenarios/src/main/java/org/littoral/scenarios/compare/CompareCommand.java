@@ -19,6 +19,7 @@ import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -87,10 +88,16 @@ public final class CompareCommand implements Callable<Integer> {
         }
     }
 
+    @Option(names = "--overwrite", description = "Replace the outputs of an earlier run in the output folder.")
+    boolean overwrite;
+
     @Override
     public Integer call() throws Exception {
+        OutputFolder folder = OutputFolder.prepare(out, "compare " + scenario, overwrite ? OutputFolder.Mode.OVERWRITE
+                : OutputFolder.Mode.FRESH, false, System.err);
         Outcome o = run(scenario, JobModel.check("--model", model), obs, coastRef, days, columns, settingsFile, breezeType, out,
                 System.console() != null ? System.err : null);
+        folder.finish();
         Comparison.Result r = o.result();
         System.out.println("littoral: compared " + r.scenarioName() + " with " + r.days().size() + " observed day(s) at "
                 + r.sites().size() + " site(s) (" + r.pairs() + " paired profiles); wrote " + o.written().files().size()

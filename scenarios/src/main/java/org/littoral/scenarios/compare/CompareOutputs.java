@@ -79,7 +79,7 @@ public final class CompareOutputs {
     }
 
     static String safe(String s) {
-        return s.replaceAll("[^A-Za-z0-9._-]", "_");
+        return org.littoral.scenarios.output.SafeNames.fileName(s);
     }
 
     private static Path csv(Path p, Table t) throws IOException {

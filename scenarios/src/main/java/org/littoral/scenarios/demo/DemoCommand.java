@@ -40,6 +40,8 @@ import org.littoral.scenarios.sweep.ScenarioMemberRunner;
 import org.littoral.scenarios.sweep.SweepCommand;
 import org.littoral.scenarios.sweep.SweepFile;
 import org.littoral.scenarios.sweep.SweepSpec;
+import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -81,6 +83,8 @@ public final class DemoCommand implements Callable<Integer> {
             + "sweep quillmarsh-ambient and plan quillmarsh-plan unless --sweep or --plan say otherwise, and the linear model "
             + "for the comparison and the timing check. Linear theory has no front: its times are the onset of onshore flow.")
     boolean quick;
+    @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
+    boolean overwrite;
 
     /** Scenario compared with the observations (the invented coast on a weak-offshore day). */
     static final String COMPARE_SCENARIO = "quillmarsh-reach";
@@ -99,7 +103,12 @@ public final class DemoCommand implements Callable<Integer> {
         }
         String jobModel = quick ? "linear" : "nonlinear";
         Progress p = new Progress(System.err, 6);
-        Files.createDirectories(out);
+        if (resume && overwrite) {
+            throw new UserInputException("littoral demo: --resume continues the run in the folder and --overwrite removes it; "
+                    + "give one of the two");
+        }
+        OutputFolder folder = OutputFolder.prepare(out, "demo", resume ? OutputFolder.Mode.RESUME
+                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
         HtmlReport rep = HtmlReport.create("littoral demo: the INVENTED Quillmarsh Reach campaign");
         rep.meta("data", "INVENTED demonstration data (not observations), " + data);
         rep.meta("written by", "littoral demo");
@@ -147,6 +156,7 @@ public final class DemoCommand implements Callable<Integer> {
         rep.cautions();
         Path index = out.resolve("index.html");
         rep.write(index);
+        folder.finish();
         p.done("wrote " + index + " (" + rep.figureCount() + " figures, " + rep.tableCount() + " tables)");
         System.out.println("littoral: demo written to " + index);
         return 0;

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -29,6 +30,7 @@ public final class MakeDemoDataCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        OutputFolder.usable(out);
         DemoCampaign campaign = DemoCampaign.generate(seed);
         DemoDataWriter writer = new DemoDataWriter(campaign);
         List<DemoDataWriter.RawSiteDay> raw = rawDays == null ? writer.defaultRawSiteDays() : parseRawDays(campaign, rawDays);

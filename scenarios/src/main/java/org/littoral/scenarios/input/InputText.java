@@ -104,8 +104,12 @@ public final class InputText {
             return new UserInputException(prefix(file, label) + " cannot be read: permission denied; check the file's permissions", e);
         }
         if (e instanceof CharacterCodingException || e instanceof CharConversionException) {
-            return new UserInputException(at + ": " + (line > 0 ? "this line holds" : "the file holds")
-                    + " bytes that are not UTF-8 text; save the file as UTF-8 (in a spreadsheet: 'CSV UTF-8')", e);
+            // a buffered reader decodes ahead of the lines it hands out: find the first bad byte itself
+            long[] bad = firstBadUtf8(file);
+            String where = bad == null ? at : prefix(file, label) + ":" + bad[0] + ":" + bad[1];
+            return new UserInputException(where + ": " + (bad != null ? String.format(Locale.ROOT, "byte 0x%02X is", bad[2])
+                    : line > 0 ? "this line holds bytes that are" : "the file holds bytes that are")
+                    + " not UTF-8 text; save the file as UTF-8 (in a spreadsheet: 'CSV UTF-8')", e);
         }
         if (e instanceof ZipException || e instanceof EOFException) {
             return new UserInputException(at + ": the gzip data is damaged or cut short" + (line > 0 ? " (the unpacked text reads "
@@ -119,6 +123,53 @@ public final class InputText {
             why = fs.getReason();
         }
         return new UserInputException(at + ": cannot be read (" + Shown.bare(why) + "); check the file and the disk", e);
+    }
+
+    /** {line, column, byte} of the first byte that is not UTF-8 in the (unpacked) file, or null. */
+    static long[] firstBadUtf8(Path file) {
+        try (InputStream raw = new BufferedInputStream(Files.newInputStream(file), 1 << 16)) {
+            raw.mark(2);
+            boolean gz = raw.read() == 0x1f && raw.read() == 0x8b;
+            raw.reset();
+            InputStream in = gz ? new GZIPInputStream(raw, 1 << 16) : raw;
+            long line = 1;
+            long col = 1;
+            int need = 0; // continuation bytes still expected
+            int b;
+            int lead = 0;
+            while ((b = in.read()) >= 0) {
+                if (need > 0) {
+                    if ((b & 0xC0) != 0x80) {
+                        return new long[] {line, col, lead};
+                    }
+                    need--;
+                    if (need == 0) {
+                        col++;
+                    }
+                    continue;
+                }
+                if (b == '\n') {
+                    line++;
+                    col = 1;
+                } else if (b < 0x80) {
+                    col++;
+                } else if (b >= 0xC2 && b <= 0xDF) {
+                    need = 1;
+                    lead = b;
+                } else if (b >= 0xE0 && b <= 0xEF) {
+                    need = 2;
+                    lead = b;
+                } else if (b >= 0xF0 && b <= 0xF4) {
+                    need = 3;
+                    lead = b;
+                } else {
+                    return new long[] {line, col, b};
+                }
+            }
+            return need > 0 ? new long[] {line, col, lead} : null;
+        } catch (IOException e) {
+            return null;
+        }
     }
 
     static boolean isGzip(byte[] b) {

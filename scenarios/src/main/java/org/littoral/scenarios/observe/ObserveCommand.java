@@ -22,6 +22,7 @@ import org.littoral.scenarios.analysis.ingest.IngestResult;
 import org.littoral.scenarios.analysis.ingest.ProfileCsvReader;
 import org.littoral.scenarios.analysis.ingest.QcLog;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -58,6 +59,9 @@ public final class ObserveCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ${DEFAULT-VALUE}).", defaultValue = "out/observe")
     Path out;
 
+    @Option(names = "--overwrite", description = "Replace the outputs of an earlier run in the output folder.")
+    boolean overwrite;
+
     @Override
     public Integer call() throws Exception {
         Coast coast = CoastFile.load(coastRef);
@@ -73,7 +77,8 @@ public final class ObserveCommand implements Callable<Integer> {
         if (days != null) {
             settings.dayAttributes.putAll(DayTableReader.read(days));
         }
-        Files.createDirectories(out);
+        OutputFolder folder = OutputFolder.prepare(out, "observe " + obs, overwrite ? OutputFolder.Mode.OVERWRITE
+                : OutputFolder.Mode.FRESH, false, System.err);
         o.qc().writeCsv(out.resolve("qc-log.csv"));
         for (String w : o.qc().warnings()) {
             System.err.println("littoral: QC warning: " + w);
@@ -83,6 +88,7 @@ public final class ObserveCommand implements Callable<Integer> {
             System.err.println("littoral: WARNING: " + w);
         }
         List<Path> files = AnalysisOutputs.write(out, r, o.qc(), "observed profiles " + obs, coast, o.profiles(), settings);
+        folder.finish();
         System.out.println("littoral: analysed " + o.profiles().size() + " profiles in " + r.siteDays().size() + " site-days; "
                 + r.passages().size() + " passages; wrote " + files.size() + " files to " + out + " (open report.html)");
         return 0;

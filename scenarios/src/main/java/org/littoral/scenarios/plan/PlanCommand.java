@@ -19,11 +19,13 @@ import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.output.AtomicFile;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.JobModel;
+import org.littoral.scenarios.run.WorkEstimate;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;
 import org.littoral.scenarios.sweep.MemberStore;
 import org.littoral.scenarios.sweep.SweepExecutor;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -50,6 +52,9 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--resume", description = "Skip members already computed in DIR from the same inputs.")
     boolean resume;
 
+    @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
+    boolean overwrite;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
     Integer threads;
 
@@ -65,7 +70,7 @@ public final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PlanSpec plan = PlanFile.load(planRef);
-        Path dir = out != null ? out : Path.of("out", "plans", plan.ensemble().name());
+        Path dir = out != null ? out : Path.of("out", "plans", org.littoral.scenarios.output.SafeNames.fileName(plan.ensemble().name()));
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
         if (n < 1) {
             throw new UserInputException("--threads must be at least 1; got " + n);
@@ -74,18 +79,30 @@ public final class PlanCommand implements Callable<Integer> {
         if (model != null) {
             JobModel.check("--model", model);
         }
+        if (resume && overwrite) {
+            throw new UserInputException("littoral plan: --resume continues the run in the folder and --overwrite removes it; "
+                    + "give one of the two");
+        }
         AnalysisSettings as = new AnalysisSettings();
         if (settingsFile != null) {
             org.littoral.scenarios.analysis.SettingsFile.apply(settingsFile, as);
         }
+        OutputFolder folder = OutputFolder.prepare(dir, "plan " + planRef, resume ? OutputFolder.Mode.RESUME
+                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
         PlanOutcome o = run(plan, m, dir, n, resume, System.err, Solver.standard(), as);
+        folder.finish();
         PlanOutputs.printSummary(plan, o.result(), System.out);
         System.out.println("littoral: plan written to " + dir.resolve("plan.json") + ", " + dir.resolve("report.html"));
+        if (o.failed() > 0) {
+            System.out.println("littoral: " + o.failed() + " member(s) failed and are left out of every score (reasons in "
+                    + "members/<id>.json); fix the cause and run again with --resume");
+            return 1;
+        }
         return 0;
     }
 
     /** What a plan run produced. */
-    public record PlanOutcome(PlanResult result, DenseWindow[][] windows, Path dir, double wallSeconds) {
+    public record PlanOutcome(PlanResult result, DenseWindow[][] windows, Path dir, double wallSeconds, int failed) {
     }
 
     /** Runs a plan end to end and writes its outputs; used by the command, the demo and the benchmark. */
@@ -127,9 +144,12 @@ public final class PlanCommand implements Callable<Integer> {
         }
         List<Member> members = MemberExpander.expand(plan.ensemble());
         PlanMemberRunner probe = new PlanMemberRunner(plan, solver, null, settings);
+        WorkEstimate largest = null;
         for (Member mm : members) {
-            probe.scenarioOf(mm);
+            WorkEstimate w = WorkEstimate.of(probe.scenarioOf(mm));
+            largest = largest == null || w.runBytes() > largest.runBytes() ? w : largest;
         }
+        largest.check(Math.min(threads, members.size()), "plan file " + plan.ensemble().source());
         Scenario first = probe.scenarioOf(members.get(0));
         checkCandidates(plan, first);
         List<String> rejected = new ArrayList<>();
@@ -169,7 +189,7 @@ public final class PlanCommand implements Callable<Integer> {
         }
         double wall = (System.nanoTime() - t0) / 1e9;
         PlanOutputs.write(dir, plan, model, first, result, windows, wall, settings);
-        return new PlanOutcome(result, windows, dir, wall);
+        return new PlanOutcome(result, windows, dir, wall, so.failed());
     }
 
     static void checkCandidates(PlanSpec plan, Scenario s) {

@@ -77,7 +77,7 @@ public final class PlanFile {
                 throw new UserInputException("built-in plan '" + ref + "' cannot be read: " + e.getMessage(), e);
             }
         }
-        throw new UserInputException("plan file '" + ref + "' does not exist and is not a built-in plan; built-in plans: "
+        throw new UserInputException("plan file " + Shown.text(ref) + " does not exist and is not a built-in plan; built-in plans: "
                 + BUILTINS + "; give a path to a YAML or JSON plan file (see docs/planning.md)");
     }
 
@@ -108,7 +108,7 @@ public final class PlanFile {
     }
 
     private UserInputException err(String keyPath, String problem) {
-        return new UserInputException(doc.where(keyPath) + ": " + keyPath + ": " + problem);
+        return new UserInputException(doc.where(keyPath) + ": " + Shown.clip(keyPath, 100) + ": " + problem);
     }
 
     private PlanSpec parsePlan(ObjectNode plan, SweepSpec spec) {

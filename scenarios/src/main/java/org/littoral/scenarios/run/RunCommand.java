@@ -3,6 +3,8 @@ package org.littoral.scenarios.run;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
+import org.littoral.scenarios.output.SafeNames;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.Scenario;
 import picocli.CommandLine.Command;
@@ -25,6 +27,9 @@ public final class RunCommand implements Callable<Integer> {
     @Option(names = "--no-fields-nc", description = "Do not write fields.nc (the model fields on time, height and distance).")
     boolean noFieldsNc;
 
+    @Option(names = "--overwrite", description = "Replace the outputs of an earlier run in the output directory.")
+    boolean overwrite;
+
     @Option(names = "--list", description = "List the built-in scenarios and exit.")
     boolean list;
 
@@ -39,10 +44,15 @@ public final class RunCommand implements Callable<Integer> {
                     + "built-ins: " + String.join(", ", BuiltinScenarios.names()));
         }
         Scenario s = BuiltinScenarios.resolve(scenario);
-        Path dir = out != null ? out : Path.of("out", s.name());
+        Path dir = out != null ? out : Path.of("out", SafeNames.fileName(s.name()));
+        WorkEstimate work = WorkEstimate.of(s);
+        work.check(1, s.source());
+        OutputFolder folder = OutputFolder.prepare(dir, "run " + scenario, overwrite ? OutputFolder.Mode.OVERWRITE
+                : OutputFolder.Mode.FRESH, false, System.err, work.outputBytes(!noFieldsNc));
         ScenarioRun.Outcome o = new ScenarioRun(s, Solver.standard(), System.console() != null ? System.err : null)
-                .fieldsNetcdf(!noFieldsNc).command("run " + scenario + " --out " + dir).run(dir);
+                .fieldsNetcdf(!noFieldsNc).checkMemory(false).command("run " + scenario + " --out " + dir).run(dir);
         Path report = RunReport.write(s, o, dir);
+        folder.finish();
         System.out.println("littoral: wrote " + report + ", " + dir.resolve("summary.json") + " and the other outputs of " + s.name());
         return 0;
     }

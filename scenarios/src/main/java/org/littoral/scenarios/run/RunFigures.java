@@ -143,7 +143,7 @@ final class RunFigures {
     }
 
     private static String safe(String name) {
-        return name.replaceAll("[^A-Za-z0-9._-]", "_");
+        return org.littoral.scenarios.output.SafeNames.fileName(name);
     }
 
     private static String fmt(double v) {

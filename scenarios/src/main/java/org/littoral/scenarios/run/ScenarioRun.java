@@ -39,6 +39,7 @@ public final class ScenarioRun {
     private final Solver solver;
     private final PrintStream progress;
     private boolean figures = true;
+    private boolean checkMemory = true;
     private boolean fieldsNetcdf = false;
     private String command = "run";
 
@@ -76,6 +77,15 @@ public final class ScenarioRun {
         return this;
     }
 
+    /**
+     * Whether to refuse, before solving, a run whose {@link WorkEstimate} does not fit in the free heap (default true;
+     * a sweep checks all its members at once before any runs). Returns this.
+     */
+    public ScenarioRun checkMemory(boolean check) {
+        this.checkMemory = check;
+        return this;
+    }
+
     private void say(String msg) {
         if (progress != null) {
             progress.println("littoral: " + msg);
@@ -86,11 +96,18 @@ public final class ScenarioRun {
         long t0 = System.nanoTime();
         say("solving " + scenario.name() + " (" + scenario.kind().name().toLowerCase(Locale.ROOT) + ", "
                 + scenario.xGrid().nx() + " x " + scenario.zGrid().size() + " points)");
+        if (checkMemory) {
+            WorkEstimate.of(scenario).check(1, scenario.source());
+        }
         BreezeSolution sol;
         try {
             sol = solver.solve(scenario);
         } catch (UnstableRunException e) {
             throw keepPartial(e, outDir);
+        } catch (IllegalArgumentException e) {
+            // the linear model finds some singular combinations only while solving (a frequency equal to f)
+            throw new UserInputException(scenario.source() + ": the model cannot solve this scenario: "
+                    + org.littoral.scenarios.scenario.ModelLimits.inYamlTerms(e.getMessage()), e);
         }
         say(String.format(Locale.ROOT, "solved in %.2f s; sampling soundings", (System.nanoTime() - t0) / 1e9));
         Coast coast = scenario.coast();
@@ -107,6 +124,9 @@ public final class ScenarioRun {
         }
         Scenario.Output out = scenario.output();
         FieldSections fs = FieldSections.evaluate(sol, coast, out.clockHours(), out.nearSurfaceM(), siteX, periodic, null);
+        // absurd or undefined results: everything is still written (nothing computed is lost), marked invalid, and the
+        // run then stops with the reason
+        ResultChecks.Finding check = ResultChecks.of(scenario, fs, profiles);
         BreezeDiagnostics.Result d = BreezeDiagnostics.compute(fs, names, siteX, out.onshoreThresholdMPerS());
         Snapshot peak = sol.snapshotAt(fs.modelSec[d.peakTimeIndex()]);
         BreezeDiagnostics.Circulation circ = sol instanceof FarFieldSolution far
@@ -144,8 +164,19 @@ public final class ScenarioRun {
         Path summaryPath = outDir.resolve("summary.json");
         files.add(summaryPath);
         ObjectNode summary = summary(sol, profiles, fs, d, circ, outDir, files);
+        ObjectNode rc = summary.putObject("result_check");
+        rc.put("valid", check.passed());
+        rc.put("max_wind_m_per_s", round(check.maxWindMPerS(), 2));
+        rc.put("bound_m_per_s", check.boundMPerS());
+        if (!check.passed()) {
+            rc.put("problem", check.problem());
+        }
         ObjectMapper json = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         AtomicFile.write(summaryPath, json.writeValueAsBytes(summary));
+        if (!check.passed()) {
+            throw new UserInputException(scenario.source() + ": " + check.problem() + " (the outputs are in " + outDir
+                    + ", marked invalid in summary.json)");
+        }
         say(String.format(Locale.ROOT, "done in %.2f s: %s", (System.nanoTime() - t0) / 1e9, outDir));
         return new Outcome(sol, profiles, fs, d, circ, peak, summary, files);
     }

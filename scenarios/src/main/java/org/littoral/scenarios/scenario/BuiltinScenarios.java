@@ -52,10 +52,16 @@ public final class BuiltinScenarios {
         if (NAMES.contains(nameOrPath)) {
             return ScenarioFile.parse("builtin:" + nameOrPath, text(nameOrPath), false);
         }
-        Path p = Path.of(nameOrPath);
+        Path p;
+        try {
+            p = Path.of(nameOrPath);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new UserInputException(org.littoral.scenarios.input.Shown.text(nameOrPath) + " is neither a built-in scenario "
+                    + "nor a valid path; give a scenario file or a built-in name (list them with: littoral scenarios)");
+        }
         if (!Files.exists(p) && !nameOrPath.contains("/") && !nameOrPath.contains(".")) {
-            throw new UserInputException("'" + nameOrPath + "' is neither a built-in scenario nor an existing file; built-ins are "
-                    + String.join(", ", NAMES) + " (list them with: littoral scenarios)");
+            throw new UserInputException(org.littoral.scenarios.input.Shown.text(nameOrPath) + " is neither a built-in scenario "
+                    + "nor an existing file; give a scenario file or one of " + String.join(", ", NAMES));
         }
         return ScenarioFile.load(p);
     }

@@ -38,8 +38,8 @@ public final class ScenarioFile {
     /** Reads and validates a file on disk. */
     public static Scenario load(Path path) {
         if (!Files.exists(path) && !Files.isSymbolicLink(path)) {
-            throw new UserInputException(path + ": no such scenario file; give a path to a .yaml/.json file or a built-in name ("
-                    + String.join(", ", BuiltinScenarios.names()) + ")");
+            throw new UserInputException(org.littoral.scenarios.input.Shown.clip(path.toString(), 160) + ": no such scenario "
+                    + "file; give a path to a .yaml/.json file or a built-in name (list them with: littoral scenarios)");
         }
         return build(InputDocument.read(path, ""), path.toString());
     }
@@ -185,6 +185,13 @@ public final class ScenarioFile {
                         ? SurfaceEnergyBalance.Partition.PRIESTLEY_TAYLOR : SurfaceEnergyBalance.Partition.BOWEN_RATIO);
             } else {
                 heating = heating(hn, coast, atm);
+                String widthKey = heating instanceof HeatingSpec.ClassicShape ? "half_width_km" : "transition_half_width_km";
+                double widthKm = d(hn, widthKey);
+                if (!nonlinear && widthKm * 1000.0 < 0.5 * dx) {
+                    problem("heating." + widthKey, "heating." + widthKey + " = " + Schema.fmt(widthKm) + " is below half the grid "
+                            + "spacing (" + Schema.fmt(dx / 2000.0) + " km), too sharp for the grid to resolve; widen it or refine "
+                            + "grid.spacing_km");
+                }
             }
 
             JsonNode ph = n.get("physics");

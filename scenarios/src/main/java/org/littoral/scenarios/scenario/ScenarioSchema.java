@@ -42,8 +42,9 @@ public final class ScenarioSchema {
                                     + "Every segment but the last needs it; the last extends inland without end, the first offshore without end."))),
             Schema.forms(
                     "water", List.of(
-                            pos("sst_K", "K", 260, 320, 293.15, "Water surface temperature."),
-                            pos("roughness_m", "m", 0, 0.1, 2e-4, "Aerodynamic roughness length (about 2e-4 m over open water).")),
+                            new Field("sst_K", new Schema.Num("K", 260, 320, true, true), Presence.DEFAULTED, 293.15, "Water surface temperature."),
+                            new Field("roughness_m", new Schema.Num("m", 0, 0.1, true, true), Presence.DEFAULTED, 2e-4,
+                                    "Aerodynamic roughness length (about 2e-4 m over open water).")),
                     "land", List.of(
                             num("albedo", "", 0, 1, 0.2, "Surface albedo."),
                             pos("bowen_ratio", "", 0, 20, 1.0, "Sensible / latent heat flux ratio (Oke 1987: grassland ~0.5, semi-arid 2-6)."),
@@ -57,12 +58,12 @@ public final class ScenarioSchema {
     static final Field GRID = section("grid", Presence.DEFAULTED, "Model grid. The cross-shore domain is periodic and centred on the coast.",
             integer("points", 16, 16384, 512L, "Number of cross-shore points. kind linear: a power of two (FFT). "
                     + "kind nonlinear: a product of the factors 2, 3 and 5 (e.g. 200, 400, 512)."),
-            pos("spacing_km", "km", 0, 100, 2.0, "Cross-shore grid spacing. Domain length = points x spacing_km; make it several times the breeze scale. "
+            num("spacing_km", "km", 0.05, 100, 2.0, "Cross-shore grid spacing (at least 50 m: the models are hydrostatic-scale and a finer grid only costs time). Domain length = points x spacing_km; make it several times the breeze scale. "
                     + "kind nonlinear: the outer 50 km at each end are far-field sponges, so the domain must exceed 200 km."),
             integer("levels", 2, 1024, 64L, "Number of output levels from the ground to top_m. kind nonlinear: the layer interfaces "
                     + "from the ground to the rigid lid at top_m, so the model has levels - 1 layers and gives values at their centres."),
             pos("top_m", "m", 100, 50000, 4000.0, "Height of the top level."),
-            optional(pos("first_level_spacing_m", "m", 0, 1000, null,
+            optional(num("first_level_spacing_m", "m", 1, 1000, null,
                     "Spacing of the lowest layer; the spacing then grows geometrically to reach top_m. Omitted: uniform levels.")));
 
     static final Field ATMOSPHERE = section("atmosphere", Presence.DEFAULTED, "The horizontally uniform basic state.",
@@ -79,7 +80,7 @@ public final class ScenarioSchema {
             optional(pos("inversion_depth_m", "m", 0, 2000, null, "Thickness of the capping inversion (with inversion_K; default 100).")),
             num("surface_mixing_ratio_g_per_kg", "g/kg", 0, 40, 8.0, "Water-vapour mixing ratio at the ground."),
             num("mixing_ratio_gradient_g_per_kg_per_km", "g/kg per km", -20, 5, -2.0, "Vertical gradient of the mixing ratio (negative: drier aloft)."),
-            pos("surface_pressure_hPa", "hPa", 500, 1100, 1013.25, "Surface pressure."));
+            pos("surface_pressure_hPa", "hPa", 500, 1090, 1013.25, "Surface pressure."));
 
     static final Field AMBIENT = section("ambient_wind", Presence.DEFAULTED,
             "The large-scale wind, uniform in height, in meteorological convention. The linear model uses its cross-shore "
@@ -94,19 +95,20 @@ public final class ScenarioSchema {
     static final Field HEATING = new Field("heating", new Variant("shape", List.of(),
             Schema.forms(
                     "classic", List.of(
-                            num("amplitude_K_per_h", "K/h", 0, 50, 0.5,
-                                    "Q0 in Q = Q0 [pi/2 + arctan(x/x0)] exp(-z/H) sin(omega (t - sunrise)): far inland the heating rate peaks at pi Q0."),
+                            num("amplitude_K_per_h", "K/h", 0, 5, 0.5,
+                                    "Q0 in Q = Q0 [pi/2 + arctan(x/x0)] exp(-z/H) sin(omega (t - sunrise)): far inland the heating rate peaks at pi Q0 "
+                                            + "(5 K/h gives about 16 K/h far inland, beyond any observed mixed-layer heating)."),
                             pos("half_width_km", "km", 0, 500, 10.0, "x0, the coastal transition half-width of the heating."),
-                            pos("depth_m", "m", 0, 10000, 1000.0, "H, the e-folding depth of the heating."),
+                            num("depth_m", "m", 10, 10000, 1000.0, "H, the e-folding depth of the heating."),
                             num("sunrise_solar_h", "h", 0, 12, 6.0, "Local solar time at which the heating turns positive (6 for the pure sinusoid).")),
                     "slab", List.of(
-                            num("peak_flux_difference_W_per_m2", "W/m2", 0, 1500, 250.0, "Peak land-minus-water sensible heat flux."),
+                            num("peak_flux_difference_W_per_m2", "W/m2", 0, 1000, 250.0, "Peak land-minus-water sensible heat flux."),
                             optional(num("sunrise_solar_h", "h", 0, 24, null, "Start of heating, local solar time. Omitted: sunrise from latitude and day of year (Cooper 1969 declination).")),
                             optional(num("sunset_solar_h", "h", 0, 24, null, "End of heating, local solar time. Omitted: sunset from latitude and day of year.")),
                             optional(pos("lapse_above_K_per_km", "K/km", 0, 50, null,
                                     "Potential-temperature gradient above the mixed layer. Omitted: N^2 theta_s / g from the atmosphere section.")),
                             num("entrainment_ratio", "", 0, 1, 0.2, "A in the zero-order-jump growth (0.2 usual; 0 is encroachment)."),
-                            pos("initial_depth_m", "m", 0, 3000, 100.0, "Mixed-layer depth at sunrise."),
+                            num("initial_depth_m", "m", 10, 3000, 100.0, "Mixed-layer depth at sunrise."),
                             pos("transition_half_width_km", "km", 0, 500, 5.0, "Half-width of the smoothed land-water step.")),
                     "energy_balance", List.of(
                             num("cloud_fraction", "", 0, 1, 0.0, "Total cloud cover, 0 (clear) to 1 (overcast); reduces the sunshine "
@@ -125,9 +127,10 @@ public final class ScenarioSchema {
                     + "Omitted: classic with its defaults for kind linear, energy_balance for kind nonlinear.");
 
     static final Field PHYSICS = section("physics", Presence.DEFAULTED, "Switches and damping of the model equations.",
-            num("friction_per_s", "1/s", 0, 1e-2, 0.0, "Rayleigh friction alpha (0: inviscid). A few 1e-5 1/s keeps the response finite near 30 degrees latitude. "
+            new Field("friction_per_s", new Schema.Num("1/s", 0, 1e-2, false, true), Presence.DEFAULTED, 0.0, "Rayleigh friction alpha (0: inviscid). A few 1e-5 1/s keeps the response finite near 30 degrees latitude. "
                     + "kind nonlinear: applied to the departure from the geostrophic wind, on top of the model's turbulent mixing and surface drag."),
-            optional(num("cooling_per_s", "1/s", 0, 1e-2, null, "Newtonian cooling rate. Omitted: equal to friction_per_s.")),
+            new Field("cooling_per_s", new Schema.Num("1/s", 0, 1e-2, false, true), Presence.OPTIONAL, null,
+                    "Newtonian cooling rate. Omitted: equal to friction_per_s."),
             flag("hydrostatic", true, "true: hydrostatic equations; false: keep the non-hydrostatic term. kind linear only (the nonlinear model is always non-hydrostatic)."),
             integer("harmonics", 1, 128, 24L, "Number of diurnal time harmonics kept (1 is a pure sinusoid). kind linear only."));
 
@@ -145,15 +148,15 @@ public final class ScenarioSchema {
             num("wind_sigma_m_per_s", "m/s", 0, 20, 0.5, "Standard deviation of noise on each horizontal wind component."));
 
     static final Field FLIGHTS = section("flights", Presence.DEFAULTED, "When and how the virtual drones fly (local clock time).",
-            pos("cadence_min", "min", 0, 1440, 30.0, "Time between launches."),
+            num("cadence_min", "min", 1, 1440, 30.0, "Time between launches (at least a minute)."),
             num("start_h", "h", 0, 24, 6.0, "First launch, local clock hours."),
             num("end_h", "h", 0, 24, 20.0, "Last launch (inclusive), local clock hours."),
-            optional(pos("dense_cadence_min", "min", 0, 1440, null, "Time between launches inside the dense window. Omitted: no dense window.")),
+            optional(num("dense_cadence_min", "min", 1, 1440, null, "Time between launches inside the dense window. Omitted: no dense window.")),
             optional(num("dense_start_h", "h", 0, 24, null, "Start of the dense window, local clock hours (needed with dense_cadence_min).")),
             optional(num("dense_end_h", "h", 0, 24, null, "End of the dense window, local clock hours (needed with dense_cadence_min).")),
             pos("ceiling_m", "m", 0, 10000, 600.0, "Altitude ceiling of each ascent (must not exceed grid.top_m; local aviation rules decide the real one)."),
-            pos("bin_m", "m", 0, 500, 5.0, "Bin thickness; values are reported at bin centres."),
-            pos("ascent_rate_m_per_s", "m/s", 0, 30, 2.0, "Climb rate; the bin at height z is sampled z / rate after launch."),
+            num("bin_m", "m", 1, 500, 5.0, "Bin thickness (at least 1 m); values are reported at bin centres."),
+            num("ascent_rate_m_per_s", "m/s", 0.5, 30, 2.0, "Climb rate; the bin at height z is sampled z / rate after launch."),
             NOISE);
 
     static final Field OUTPUT = section("output", Presence.DEFAULTED, "Times and levels used for the diagnostics, plots and summary.",
@@ -161,7 +164,7 @@ public final class ScenarioSchema {
                     + "output.start_h, flights.start_h and 2 h before sunrise, from the balanced boundary layer of each surface."),
             num("end_h", "h", 0, 48, 24.0, "Last output time, local clock hours (more than 24 reaches into the next day). kind nonlinear: "
                     + "the model runs to the later of output.end_h and the end of the last ascent."),
-            pos("step_min", "min", 0, 360, 15.0, "Output interval."),
+            num("step_min", "min", 1, 360, 15.0, "Output interval (at least a minute)."),
             num("near_surface_m", "m", 0, 1000, 10.0, "Height of the near-surface wind used for onset, arrival and the time-distance section."),
             pos("onshore_threshold_m_per_s", "m/s", 0, 20, 0.5,
                     "Onshore means the total cross-shore wind and the breeze wind (the model wind minus the ambient wind) both reach "

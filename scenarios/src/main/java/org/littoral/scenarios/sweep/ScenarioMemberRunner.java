@@ -15,6 +15,7 @@ import java.util.stream.Stream;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;
+import org.littoral.scenarios.run.WorkEstimate;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
 import org.littoral.scenarios.scenario.Scenario;
 import org.littoral.scenarios.scenario.ScenarioFile;
@@ -49,6 +50,18 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
         return this;
     }
 
+    private Path scratchRoot;
+
+    /**
+     * Where members whose run files are not kept run (each in its own sub-folder, deleted when it finishes): under
+     * the sweep's output folder, so a killed sweep leaves nothing elsewhere and a resumed one clears it
+     * ({@link SweepExecutor#SCRATCH}). Without it, the system's temporary folder. Returns this.
+     */
+    public ScenarioMemberRunner scratchIn(Path folder) {
+        this.scratchRoot = folder;
+        return this;
+    }
+
     /** Base scenarios as the scenario reader sees them: every default filled in, so every key can be swept. */
     public static ScenarioSource scenarioSource() {
         return new ScenarioSource() {
@@ -80,8 +93,25 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
 
     /** Checks every member before anything runs, so a bad combination stops the sweep at once. */
     public void checkAll(List<Member> members) {
+        checkAll(members, 1);
+    }
+
+    /**
+     * Checks every member before anything runs, and that {@code threads} of the largest run at once fit in memory
+     * ({@link WorkEstimate}), so a bad combination or a sweep too big for the machine stops at once.
+     */
+    public void checkAll(List<Member> members, int threads) {
+        WorkEstimate largest = null;
+        Member which = null;
         for (Member m : members) {
-            scenarioOf(m);
+            WorkEstimate w = WorkEstimate.of(scenarioOf(m));
+            if (largest == null || w.runBytes() > largest.runBytes()) {
+                largest = w;
+                which = m;
+            }
+        }
+        if (largest != null) {
+            largest.check(Math.min(threads, members.size()), "sweep " + sweepSource + " (largest member " + which.id() + ")");
         }
     }
 
@@ -91,9 +121,10 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
         Path dir = null;
         boolean scratch = runsDir == null;
         try {
-            dir = scratch ? Files.createTempDirectory("littoral-member-") : runsDir.resolve(m.id());
+            dir = !scratch ? runsDir.resolve(m.id())
+                    : scratchRoot != null ? scratchRoot.resolve(m.id()) : Files.createTempDirectory("littoral-member-");
             Files.createDirectories(dir);
-            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).fieldsNetcdf(fieldsNetcdf)
+            ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).checkMemory(false).fieldsNetcdf(fieldsNetcdf)
                     .command("sweep " + sweepSource + " member " + m.id()).run(dir);
             return new MemberResult(trim(o.summary()));
         } catch (IOException e) {

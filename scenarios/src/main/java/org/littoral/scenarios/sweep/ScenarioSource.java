@@ -41,7 +41,7 @@ public interface ScenarioSource {
             if (p != null) {
                 return readDocument(p);
             }
-            for (String ext : new String[] {".yaml", ".yml", ".json"}) {
+            for (String ext : ref.matches("[A-Za-z0-9_-][A-Za-z0-9._-]*") ? new String[] {".yaml", ".yml", ".json"} : new String[0]) {
                 String res = BUILTIN_FOLDER + ref + ext;
                 try (InputStream in = ScenarioSource.class.getResourceAsStream(res)) {
                     if (in != null) {

@@ -4,6 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.littoral.scenarios.input.UserInputException;
+import org.littoral.scenarios.output.OutputFolder;
+import org.littoral.scenarios.output.SafeNames;
 import org.littoral.scenarios.run.Solver;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -28,6 +30,9 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Option(names = "--resume", description = "Skip members whose result is already in DIR (computed from the same inputs).")
     boolean resume;
+
+    @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
+    boolean overwrite;
 
     @Option(names = "--retry-failed", description = "With --resume, run members that failed last time again.")
     boolean retryFailed;
@@ -60,8 +65,8 @@ public final class SweepCommand implements Callable<Integer> {
                              boolean fieldsNc) throws Exception {
         List<Member> members = MemberExpander.expand(spec);
         ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), keepRunFiles ? dir.resolve("runs") : null,
-                Solver.standard()).fieldsNetcdf(fieldsNc && keepRunFiles);
-        runner.checkAll(members);
+                Solver.standard()).fieldsNetcdf(fieldsNc && keepRunFiles).scratchIn(dir.resolve(SweepExecutor.SCRATCH));
+        runner.checkAll(members, threads);
         SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner,
                 SweepExecutor.Options.forCommandLine(threads, resume, retryFailed));
         ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
@@ -83,18 +88,27 @@ public final class SweepCommand implements Callable<Integer> {
             return 0;
         }
         SweepSpec spec = SweepFile.load(sweep, ScenarioMemberRunner.scenarioSource());
-        Path dir = out != null ? out : Path.of("out", "sweeps", spec.name());
+        Path dir = out != null ? out : Path.of("out", "sweeps", SafeNames.fileName(spec.name()));
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
         if (fieldsNc && noRunFiles) {
             throw new UserInputException("littoral sweep: --fields-nc keeps fields.nc among each member's run files, which "
                     + "--no-run-files drops; give one of the two");
         }
+        if (resume && overwrite) {
+            throw new UserInputException("littoral sweep: --resume continues the run in the folder and --overwrite removes it; "
+                    + "give one of the two");
+        }
+        OutputFolder folder = OutputFolder.prepare(dir, "sweep " + sweep, resume ? OutputFolder.Mode.RESUME
+                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
         Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc);
+        folder.finish();
         SweepExecutor.Outcome o = r.outcome();
-        System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed); wrote "
+        System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed"
+                + (o.failedEarlier() > 0 ? ", " + o.failedEarlier() + " of them in an earlier run" : "") + "); wrote "
                 + dir.resolve("comparison.csv") + ", comparison.json" + (r.figures().isEmpty() ? "" : " and " + r.figures().size() + " figure(s)"));
         if (o.failed() > 0) {
-            System.out.println("littoral: " + o.failed() + " member(s) failed; their reasons are in the 'error' column and in members/<id>.json");
+            System.out.println("littoral: " + o.failed() + " member(s) failed; their reasons are in the 'error' column and in "
+                    + "members/<id>.json; fix the cause and run again with --resume --retry-failed");
             return 1;
         }
         return 0;

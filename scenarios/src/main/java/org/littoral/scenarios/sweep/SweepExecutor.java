@@ -58,9 +58,22 @@ public final class SweepExecutor {
         }
     }
 
-    /** What the run did. */
-    public record Outcome(int members, int ran, int skipped, int failed, double wallSeconds) {
+    /**
+     * What the run did.
+     *
+     * @param failed members whose result is a failure after this run: those that failed now and those that failed in
+     *               an earlier run and were not run again (a resumed sweep is complete only when this is 0)
+     * @param failedEarlier of {@code failed}, those from an earlier run (kept because --retry-failed was not given)
+     */
+    public record Outcome(int members, int ran, int skipped, int failed, double wallSeconds, int failedEarlier) {
+        /** Members that failed in this run. */
+        public int failedNow() {
+            return failed - failedEarlier;
+        }
     }
+
+    /** Scratch folder for members whose run files are not kept, under the output folder; emptied when a run starts. */
+    public static final String SCRATCH = ".scratch";
 
     private SweepExecutor() {
     }
@@ -74,7 +87,13 @@ public final class SweepExecutor {
         if (temps > 0) {
             opt.log().println("sweep: removed " + temps + " incomplete temporary file(s) left by an interrupted run");
         }
-        List<Member> todo = plan(spec, members, outDir, store, opt);
+        Path scratch = outDir.resolve(SCRATCH);
+        if (java.nio.file.Files.exists(scratch)) {
+            int n = deleteTree(scratch);
+            opt.log().println("sweep: removed " + scratch + " (" + n + " scratch file(s) left by an interrupted run)");
+        }
+        int[] earlierFailed = {0};
+        List<Member> todo = plan(spec, members, outDir, store, opt, earlierFailed);
         int skipped = members.size() - todo.size();
         if (skipped > 0) {
             opt.log().println("sweep: resuming: " + skipped + " of " + members.size() + " members already done");
@@ -134,10 +153,17 @@ public final class SweepExecutor {
                 bar.close();
             }
         }
+        try {
+            java.nio.file.Files.deleteIfExists(scratch); // empty once every member has cleaned up after itself
+        } catch (IOException e) {
+            // not empty: a member's scratch could not be removed; the next run clears it
+        }
         double wall = (System.nanoTime() - t0) * 1e-9;
-        opt.log().printf(java.util.Locale.ROOT, "sweep: %d members: %d run, %d already done, %d failed; %.1f s on %d thread(s)%n",
-                members.size(), todo.size(), skipped, failed.get(), wall, threads);
-        return new Outcome(members.size(), todo.size(), skipped, failed.get(), wall);
+        int total = failed.get() + earlierFailed[0];
+        opt.log().printf(java.util.Locale.ROOT, "sweep: %d members: %d run, %d already done, %d failed%s; %.1f s on %d thread(s)%n",
+                members.size(), todo.size(), skipped, total, earlierFailed[0] == 0 ? "" : " (" + earlierFailed[0]
+                        + " of them in an earlier run; --resume --retry-failed runs them again)", wall, threads);
+        return new Outcome(members.size(), todo.size(), skipped, total, wall, earlierFailed[0]);
     }
 
     /** Runs one member, turning any failure of the member itself into a "failed" record. */
@@ -161,7 +187,8 @@ public final class SweepExecutor {
     }
 
     /** Which members still need running; refuses to mix results from other inputs. */
-    private static List<Member> plan(SweepSpec spec, List<Member> members, Path outDir, MemberStore store, Options opt) {
+    private static List<Member> plan(SweepSpec spec, List<Member> members, Path outDir, MemberStore store, Options opt,
+                                     int[] earlierFailed) {
         Set<String> ids = new HashSet<>();
         for (Member m : members) {
             ids.add(m.id());
@@ -185,6 +212,8 @@ public final class SweepExecutor {
                 case VALID_FAILED -> {
                     if (opt.retryFailed()) {
                         todo.add(m);
+                    } else {
+                        earlierFailed[0]++;
                     }
                 }
                 case ABSENT -> todo.add(m);
@@ -229,6 +258,26 @@ public final class SweepExecutor {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + outDir.resolve("sweep.json"), e);
         }
+    }
+
+    /** Deletes a folder and everything in it; returns the number of files removed. */
+    static int deleteTree(Path dir) {
+        int[] n = {0};
+        try (java.util.stream.Stream<Path> s = java.nio.file.Files.walk(dir)) {
+            s.sorted(java.util.Comparator.reverseOrder()).forEach(p -> {
+                try {
+                    if (!java.nio.file.Files.isDirectory(p)) {
+                        n[0]++;
+                    }
+                    java.nio.file.Files.delete(p);
+                } catch (IOException e) {
+                    throw new UncheckedIOException("cannot remove " + p, e);
+                }
+            });
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot remove " + dir, e);
+        }
+        return n[0];
     }
 
     private static void progressLine(Options opt, long[] last, int done, int total, int failed) {

@@ -66,7 +66,7 @@ public final class SweepFile {
         if (BUILTINS.contains(ref)) {
             return readBuiltin(ref, scenarios);
         }
-        throw new UserInputException("sweep '" + ref + "' is neither a file nor a built-in sweep; give a path to a"
+        throw new UserInputException("sweep " + Shown.text(ref) + " is neither a file nor a built-in sweep; give a path to a"
                 + " sweep file or one of " + BUILTINS);
     }
 
@@ -108,7 +108,7 @@ public final class SweepFile {
     }
 
     private UserInputException err(String keyPath, String problem) {
-        return new UserInputException(doc.where(keyPath) + ": " + keyPath + ": " + problem);
+        return new UserInputException(doc.where(keyPath) + ": " + Shown.clip(keyPath, 100) + ": " + problem);
     }
 
     private SweepSpec parse() {

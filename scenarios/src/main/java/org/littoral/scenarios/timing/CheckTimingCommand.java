@@ -15,10 +15,12 @@ import org.littoral.scenarios.input.UserInputException;
 import org.littoral.model.surface.SolarGeometry;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.JobModel;
+import org.littoral.scenarios.run.WorkEstimate;
 import org.littoral.scenarios.sweep.Member;
 import org.littoral.scenarios.sweep.MemberExpander;
 import org.littoral.scenarios.sweep.MemberStore;
 import org.littoral.scenarios.sweep.SweepExecutor;
+import org.littoral.scenarios.output.OutputFolder;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -59,13 +61,23 @@ public final class CheckTimingCommand implements Callable<Integer> {
     @Option(names = "--resume", description = "Keep ensemble members already computed in DIR from the same inputs.")
     boolean resume;
 
+    @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
+    boolean overwrite;
+
     @Override
     public Integer call() throws Exception {
         DaySpec spec = DayFile.read(day, model);
         Path dir = out != null ? out : Path.of("out", "check-timing", spec.date());
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        if (resume && overwrite) {
+            throw new UserInputException("littoral check-timing: --resume continues the run in the folder and --overwrite "
+                    + "removes it; give one of the two");
+        }
+        OutputFolder folder = OutputFolder.prepare(dir, "check-timing " + passages, resume ? OutputFolder.Mode.RESUME
+                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
         CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null, columns),
                 Solver.standard());
+        folder.finish();
         PrintStream o = System.out;
         o.printf("littoral: %s: %d passage(s) checked against %d ensemble member(s) (%s model): %d flag(s)%n", spec.date(),
                 r.check().passages().size(), r.members(), r.model(), r.check().flags().size());
@@ -120,9 +132,12 @@ public final class CheckTimingCommand implements Callable<Integer> {
         double[] xM = distances(spec);
         List<Member> members = MemberExpander.expand(spec.ensemble());
         ArrivalMemberRunner runner = new ArrivalMemberRunner(spec.source(), solver, xM);
+        WorkEstimate largest = null;
         for (Member m : members) {
-            runner.scenarioOf(m);
+            WorkEstimate w = WorkEstimate.of(runner.scenarioOf(m));
+            largest = largest == null || w.runBytes() > largest.runBytes() ? w : largest;
         }
+        largest.check(Math.min(opt.threads(), members.size()), "day file " + spec.source());
         Files.createDirectories(dir);
         opt.log().println("check-timing: " + members.size() + " ensemble member(s), " + model + " model, " + opt.threads()
                 + " thread(s)");

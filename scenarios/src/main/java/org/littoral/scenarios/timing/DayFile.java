@@ -94,7 +94,7 @@ public final class DayFile {
     }
 
     private UserInputException err(String key, String problem) {
-        return new UserInputException(doc.where(key) + ": " + key + ": " + problem);
+        return new UserInputException(doc.where(key) + ": " + Shown.clip(key, 100) + ": " + problem);
     }
 
     private DaySpec parse(ObjectNode root) {
@@ -269,8 +269,8 @@ public final class DayFile {
             if (BuiltinScenarios.names().contains(ref)) {
                 return BuiltinScenarios.resolve(ref).inputs().deepCopy();
             }
-            throw err("coast", Shown.text(ref) + " is neither a file (looked in " + (folder == null ? "" : folder + " and ")
-                    + "the working folder) nor a built-in scenario; give a coast file or one of " + String.join(", ", BuiltinScenarios.names()));
+            throw err("coast", Shown.text(ref) + " is neither a file (looked next to the day file and in the working folder) nor "
+                    + "a built-in scenario; give a coast file or a built-in name (list them with: littoral scenarios)");
         }
         ObjectNode doc;
         try {

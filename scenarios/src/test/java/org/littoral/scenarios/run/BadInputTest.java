@@ -112,7 +112,7 @@ class BadInputTest {
     @Test
     void aNegativeGridSpacingIsOutOfRange() throws Exception {
         assertOneLineError(runWith(GOOD.replace("points: 256", "points: 256\n  spacing_km: -2")),
-                "grid.spacing_km = -2", "greater than 0");
+                "grid.spacing_km = -2", "0.05 to 100 km");
     }
 
     @Test

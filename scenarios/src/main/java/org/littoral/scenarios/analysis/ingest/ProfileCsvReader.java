@@ -113,7 +113,7 @@ public final class ProfileCsvReader {
                 order[i] = i;
                 zRaw[i] = t.number(start + i, c.height);
                 if (Double.isNaN(zRaw[i])) {
-                    throw new UserInputException(t.where(start + i) + ": column 'height_m' is empty; every sample needs a height");
+                    throw new UserInputException(t.where(start + i) + ": column 'height_m' is empty; give every sample its height");
                 }
             }
             Arrays.sort(order, (a, b) -> Double.compare(zRaw[a], zRaw[b]));
@@ -212,7 +212,7 @@ public final class ProfileCsvReader {
                 double ti = cTimeS >= 0 ? t.number(row, cTimeS) : (timeHours(t, row, c.time, day) - h0) * 3600.0;
                 if (Double.isNaN(ti)) {
                     throw new UserInputException(t.where(row) + ": column '" + (cTimeS >= 0 ? "time_s" : "time_local")
-                            + "' is empty; every raw sample needs a time");
+                            + "' is empty; give every raw sample a time");
                 }
                 if (i > 0 && ti < ts[i - 1]) {
                     throw new UserInputException(t.where(row) + ": time " + fmt(ti) + " s is earlier than " + fmt(ts[i - 1])
