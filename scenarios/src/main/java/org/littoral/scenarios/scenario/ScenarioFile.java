@@ -39,7 +39,7 @@ public final class ScenarioFile {
     public static Scenario load(Path path) {
         if (!Files.exists(path) && !Files.isSymbolicLink(path)) {
             throw new UserInputException(org.littoral.scenarios.input.Shown.clip(path.toString(), 160) + ": no such scenario "
-                    + "file; give a path to a .yaml/.json file or a built-in name (list them with: littoral scenarios)");
+                    + "file; give a path to a .yaml/.json file or a built-in name (" + String.join(", ", BuiltinScenarios.names()) + ")");
         }
         return build(InputDocument.read(path, ""), path.toString());
     }

@@ -19,8 +19,8 @@ import org.littoral.scenarios.bench.InputFuzzBenchmark;
  * internals, no stack trace). The same corpus, larger, is {@code littoral bench input-fuzz}.
  */
 class InputFuzzTest {
-    /** 500 mutants per kind: 4,000 in all. */
-    private static final int PER_KIND = 500;
+    /** 375 mutants per kind: 3,000 in all. */
+    private static final int PER_KIND = 375;
 
     @Test
     void everyMutatedInputIsAcceptedOrRefusedWithOneClearLineNamingTheFile(@TempDir Path tmp) throws Exception {
