@@ -217,6 +217,10 @@ public final class PlanFile {
             ObjectNode o = (ObjectNode) c;
             double interval = number(o, "interval_min", Double.NaN, 1, 240, "minutes", false, k + ".");
             double dense = number(o, "dense_interval_min", 0, 0, 240, "minutes", false, k + ".");
+            if (dense > 0 && dense < 1) {
+                throw err(k + ".dense_interval_min", fmt(dense) + " min is shorter than a minute; give 0 (no dense window) or "
+                        + "1 to 240 min");
+            }
             if (dense > 0 && !(dense < interval)) {
                 throw err(k + ".dense_interval_min", fmt(dense) + " is not shorter than interval_min = " + fmt(interval)
                         + "; give a shorter dense interval, or 0 for none");

@@ -128,6 +128,10 @@ public final class DayFile {
         double first = number(flights, "flights.first_h", 7, 0, 24, "h local clock", false);
         double last = number(flights, "flights.last_h", 18, first, 24, "h local clock (after first_h)", false);
         double dense = number(flights, "flights.dense_interval_min", 0, 0, 240, "min (0: no dense window)", false);
+        if (dense > 0 && dense < 1) {
+            throw err("flights.dense_interval_min", Shown.number(dense) + " min is shorter than a minute; give 0 (no dense "
+                    + "window) or 1 to 240 min");
+        }
         double denseStart = number(flights, "flights.dense_start_h", dense > 0 ? Double.NaN : first, first, last,
                 "h local clock (inside first_h..last_h)", false);
         double denseEnd = number(flights, "flights.dense_end_h", dense > 0 ? Double.NaN : first, denseStart, last,
