@@ -162,6 +162,16 @@ public final class AnalysisFigures {
         return ds.isEmpty() ? "" : ds.get(0).breezeType().name().toLowerCase(Locale.ROOT);
     }
 
+    /** A group as a reader sees it: breeze types in lower case, as everywhere else; other groups as they are. */
+    static String groupName(String g) {
+        for (org.littoral.scenarios.analysis.stats.BreezeType t : org.littoral.scenarios.analysis.stats.BreezeType.values()) {
+            if (t.name().equals(g)) {
+                return ReaderText.breezeType(g);
+            }
+        }
+        return g;
+    }
+
     /** Meteorological direction of the layer-mean wind vector, NaN where the layer has too few valid levels. */
     static double[] directionSeries(List<Profile> profiles, Layer layer, Coast coast, double minValid) {
         double[] out = new double[profiles.size()];
@@ -300,7 +310,7 @@ public final class AnalysisFigures {
                 any = true;
                 java.awt.Color col = Palette.qualitative(colour++);
                 b.band(null, toArray(xs), toArray(lo), toArray(hi), col, 0.18);
-                b.series(Series.of(g.getKey(), toArray(xs), toArray(med)).color(col).marker(Marker.CIRCLE));
+                b.series(Series.of(groupName(g.getKey()), toArray(xs), toArray(med)).color(col).marker(Marker.CIRCLE));
             }
             if (rel) {
                 b.event(0, "passage");
