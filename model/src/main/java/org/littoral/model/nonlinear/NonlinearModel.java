@@ -259,6 +259,9 @@ public final class NonlinearModel {
         hWork = new double[nx];
         kIface = new double[(nz + 1) * nx];
         cgFactor = new double[nx];
+        colTv = new double[nz];
+        colU = new double[nz];
+        colV = new double[nz];
         dtOverDz = new double[nz];
         dragCol = new double[nx];
         dragFace = new double[nx];
@@ -1163,7 +1166,17 @@ public final class NonlinearModel {
      */
     private void verticalMixing(double dt) {
         for (int i = 0; i < nx; i++) {
-            cgFactor[i] = kProfile(heatFluxKin[i], windSfc[i], cd[i], h[i], kIface, i, nx);
+            double hm = h[i];
+            if (heatFluxKin[i] > 0) {
+                for (int k = 0; k < nz; k++) {
+                    int n = k * nx + i;
+                    colTv[k] = th[n] * (1.0 + VIRTUAL_FACTOR * q[n]);
+                    colU[k] = 0.5 * (u[n] + u[k * nx + g.ip1[i]]);
+                    colV[k] = v[n];
+                }
+                hm = mixingDepth(colTv, colU, colV, h[i], heatFluxKin[i], Math.sqrt(cd[i]) * windSfc[i]);
+            }
+            cgFactor[i] = kProfile(heatFluxKin[i], windSfc[i], cd[i], hm, kIface, i, nx);
         }
         // all columns at once: each level is a loop over columns, so the Thomas recurrences of
         // different columns run side by side (same arithmetic per column as a column-by-column solve)
@@ -1328,6 +1341,45 @@ public final class NonlinearModel {
     }
 
     static final double COUNTERGRADIENT_C = 6.5;
+    /** Critical bulk Richardson number of the mixing-depth diagnosis (Vogelezang &amp; Holtslag 1996, from memory). */
+    static final double RI_CRITICAL = 0.25;
+    /** Weight of u*^2 in the bulk Richardson number's shear (Vogelezang &amp; Holtslag 1996, b = 100, from memory). */
+    static final double RI_USTAR_WEIGHT = 100.0;
+    /** Thermal excess of a surface parcel, b w'theta'_s / w_s with b = 8.5 (Troen &amp; Mahrt 1986, from memory). */
+    static final double EXCESS_B = 8.5;
+
+    private final double[] colTv;
+    private final double[] colU;
+    private final double[] colV;
+
+    /**
+     * Depth of the turbulent layer of a heated column, m: the slab mixed-layer depth, unless the column's own
+     * profile caps the turbulence lower, as where cool marine air has run in under the warm convective layer
+     * behind a breeze front. Diagnosed as in non-local K-profile schemes (Troen &amp; Mahrt 1986, BLM 37,
+     * 129-148; Vogelezang &amp; Holtslag 1996, BLM 81, 245-269; from memory): the lowest height where the bulk
+     * Richardson number of a surface parcel with its thermal excess,
+     * Ri_b(z) = (g / theta_v1) (theta_v(z) - theta_v1 - b w'theta'_s / w_s) (z - z1) / (|V(z) - V1|^2 + 100 u*^2),
+     * reaches 0.25; never above the slab depth and never below the night depth.
+     */
+    private double mixingDepth(double[] tv, double[] uc, double[] vc, double hSlab, double heatFlux, double ustar) {
+        double ws = KProfile.mixedLayerVelocityScaleMs(Math.max(0.01, ustar), KProfile.convectiveVelocityMs(heatFlux, th0[0], hSlab));
+        double thS = tv[0] + EXCESS_B * heatFlux / ws;
+        double shear0 = RI_USTAR_WEIGHT * ustar * ustar;
+        double floor = cfg.boundaryLayer().nightDepthM();
+        double prevRi = 0.0;
+        for (int k = 1; k < nz && g.zc[k - 1] < hSlab; k++) {
+            double du = uc[k] - uc[0];
+            double dv = vc[k] - vc[0];
+            double ri = Thermo.G / tv[0] * (tv[k] - thS) * (g.zc[k] - g.zc[0]) / (du * du + dv * dv + shear0 + 1e-6);
+            if (ri >= RI_CRITICAL) {
+                double f0 = (RI_CRITICAL - prevRi) / (ri - prevRi);
+                double z = g.zc[k - 1] + Math.max(0.0, Math.min(1.0, f0)) * (g.zc[k] - g.zc[k - 1]);
+                return Math.max(floor, Math.min(hSlab, z));
+            }
+            prevRi = ri;
+        }
+        return hSlab;
+    }
     private double[] cgFactor;
 
     /**
@@ -1434,7 +1486,14 @@ public final class NonlinearModel {
                 qRef[0] = Math.max(0.0, qRef[0] + dt * fl[1] / g.dzf[0]);
             } else {
                 hRef = grownDepth(hRef, fl[0], land[i], dt);
-                double cg = kProfile(fl[0], spd, fl[2], hRef, colK, 0, 1);
+                double hm = hRef;
+                if (fl[0] > 0) {
+                    for (int k = 0; k < nz; k++) {
+                        colTv[k] = thRef[k] * (1.0 + VIRTUAL_FACTOR * qRef[k]);
+                    }
+                    hm = mixingDepth(colTv, uRef, vRef, hRef, fl[0], Math.sqrt(fl[2]) * spd);
+                }
+                double cg = kProfile(fl[0], spd, fl[2], hm, colK, 0, 1);
                 solveColumn(thRef, 0, 1, dt, fl[0], 0.0, cg * fl[0]);
                 solveColumn(qRef, 0, 1, dt, fl[1], 0.0, cg * fl[1]);
                 qRef[0] = Math.max(0.0, qRef[0]);
