@@ -48,6 +48,8 @@ public final class FieldFigure extends Figure {
     private final boolean contourLabels;
     private final List<Overlay> overlays;
     private final List<Marker_> markers;
+    private final List<double[]> greyBands;
+    private final List<String> greyLabels;
     private final Arrows arrows;
     private final String note;
 
@@ -83,6 +85,8 @@ public final class FieldFigure extends Figure {
         contourLabels = b.contourLabels;
         overlays = List.copyOf(b.overlays);
         markers = List.copyOf(b.markers);
+        greyBands = List.copyOf(b.greyBands);
+        greyLabels = new ArrayList<>(b.greyLabels);
         arrows = b.arrows;
         note = b.note;
     }
@@ -181,6 +185,7 @@ public final class FieldFigure extends Figure {
         paintCells(g, f, ex, ey);
         Shape savedClip = g.getClip();
         g.clip(f.clip());
+        paintGreyBands(g, f);
         if (contourLevels != null) {
             paintContours(g, f);
         }
@@ -216,6 +221,30 @@ public final class FieldFigure extends Figure {
             g.setFont(Theme.NOTE);
             g.setColor(new Color(0x555555));
             Draw.text(g, note, p.x, heightPx - Theme.PAD / 2.0, 0, 1);
+        }
+    }
+
+    /** x ranges that are not results (sponges, periodic images): greyed over the cells, labelled at the top. */
+    private void paintGreyBands(Graphics2D g, PlotFrame f) {
+        Rectangle p = f.plot;
+        for (int b = 0; b < greyBands.size(); b++) {
+            double[] r = greyBands.get(b);
+            int a = (int) Math.round(Math.min(f.x.px(r[0]), f.x.px(r[1])));
+            int e = (int) Math.round(Math.max(f.x.px(r[0]), f.x.px(r[1])));
+            a = Math.max(a, p.x);
+            e = Math.min(e, p.x + p.width);
+            if (e <= a) {
+                continue;
+            }
+            g.setColor(new Color(150, 150, 150, 205));
+            g.fillRect(a, p.y, e - a, p.height);
+            String label = greyLabels.get(b);
+            g.setFont(Theme.NOTE);
+            FontMetrics fm = g.getFontMetrics();
+            if (label != null && fm.stringWidth(label) + 8 <= e - a) {
+                g.setColor(new Color(0x333333));
+                Draw.text(g, label, (a + e) / 2.0, p.y + 6 + fm.getAscent(), 0.5, 0);
+            }
         }
     }
 
@@ -538,6 +567,8 @@ public final class FieldFigure extends Figure {
         private boolean contourLabels = true;
         private final List<Overlay> overlays = new ArrayList<>();
         private final List<Marker_> markers = new ArrayList<>();
+        private final List<double[]> greyBands = new ArrayList<>();
+        private final List<String> greyLabels = new ArrayList<>();
         private Arrows arrows;
         private String note;
 
@@ -690,6 +721,19 @@ public final class FieldFigure extends Figure {
                         + py.length + " y values");
             }
             overlays.add(new Overlay(name, px.clone(), py.clone(), color, style, 2f, marker));
+            return this;
+        }
+
+        /**
+         * Greys out the x range [from, to] (e.g. a far-field sponge or a periodic image of the coast: not results), with
+         * a label at the top where it fits.
+         */
+        public Builder greyOutX(double from, double to, String label) {
+            if (!(to > from)) {
+                throw new IllegalArgumentException("grey band needs to > from; got " + from + " .. " + to);
+            }
+            greyBands.add(new double[] {from, to});
+            greyLabels.add(label);
             return this;
         }
 

@@ -85,6 +85,16 @@ final class RunFigures {
                 .x(xKm, "Distance inland", "km").y(fs.clockH.clone(), "Local time", "h").values(u)
                 .colorBar("Breeze wind u'", "m/s").diverging().colorRange(-amax, amax)
                 .contours(d.thresholdMPerS()).verticalLine(0.0, "coast").note(note);
+        // not results: beyond the searched zone lie the far-field sponges and reference band (nonlinear) or the
+        // periodic image of the coast (linear); grey them out
+        double lo = xKm[0] - 0.5 * (xKm.length > 1 ? xKm[1] - xKm[0] : 1.0);
+        double hi = xKm[nx - 1] + 0.5 * (xKm.length > 1 ? xKm[1] - xKm[0] : 1.0);
+        if (fs.zone != null && fs.zone.fromM() / 1000.0 > lo) {
+            b.greyOutX(lo, fs.zone.fromM() / 1000.0, fs.zone.seawardLimit());
+        }
+        if (fs.zone != null && fs.zone.toM() / 1000.0 < hi) {
+            b.greyOutX(fs.zone.toM() / 1000.0, hi, fs.zone.landwardLimit());
+        }
         for (int s = 0; s < siteXM.length; s++) {
             if (siteXM[s] >= range[0] && siteXM[s] <= range[1]) {
                 b.verticalLine(siteXM[s] / 1000.0, siteNames.get(s));
