@@ -25,12 +25,12 @@ public record Layer(double bottomM, double topM) {
     public static Layer parse(String text) {
         String[] p = text.trim().replace("m", "").split("-");
         if (p.length != 2) {
-            throw new UserInputException("layer '" + text + "' must be written bottom-top in metres, e.g. 100-300");
+            throw new UserInputException("layer " + org.littoral.scenarios.input.Shown.text(text) + " is not a layer; write it bottom-top in metres, e.g. 100-300");
         }
         try {
             return new Layer(Double.parseDouble(p[0].trim()), Double.parseDouble(p[1].trim()));
         } catch (NumberFormatException e) {
-            throw new UserInputException("layer '" + text + "' must be written bottom-top in metres, e.g. 100-300");
+            throw new UserInputException("layer " + org.littoral.scenarios.input.Shown.text(text) + " is not a layer; write it bottom-top in metres, e.g. 100-300");
         }
     }
 

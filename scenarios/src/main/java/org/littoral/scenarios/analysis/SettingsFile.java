@@ -4,8 +4,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
-import java.io.IOException;
 import java.lang.reflect.Field;
 import java.lang.reflect.Modifier;
 import java.lang.reflect.ParameterizedType;
@@ -43,12 +41,8 @@ public final class SettingsFile {
                     + "(docs/analysis.md)");
         }
         JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readString(file));
-        } catch (IOException e) {
-            throw new UserInputException("settings file " + file + ": cannot be read as YAML (" + e.getMessage().split("\n")[0]
-                    + "); fix the YAML syntax");
-        }
+        // the one strict reader: duplicate keys, a second document and syntax errors are one line with line:column
+        root = org.littoral.scenarios.input.InputDocument.read(file, "settings file").root();
         if (root == null) {
             return s.validate();
         }
@@ -69,8 +63,9 @@ public final class SettingsFile {
             String key = prefix + k;
             Field f = settable(target.getClass(), k);
             if (f == null) {
-                throw new UserInputException("settings file " + file + ": " + key + ": unknown setting; allowed here: "
-                        + names(target.getClass()));
+                throw new UserInputException("settings file " + file + ": " + org.littoral.scenarios.input.Shown.clip(key, 100)
+                        + ": unknown setting; allowed here: " + org.littoral.scenarios.input.Shown.clip(String.valueOf(names(target.getClass())), 200)
+                        + "; check the spelling or remove it");
             }
             JsonNode v = node.get(k);
             try {
@@ -115,7 +110,8 @@ public final class SettingsFile {
     }
 
     private static UserInputException bad(Path file, String key, JsonNode v, String allowed) {
-        return new UserInputException("settings file " + file + ": " + key + ": value " + v + " is not " + allowed);
+        return new UserInputException("settings file " + file + ": " + key + ": value " + org.littoral.scenarios.input.Shown.value(v)
+                + " is not " + allowed + "; give " + allowed);
     }
 
     private static Object value(Path file, String key, JsonNode v, Class<?> type, Type generic) {
@@ -181,7 +177,8 @@ public final class SettingsFile {
             throw new UserInputException(u.getMessage().startsWith("settings file") ? u.getMessage()
                     : "settings file " + file + ": " + key + ": " + u.getMessage());
         } catch (IllegalArgumentException e) {
-            throw new UserInputException("settings file " + file + ": " + key + ": value " + v + ": " + e.getMessage());
+            throw new UserInputException("settings file " + file + ": " + key + ": value " + org.littoral.scenarios.input.Shown.value(v)
+                    + ": " + org.littoral.scenarios.input.Shown.clip(e.getMessage(), 160) + "; write it in the allowed form (docs/analysis.md)");
         }
         throw new UserInputException("settings file " + file + ": " + key + ": this setting cannot be set from a file");
     }

@@ -54,7 +54,8 @@ public final class InputFuzz {
     /** The input files, each with the reader and pre-run checks its command applies. */
     public enum Kind {
         SCENARIO("scenario"), SWEEP("sweep"), PLAN("plan"), COAST("coast"), DAY("day file"),
-        OBSERVATIONS("observations"), DAY_TABLE("per-day table"), PASSAGES("passage table");
+        OBSERVATIONS("observations"), DAY_TABLE("per-day table"), PASSAGES("passage table"), COLUMN_MAP("column map"),
+        SETTINGS("settings file");
 
         public final String label;
 
@@ -87,6 +88,8 @@ public final class InputFuzz {
     private static final Pattern INTERNALS = Pattern.compile("Exception|java\\.|javax\\.|com\\.fasterxml|org\\.yaml|snakeyaml"
             + "|Input length|\\[Source:|line: \\d+, column: \\d+|reference chain|Unrecognized token|Unexpected character"
             + "|\\bat [a-z]+\\.[a-z]+\\.");
+    /** Unit symbols written in mixed case (udunits), not Java names. */
+    private static final java.util.Set<String> UNITS = java.util.Set.of("degC", "degF", "hPa", "kPa", "mbar", "mPa", "gPerKg");
     private static final Pattern CAMEL = Pattern.compile("\\b[a-z]+[A-Z][A-Za-z]*\\b");
     private static final Pattern FIX = Pattern.compile("\\b(give|use|set|remove|fix|write|check|add|make|choose|lower|raise|"
             + "move|split|leave|rename|convert|list|swap|delete|save|widen|replace|keep|put|start|end|pick|try|quote|indent|"
@@ -138,6 +141,8 @@ public final class InputFuzz {
         add(m, Kind.DAY_TABLE, "days.csv", resource(SEEDS + "days.csv"));
         add(m, Kind.PASSAGES, "passages-user.csv", resource(SEEDS + "passages-user.csv"));
         add(m, Kind.PASSAGES, "passages-observe.csv", resource(SEEDS + "passages-observe.csv"));
+        add(m, Kind.COLUMN_MAP, "column-map.yaml", resource(SEEDS + "column-map.yaml"));
+        add(m, Kind.SETTINGS, "settings.yaml", resource(SEEDS + "settings.yaml"));
         return m;
     }
 
@@ -227,13 +232,21 @@ public final class InputFuzz {
         }
         int exit = Main.exitCode(t);
         String msg = Main.message(t);
-        String why = unclear(exit, msg, fileName);
+        String why = unclear(exit, msg, fileName, k == Kind.SETTINGS ? k : null);
         return new Outcome(k, index, seed, mutation, exit, msg, why == null ? Category.CLEAR_ERROR : Category.OTHER,
                 why == null ? "" : why);
     }
 
     /** Why a message fails the one-clear-line rules, or null when it passes. */
     public static String unclear(int exit, String msg, String fileName) {
+        return unclear(exit, msg, fileName, null);
+    }
+
+    /**
+     * As {@link #unclear(int, String, String)}; {@code camelKeys} non-null for a file whose own keys are written in
+     * camelCase (the analysis settings file), where such words are the file's keys, not Java internals.
+     */
+    public static String unclear(int exit, String msg, String fileName, Kind camelKeys) {
         if (exit != 2) {
             return "exit " + exit;
         }
@@ -257,8 +270,10 @@ public final class InputFuzz {
             return "Java or parser internals ('" + m.group() + "')";
         }
         Matcher c = CAMEL.matcher(msg.replaceAll("'[^']*'", "").replaceAll("\"[^\"]*\"", ""));
-        if (c.find()) {
-            return "names a Java field ('" + c.group() + "')";
+        while (c.find()) {
+            if (camelKeys == null && !UNITS.contains(c.group())) {
+                return "names a Java field ('" + c.group() + "')";
+            }
         }
         if (!FIX.matcher(msg).find()) {
             return "says nothing about the fix";

@@ -76,6 +76,8 @@ public final class InputFuzzBenchmark implements Benchmark {
         });
         m.put(InputFuzz.Kind.OBSERVATIONS, f -> ObserveCommand.ingest(f, new AnalysisSettings()));
         m.put(InputFuzz.Kind.DAY_TABLE, DayTableReader::read);
+        m.put(InputFuzz.Kind.COLUMN_MAP, org.littoral.scenarios.analysis.ingest.ColumnMap::load);
+        m.put(InputFuzz.Kind.SETTINGS, f -> org.littoral.scenarios.analysis.SettingsFile.apply(f, new AnalysisSettings()));
         // a passage table is read against a day file: the clean seed day
         Path dayDir = Files.createDirectories(work.resolve("passage-day"));
         InputFuzz.Seed day = InputFuzz.standardSeeds().get(InputFuzz.Kind.DAY).get(0);

@@ -1,9 +1,6 @@
 package org.littoral.scenarios.compare;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
@@ -36,11 +33,8 @@ public final class ObservedSites {
             return out;
         }
         JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readString(p));
-        } catch (IOException e) {
-            throw new UserInputException("coast file " + p + ": cannot be read as YAML/JSON: " + e.getMessage(), e);
-        }
+        // the one strict reader: duplicate keys, a second document and syntax errors are one line with line:column
+        root = org.littoral.scenarios.input.InputDocument.read(p, "coast file").root();
         JsonNode sites = root == null ? null : root.get("sites");
         if (sites == null || !sites.isArray()) {
             return out;

@@ -131,7 +131,7 @@ public final class SweepFile {
             try {
                 base = scenarios.load(baseLabel, folder);
             } catch (UserInputException e) {
-                throw err("base", e.getMessage());
+                throw err("base", Shown.clip(e.getMessage(), 320));
             }
         } else if (baseNode.isObject()) {
             baseLabel = "(inline)";
@@ -227,7 +227,7 @@ public final class SweepFile {
         try {
             p.get(base);
         } catch (IllegalArgumentException e) {
-            throw err(where, "not in the base scenario: " + Shown.clip(e.getMessage(), 200)
+            throw err(where, "not in the base scenario: " + Shown.clip(e.getMessage(), 150)
                     + " (check the spelling, or set the key in the base scenario first)");
         }
         return p;

@@ -19,8 +19,8 @@ import org.littoral.scenarios.bench.InputFuzzBenchmark;
  * internals, no stack trace). The same corpus, larger, is {@code littoral bench input-fuzz}.
  */
 class InputFuzzTest {
-    /** 375 mutants per kind: 3,000 in all. */
-    private static final int PER_KIND = 375;
+    /** 300 mutants per kind: 3,000 in all. */
+    private static final int PER_KIND = 300;
 
     @Test
     void everyMutatedInputIsAcceptedOrRefusedWithOneClearLineNamingTheFile(@TempDir Path tmp) throws Exception {

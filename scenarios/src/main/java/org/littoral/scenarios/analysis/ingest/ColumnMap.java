@@ -2,8 +2,6 @@ package org.littoral.scenarios.analysis.ingest;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.DateTimeException;
@@ -77,7 +75,8 @@ public final class ColumnMap {
         for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
             String k = it.next();
             if (!TOP_KEYS.contains(k)) {
-                throw bad(k, root.get(k).toString(), "unknown key; allowed keys are " + TOP_KEYS);
+                throw new UserInputException("column map " + file + ": unknown key " + org.littoral.scenarios.input.Shown.text(k) + "; allowed keys are " + TOP_KEYS
+                        + "; check the spelling or remove it");
             }
         }
         String d = text(root, "delimiter", ",");
@@ -161,7 +160,8 @@ public final class ColumnMap {
             String k = it.next();
             String[] spec = QUANTITIES.get(k);
             if (spec == null) {
-                throw bad("quantities." + k, qs.get(k).toString(), "unknown quantity; allowed are " + QUANTITIES.keySet());
+                throw new UserInputException("column map " + file + ": unknown quantity " + org.littoral.scenarios.input.Shown.text("quantities." + k)
+                        + "; allowed are " + QUANTITIES.keySet() + "; check the spelling or remove it");
             }
             JsonNode n = qs.get(k);
             if (!n.isObject()) {
@@ -196,14 +196,11 @@ public final class ColumnMap {
             throw new UserInputException("column map " + file + " does not exist; give a YAML column map (docs/analysis.md section 1b)");
         }
         JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readString(file));
-        } catch (IOException e) {
-            throw new UserInputException("column map " + file + ": cannot be read as YAML (" + e.getMessage().split("\n")[0]
-                    + "); fix the YAML syntax");
-        }
+        // the one strict reader: duplicate keys, a second document and syntax errors are one line with line:column
+        root = org.littoral.scenarios.input.InputDocument.read(file, "column map").root();
         if (root == null || !root.isObject()) {
-            throw new UserInputException("column map " + file + ": expected a YAML mapping with keys " + TOP_KEYS);
+            throw new UserInputException("column map " + file + ": expected a YAML mapping with keys " + TOP_KEYS
+                    + "; write the column map as 'key: value' lines (docs/analysis.md section 1b)");
         }
         return new ColumnMap(file, root);
     }
@@ -257,7 +254,8 @@ public final class ColumnMap {
     }
 
     UserInputException bad(String key, String value, String fix) {
-        return new UserInputException("column map " + file + ": " + key + ": '" + value + "': " + fix);
+        return new UserInputException("column map " + file + ": " + org.littoral.scenarios.input.Shown.clip(key, 100) + ": "
+                + org.littoral.scenarios.input.Shown.text(value) + ": " + fix);
     }
 
     private String text(JsonNode n, String key, String dflt) {
@@ -279,7 +277,8 @@ public final class ColumnMap {
         for (Iterator<String> it = n.fieldNames(); it.hasNext(); ) {
             String k = it.next();
             if (!allowed.contains(k)) {
-                throw bad(path + "." + k, n.get(k).toString(), "unknown key; allowed keys are " + new TreeSet<>(allowed));
+                throw new UserInputException("column map " + file + ": unknown key " + org.littoral.scenarios.input.Shown.text(path + "." + k) + "; allowed keys are "
+                        + new TreeSet<>(allowed) + "; check the spelling or remove it");
             }
         }
     }
