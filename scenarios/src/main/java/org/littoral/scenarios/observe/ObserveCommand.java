@@ -152,7 +152,7 @@ public final class ObserveCommand implements Callable<Integer> {
             }
         }
         if (profiles.isEmpty()) {
-            throw new UserInputException("no profiles left in " + obs + " after QC; see the QC log");
+            throw new UserInputException("no profiles left in " + obs + " after QC; check the QC log (qc-log.csv) for why each value was removed and fix the file or its units");
         }
         return new Observed(profiles, qc);
     }

@@ -42,15 +42,15 @@ public final class UnitConversion {
             a = fmt.parse(alias(from));
             b = fmt.parse(alias(to));
         } catch (Exception | LinkageError e) {
-            throw new BadUnit("'" + from + "' is not a unit udunits knows; use one of " + examples);
+            throw new BadUnit(org.littoral.scenarios.input.Shown.text(from) + " is not a unit udunits knows; use one of " + examples);
         }
         if (a == null || !a.isCompatible(b)) {
-            throw new BadUnit("'" + from + "' cannot be converted to " + to + "; use one of " + examples);
+            throw new BadUnit(org.littoral.scenarios.input.Shown.text(from) + " cannot be converted to " + to + "; use one of " + examples);
         }
         try {
             return new UnitConversion(a.getConverterTo(b), from);
         } catch (Exception e) {
-            throw new BadUnit("'" + from + "' cannot be converted to " + to + " (" + e.getMessage() + "); use one of " + examples);
+            throw new BadUnit(org.littoral.scenarios.input.Shown.text(from) + " cannot be converted to " + to + " (" + org.littoral.scenarios.input.Shown.clip(String.valueOf(e.getMessage()), 120) + "); use one of " + examples);
         }
     }
 
