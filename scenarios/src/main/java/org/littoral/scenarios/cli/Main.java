@@ -88,6 +88,9 @@ public final class Main implements Callable<Integer> {
             return ex.getMessage();
         }
         String w = writeProblem(ex);
+        if (w == null && ex instanceof org.littoral.scenarios.sweep.IncompleteRunException) {
+            return ex.getMessage();
+        }
         return w != null ? w : String.valueOf(ex);
     }
 

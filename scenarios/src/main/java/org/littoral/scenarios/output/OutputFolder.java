@@ -92,10 +92,10 @@ public final class OutputFolder {
         }
         probeWritable(dir);
         checkFreeSpace(dir, Math.max(MIN_FREE_BYTES, freeBytes));
-        OutputFolder f = new OutputFolder(dir, command, Instant.now());
         List<String> present = listFiles(dir);
         present.remove(MANIFEST);
         JsonNode old = readManifest(dir);
+        OutputFolder f = new OutputFolder(dir, command, continuedStart(mode, old));
         String oldCommand = old == null ? null : old.path("command").asText("");
         if (!present.isEmpty()) {
             String kind = oldCommand == null ? "files" : "the outputs of an earlier '" + Shown.bare(oldCommand) + "'"
@@ -122,6 +122,23 @@ public final class OutputFolder {
         }
         f.writeManifest(false, List.of());
         return f;
+    }
+
+    /**
+     * When a run continues an unfinished one (a killed run resumed, the merge step of a job array that another process
+     * submitted), the files written since the earlier start belong to it too: its record counts from then.
+     */
+    private static Instant continuedStart(Mode mode, JsonNode old) {
+        Instant now = Instant.now();
+        if (mode != Mode.RESUME || old == null || old.path("complete").asBoolean(false)) {
+            return now;
+        }
+        try {
+            Instant then = Instant.parse(old.path("started").asText());
+            return then.isBefore(now) ? then : now;
+        } catch (RuntimeException e) {
+            return now;
+        }
     }
 
     /**

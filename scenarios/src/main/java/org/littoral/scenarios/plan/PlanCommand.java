@@ -26,7 +26,9 @@ import org.littoral.scenarios.sweep.MemberExpander;
 import org.littoral.scenarios.sweep.MemberStore;
 import org.littoral.scenarios.sweep.SweepExecutor;
 import org.littoral.scenarios.output.OutputFolder;
+import org.littoral.scenarios.sweep.Placement;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -67,6 +69,9 @@ public final class PlanCommand implements Callable<Integer> {
             + "are the onset of onshore flow, linear theory has no front).")
     String model;
 
+    @Mixin
+    org.littoral.scenarios.cluster.ClusterOptions cluster;
+
     @Override
     public Integer call() throws Exception {
         PlanSpec plan = PlanFile.load(planRef);
@@ -87,9 +92,12 @@ public final class PlanCommand implements Callable<Integer> {
         if (settingsFile != null) {
             org.littoral.scenarios.analysis.SettingsFile.apply(settingsFile, as);
         }
-        OutputFolder folder = OutputFolder.prepare(dir, "plan " + planRef, resume ? OutputFolder.Mode.RESUME
-                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
-        PlanOutcome o = run(plan, m, dir, n, resume, System.err, Solver.standard(), as);
+        Placement where = cluster.placement(dir, overwrite);
+        OutputFolder folder = cluster.prepareFolder(dir, "plan " + planRef, resume, overwrite, System.err);
+        PlanOutcome o = run(plan, m, dir, n, resume, System.err, Solver.standard(), as, where);
+        if (o.result() == null) {
+            return org.littoral.scenarios.cluster.ClusterOptions.exitCode(o.members());
+        }
         folder.finish();
         PlanOutputs.printSummary(plan, o.result(), System.out);
         System.out.println("littoral: plan written to " + dir.resolve("plan.json") + ", " + dir.resolve("report.html"));
@@ -102,7 +110,8 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     /** What a plan run produced. */
-    public record PlanOutcome(PlanResult result, DenseWindow[][] windows, Path dir, double wallSeconds, int failed) {
+    public record PlanOutcome(PlanResult result, DenseWindow[][] windows, Path dir, double wallSeconds, int failed,
+                              SweepExecutor.Outcome members) {
     }
 
     /** Runs a plan end to end and writes its outputs; used by the command, the demo and the benchmark. */
@@ -120,6 +129,16 @@ public final class PlanCommand implements Callable<Integer> {
     /** As above with given analysis settings (a --settings file). */
     public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
                                   Solver solver, AnalysisSettings settings) throws IOException, InterruptedException {
+        return run(plan, model, dir, threads, resume, log, solver, settings, Placement.ALL_HERE);
+    }
+
+    /**
+     * As above with the members placed elsewhere (one shard, the merge step, a batch system); only a run that ends
+     * with every member's result scores and writes the plan, otherwise the outcome's result is null.
+     */
+    public static PlanOutcome run(PlanSpec plan, String model, Path dir, int threads, boolean resume, java.io.PrintStream log,
+                                  Solver solver, AnalysisSettings settings, Placement where)
+            throws IOException, InterruptedException {
         long t0 = System.nanoTime();
         if (model.equals("nonlinear")) {
             boolean gridSet = plan.ensemble().fixed().stream().anyMatch(f -> f.path().toString().startsWith("grid."));
@@ -149,7 +168,9 @@ public final class PlanCommand implements Callable<Integer> {
             WorkEstimate w = WorkEstimate.of(probe.scenarioOf(mm));
             largest = largest == null || w.runBytes() > largest.runBytes() ? w : largest;
         }
-        largest.check(Math.min(threads, members.size()), "plan file " + plan.ensemble().source());
+        if (where.concurrentHere(threads) > 0) {
+            largest.check(Math.min(where.concurrentHere(threads), members.size()), "plan file " + plan.ensemble().source());
+        }
         Scenario first = probe.scenarioOf(members.get(0));
         checkCandidates(plan, first);
         List<String> rejected = new ArrayList<>();
@@ -158,13 +179,22 @@ public final class PlanCommand implements Callable<Integer> {
             log.println("plan: " + r);
         }
         probe = new PlanMemberRunner(plan, solver, null, settings);
-        DenseWindow[][] windows = windows(plan, members, probe, threads, log);
+        boolean submitting = where instanceof Placement.Dispatch;
+        // the pilot members that set the dense windows run where the members run: in every shard and in the merge
+        // step (a few members each), never on the machine that only submits
+        DenseWindow[][] windows = submitting ? new DenseWindow[plan.cadences().size()][plan.candidatesKm().length]
+                : windows(plan, members, probe, threads, log);
         Files.createDirectories(dir);
-        checkResumeInputs(plan, model, windows, dir, resume);
+        if (!submitting) {
+            checkResumeInputs(plan, model, windows, dir, resume || !where.runsAllHere());
+        }
         PlanMemberRunner runner = probe.withWindows(windows);
         SweepExecutor.Outcome so = SweepExecutor.run(plan.ensemble(), members, dir, runner,
-                new SweepExecutor.Options(threads, resume, log, System.console() != null, 15_000));
+                new SweepExecutor.Options(threads, resume, log, System.console() != null, 15_000).placed(where, largest));
         runner.clearPilots();
+        if (!so.complete()) {
+            return new PlanOutcome(null, windows, dir, (System.nanoTime() - t0) / 1e9, so.failed(), so);
+        }
         MemberStore store = new MemberStore(dir);
         List<JsonNode> records = new ArrayList<>();
         for (Member mm : members) {
@@ -189,7 +219,7 @@ public final class PlanCommand implements Callable<Integer> {
         }
         double wall = (System.nanoTime() - t0) / 1e9;
         PlanOutputs.write(dir, plan, model, first, result, windows, wall, settings);
-        return new PlanOutcome(result, windows, dir, wall, so.failed());
+        return new PlanOutcome(result, windows, dir, wall, so.failed(), so);
     }
 
     static void checkCandidates(PlanSpec plan, Scenario s) {

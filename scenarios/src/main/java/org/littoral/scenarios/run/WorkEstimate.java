@@ -75,6 +75,11 @@ public final class WorkEstimate {
         return BASE_BYTES + modelBytes + sectionBytes + soundingBytes;
     }
 
+    /** Bytes {@code concurrent} such runs need at once in one JVM, its own share counted once (a batch task's heap). */
+    public long bytesFor(int concurrent) {
+        return BASE_BYTES + (long) Math.max(1, concurrent) * runBytes();
+    }
+
     /** Bytes of the run's own arrays, without the JVM's share (what each extra concurrent member adds). */
     public long runBytes() {
         return modelBytes + sectionBytes + soundingBytes;

@@ -136,6 +136,23 @@ public final class MemberStore {
         return n;
     }
 
+    /** Deletes the temporary files an interrupted write of member {@code id} left; returns how many. */
+    public int deleteLeftoverTemps(String id) {
+        int n = 0;
+        if (!Files.isDirectory(dir)) {
+            return 0;
+        }
+        try (DirectoryStream<Path> ds = Files.newDirectoryStream(dir, "." + id + ".json.*" + AtomicFile.TMP_SUFFIX)) {
+            for (Path p : ds) {
+                Files.deleteIfExists(p);
+                n++;
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot clean " + dir, e);
+        }
+        return n;
+    }
+
     /** Reads a member record (for the comparison table). */
     public ObjectNode read(String id) throws IOException {
         return (ObjectNode) CanonicalJson.MAPPER.readTree(fileOf(id).toFile());

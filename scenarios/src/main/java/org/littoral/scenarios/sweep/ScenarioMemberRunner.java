@@ -98,9 +98,12 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
 
     /**
      * Checks every member before anything runs, and that {@code threads} of the largest run at once fit in memory
-     * ({@link WorkEstimate}), so a bad combination or a sweep too big for the machine stops at once.
+     * ({@link WorkEstimate}), so a bad combination or a sweep too big for the machine stops at once. With
+     * {@code threads} 0 only the members are checked (their runs happen elsewhere, e.g. on a batch system).
+     *
+     * @return the estimate of the largest member (null without members)
      */
-    public void checkAll(List<Member> members, int threads) {
+    public WorkEstimate checkAll(List<Member> members, int threads) {
         WorkEstimate largest = null;
         Member which = null;
         for (Member m : members) {
@@ -110,9 +113,10 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
                 which = m;
             }
         }
-        if (largest != null) {
+        if (largest != null && threads > 0) {
             largest.check(Math.min(threads, members.size()), "sweep " + sweepSource + " (largest member " + which.id() + ")");
         }
+        return largest;
     }
 
     @Override

@@ -8,6 +8,7 @@ import org.littoral.scenarios.output.OutputFolder;
 import org.littoral.scenarios.output.SafeNames;
 import org.littoral.scenarios.run.Solver;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -50,6 +51,9 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--list", description = "List the built-in sweeps and exit.")
     boolean list;
 
+    @Mixin
+    org.littoral.scenarios.cluster.ClusterOptions cluster;
+
     /** What a sweep produced: the executor's outcome, the comparison table and the figure files. */
     public record Result(SweepSpec spec, SweepExecutor.Outcome outcome, ComparisonTable table, List<Path> figures) {
     }
@@ -63,12 +67,24 @@ public final class SweepCommand implements Callable<Integer> {
     /** As {@link #run(SweepSpec, Path, int, boolean, boolean, boolean)}; {@code fieldsNc} keeps each member's fields.nc. */
     public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles,
                              boolean fieldsNc) throws Exception {
+        return run(spec, dir, threads, resume, retryFailed, keepRunFiles, fieldsNc, Placement.ALL_HERE);
+    }
+
+    /**
+     * As above, with the members placed elsewhere: one shard, the merge step, or a batch system. Only a run that ends
+     * with every member's result (here or the merge) writes the table and figures; otherwise they are null and empty.
+     */
+    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles,
+                             boolean fieldsNc, Placement where) throws Exception {
         List<Member> members = MemberExpander.expand(spec);
         ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), keepRunFiles ? dir.resolve("runs") : null,
                 Solver.standard()).fieldsNetcdf(fieldsNc && keepRunFiles).scratchIn(dir.resolve(SweepExecutor.SCRATCH));
-        runner.checkAll(members, threads);
+        var largest = runner.checkAll(members, where.concurrentHere(threads));
         SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner,
-                SweepExecutor.Options.forCommandLine(threads, resume, retryFailed));
+                SweepExecutor.Options.forCommandLine(threads, resume, retryFailed).placed(where, largest));
+        if (!o.complete()) {
+            return new Result(spec, o, null, List.of());
+        }
         ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
         table.write(dir);
         List<Path> figures = ComparisonFigures.write(table, dir);
@@ -98,9 +114,12 @@ public final class SweepCommand implements Callable<Integer> {
             throw new UserInputException("littoral sweep: --resume continues the run in the folder and --overwrite removes it; "
                     + "give one of the two");
         }
-        OutputFolder folder = OutputFolder.prepare(dir, "sweep " + sweep, resume ? OutputFolder.Mode.RESUME
-                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
-        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc);
+        Placement where = cluster.placement(dir, overwrite);
+        OutputFolder folder = cluster.prepareFolder(dir, "sweep " + sweep, resume, overwrite, System.err);
+        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc, where);
+        if (!r.outcome().complete()) {
+            return org.littoral.scenarios.cluster.ClusterOptions.exitCode(r.outcome());
+        }
         folder.finish();
         SweepExecutor.Outcome o = r.outcome();
         System.out.println("littoral: sweep " + spec.name() + ": " + o.members() + " members (" + o.failed() + " failed"

@@ -21,6 +21,7 @@ import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.output.AtomicFile;
+import org.littoral.scenarios.run.WorkEstimate;
 
 /**
  * Runs the members of a sweep on a fixed pool of threads and writes each result the moment it finishes (see
@@ -40,11 +41,29 @@ public final class SweepExecutor {
      * @param retryFailed on resume, run members whose record says "failed" again (e.g. after fixing the cause)
      */
     public record Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis,
-                          boolean retryFailed) {
+                          boolean retryFailed, Placement placement, WorkEstimate largest) {
         public Options {
             if (threads < 1) {
                 throw new UserInputException("--threads must be at least 1; got " + threads);
             }
+            if (placement == null) {
+                placement = Placement.ALL_HERE;
+            }
+        }
+
+        /** Options that compute every member here. */
+        public Options(int threads, boolean resume, PrintStream log, boolean progressBar, long throttleMillis,
+                       boolean retryFailed) {
+            this(threads, resume, log, progressBar, throttleMillis, retryFailed, Placement.ALL_HERE, null);
+        }
+
+        /**
+         * These options with another placement (a shard, the merge step, a batch system).
+         *
+         * @param largestMember the work estimate of the largest member (what a batch task asks memory for), or null
+         */
+        public Options placed(Placement where, WorkEstimate largestMember) {
+            return new Options(threads, resume, log, progressBar, throttleMillis, retryFailed, where, largestMember);
         }
 
         /** Terminal-aware defaults: a bar when there is a console, else a line at most every 15 s. */
@@ -65,7 +84,13 @@ public final class SweepExecutor {
      *               an earlier run and were not run again (a resumed sweep is complete only when this is 0)
      * @param failedEarlier of {@code failed}, those from an earlier run (kept because --retry-failed was not given)
      */
-    public record Outcome(int members, int ran, int skipped, int failed, double wallSeconds, int failedEarlier) {
+    public record Outcome(int members, int ran, int skipped, int failed, double wallSeconds, int failedEarlier,
+                          boolean complete) {
+        /** The outcome of a process that ends with every member's result in the folder. */
+        public Outcome(int members, int ran, int skipped, int failed, double wallSeconds, int failedEarlier) {
+            this(members, ran, skipped, failed, wallSeconds, failedEarlier, true);
+        }
+
         /** Members that failed in this run. */
         public int failedNow() {
             return failed - failedEarlier;
@@ -78,24 +103,60 @@ public final class SweepExecutor {
     private SweepExecutor() {
     }
 
+    /**
+     * Computes the members the placement gives this process ({@link Options#placement()}): all of them, one shard,
+     * none (the merge step: every member must have a result, else {@link IncompleteRunException}), or none here
+     * (they are handed to a batch system).
+     */
     public static Outcome run(SweepSpec spec, List<Member> members, Path outDir,
                               Function<Member, MemberResult> runner, Options opt) {
         long t0 = System.nanoTime();
+        Placement where = opt.placement();
+        if (where instanceof Placement.MergeOnly merge) {
+            return merge(spec, members, outDir, merge, opt, t0);
+        }
+        Placement.Shard shard = where instanceof Placement.Shard s ? s : null;
         MemberStore store = new MemberStore(outDir);
         store.create();
-        int temps = store.deleteLeftoverTemps();
-        if (temps > 0) {
-            opt.log().println("sweep: removed " + temps + " incomplete temporary file(s) left by an interrupted run");
-        }
-        Path scratch = outDir.resolve(SCRATCH);
-        if (java.nio.file.Files.exists(scratch)) {
-            int n = deleteTree(scratch);
-            opt.log().println("sweep: removed " + scratch + " (" + n + " scratch file(s) left by an interrupted run)");
+        if (where.runsAllHere()) {
+            int temps = store.deleteLeftoverTemps();
+            if (temps > 0) {
+                opt.log().println("sweep: removed " + temps + " incomplete temporary file(s) left by an interrupted run");
+            }
+            Path scratch = outDir.resolve(SCRATCH);
+            if (java.nio.file.Files.exists(scratch)) {
+                int n = deleteTree(scratch);
+                opt.log().println("sweep: removed " + scratch + " (" + n + " scratch file(s) left by an interrupted run)");
+            }
+        } else if (shard != null) {
+            // other shards write into the same folders at the same time: clear only what this shard left behind
+            int removed = 0;
+            for (Member m : shard.of(members)) {
+                removed += store.deleteLeftoverTemps(m.id());
+                Path own = outDir.resolve(SCRATCH).resolve(m.id());
+                if (java.nio.file.Files.exists(own)) {
+                    removed += deleteTree(own);
+                }
+            }
+            if (removed > 0) {
+                opt.log().println("sweep: shard " + shard.label() + ": removed " + removed + " file(s) left by an interrupted run");
+            }
         }
         int[] earlierFailed = {0};
         List<Member> todo = plan(spec, members, outDir, store, opt, earlierFailed);
         int skipped = members.size() - todo.size();
-        if (skipped > 0) {
+        if (where instanceof Placement.Dispatch d) {
+            writeManifest(spec, members, outDir);
+            d.dispatcher().dispatch(new Placement.Request(spec, members, todo, outDir, opt.largest(), opt.log()));
+            return new Outcome(members.size(), 0, skipped, earlierFailed[0], (System.nanoTime() - t0) * 1e-9, earlierFailed[0],
+                    false);
+        }
+        if (shard != null) {
+            int own = shard.of(members).size();
+            opt.log().println("sweep: shard " + shard.label() + ": " + own + " of " + members.size() + " members, "
+                    + (own - todo.size()) + " of them already done");
+            skipped = own - todo.size();
+        } else if (skipped > 0) {
             opt.log().println("sweep: resuming: " + skipped + " of " + members.size() + " members already done");
         }
         writeManifest(spec, members, outDir);
@@ -154,16 +215,51 @@ public final class SweepExecutor {
             }
         }
         try {
-            java.nio.file.Files.deleteIfExists(scratch); // empty once every member has cleaned up after itself
+            // empty once every member has cleaned up after itself (other shards may still be using it)
+            java.nio.file.Files.deleteIfExists(outDir.resolve(SCRATCH));
         } catch (IOException e) {
-            // not empty: a member's scratch could not be removed; the next run clears it
+            // not empty: a member's scratch could not be removed, or another shard is running; the next run clears it
         }
         double wall = (System.nanoTime() - t0) * 1e-9;
         int total = failed.get() + earlierFailed[0];
-        opt.log().printf(java.util.Locale.ROOT, "sweep: %d members: %d run, %d already done, %d failed%s; %.1f s on %d thread(s)%n",
-                members.size(), todo.size(), skipped, total, earlierFailed[0] == 0 ? "" : " (" + earlierFailed[0]
+        opt.log().printf(java.util.Locale.ROOT, "sweep: %s%d members: %d run, %d already done, %d failed%s; %.1f s on %d thread(s)%n",
+                shard == null ? "" : "shard " + shard.label() + ": ", shard == null ? members.size() : shard.of(members).size(),
+                todo.size(), skipped, total, earlierFailed[0] == 0 ? "" : " (" + earlierFailed[0]
                         + " of them in an earlier run; --resume --retry-failed runs them again)", wall, threads);
-        return new Outcome(members.size(), todo.size(), skipped, total, wall, earlierFailed[0]);
+        return new Outcome(members.size(), todo.size(), skipped, total, wall, earlierFailed[0], shard == null);
+    }
+
+    /**
+     * The merge step: computes nothing; every member must have a result from the same inputs. Members without one are
+     * described (one line each, through the placement's report) and the run stops with {@link IncompleteRunException}.
+     */
+    private static Outcome merge(SweepSpec spec, List<Member> members, Path outDir, Placement.MergeOnly merge, Options opt,
+                                 long t0) {
+        MemberStore store = new MemberStore(outDir);
+        checkForeign(spec, members, outDir, store);
+        List<Member> missing = new ArrayList<>();
+        int failed = 0;
+        for (Member m : members) {
+            switch (store.check(m)) {
+                case VALID -> { }
+                case VALID_FAILED -> failed++;
+                case ABSENT, UNREADABLE -> missing.add(m);
+                case OTHER_INPUTS -> throw otherInputs(spec, m, store);
+                default -> throw new IllegalStateException();
+            }
+        }
+        if (!missing.isEmpty()) {
+            for (String line : merge.whyMissing().explain(missing, members.size())) {
+                opt.log().println(line);
+            }
+            throw new IncompleteRunException(missing.size() + " of " + members.size() + " members have no result in "
+                    + store.folder() + " (first: " + missing.get(0).id() + "); compute them by submitting again with --resume "
+                    + "(only the unfinished shards run) or here with --resume, then merge");
+        }
+        writeManifest(spec, members, outDir);
+        double wall = (System.nanoTime() - t0) * 1e-9;
+        opt.log().printf(java.util.Locale.ROOT, "sweep: merged %d members (%d failed)%n", members.size(), failed);
+        return new Outcome(members.size(), 0, members.size(), failed, wall, failed, true);
     }
 
     /** Runs one member, turning any failure of the member itself into a "failed" record. */
@@ -189,24 +285,20 @@ public final class SweepExecutor {
     /** Which members still need running; refuses to mix results from other inputs. */
     private static List<Member> plan(SweepSpec spec, List<Member> members, Path outDir, MemberStore store, Options opt,
                                      int[] earlierFailed) {
-        Set<String> ids = new HashSet<>();
-        for (Member m : members) {
-            ids.add(m.id());
-        }
+        Placement.Shard shard = opt.placement() instanceof Placement.Shard s ? s : null;
         List<String> present = store.presentIds();
-        if (!present.isEmpty() && !opt.resume()) {
+        if (!present.isEmpty() && !opt.resume() && shard == null) {
+            // a shard always continues: the other shards are writing into the same folder, and a resubmitted shard
+            // finds its earlier results (the submitting command made the --resume/--overwrite choice for the folder)
             throw new UserInputException(outDir + " already holds " + present.size() + " member result(s); add --resume"
                     + " to continue that sweep, or choose another --out folder");
         }
-        for (String id : present) {
-            if (!ids.contains(id)) {
-                throw new UserInputException("--resume: " + store.fileOf(id) + " is not a member of sweep " + spec.source()
-                        + " (it has " + members.size() + " members); the sweep file changed since that run: use another --out"
-                        + " folder or delete " + store.folder());
-            }
-        }
+        checkForeign(spec, members, outDir, store);
         List<Member> todo = new ArrayList<>();
         for (Member m : members) {
+            if (shard != null && !shard.owns(m)) {
+                continue;
+            }
             switch (store.check(m)) {
                 case VALID -> { }
                 case VALID_FAILED -> {
@@ -221,14 +313,33 @@ public final class SweepExecutor {
                     opt.log().println("sweep: " + store.fileOf(m.id()) + " is unreadable; running member " + m.id() + " again");
                     todo.add(m);
                 }
-                case OTHER_INPUTS -> throw new UserInputException("--resume: " + store.fileOf(m.id())
-                        + " was computed from other inputs than sweep " + spec.source() + " now gives member " + m.id()
-                        + " (" + m.describe() + "); the sweep or base scenario changed since that run: use another --out"
-                        + " folder or delete " + store.folder());
+                case OTHER_INPUTS -> throw otherInputs(spec, m, store);
                 default -> throw new IllegalStateException();
             }
         }
         return todo;
+    }
+
+    private static UserInputException otherInputs(SweepSpec spec, Member m, MemberStore store) {
+        return new UserInputException("--resume: " + store.fileOf(m.id())
+                + " was computed from other inputs than sweep " + spec.source() + " now gives member " + m.id()
+                + " (" + m.describe() + "); the sweep or base scenario changed since that run: use another --out"
+                + " folder or delete " + store.folder());
+    }
+
+    /** Refuses a folder holding results of members the sweep does not have (another sweep's results). */
+    private static void checkForeign(SweepSpec spec, List<Member> members, Path outDir, MemberStore store) {
+        Set<String> ids = new HashSet<>();
+        for (Member m : members) {
+            ids.add(m.id());
+        }
+        for (String id : store.presentIds()) {
+            if (!ids.contains(id)) {
+                throw new UserInputException("--resume: " + store.fileOf(id) + " is not a member of sweep " + spec.source()
+                        + " (it has " + members.size() + " members); the sweep file changed since that run: use another --out"
+                        + " folder or delete " + store.folder());
+            }
+        }
     }
 
     /** {@code sweep.json}: what the sweep is, so the folder explains itself. Same content on every run. */

@@ -21,7 +21,9 @@ import org.littoral.scenarios.sweep.MemberExpander;
 import org.littoral.scenarios.sweep.MemberStore;
 import org.littoral.scenarios.sweep.SweepExecutor;
 import org.littoral.scenarios.output.OutputFolder;
+import org.littoral.scenarios.sweep.Placement;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -64,6 +66,9 @@ public final class CheckTimingCommand implements Callable<Integer> {
     @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
     boolean overwrite;
 
+    @Mixin
+    org.littoral.scenarios.cluster.ClusterOptions cluster;
+
     @Override
     public Integer call() throws Exception {
         DaySpec spec = DayFile.read(day, model);
@@ -73,10 +78,13 @@ public final class CheckTimingCommand implements Callable<Integer> {
             throw new UserInputException("littoral check-timing: --resume continues the run in the folder and --overwrite "
                     + "removes it; give one of the two");
         }
-        OutputFolder folder = OutputFolder.prepare(dir, "check-timing " + passages, resume ? OutputFolder.Mode.RESUME
-                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
-        CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null, columns),
-                Solver.standard());
+        Placement where = cluster.placement(dir, overwrite);
+        OutputFolder folder = cluster.prepareFolder(dir, "check-timing " + passages, resume, overwrite, System.err);
+        CheckTimingResult r = run(spec, passages, dir, new Options(model, n, resume, System.err, System.console() != null, columns,
+                where), Solver.standard());
+        if (r.check() == null) {
+            return r.failedMembers() > 0 ? 1 : 0; // a shard or a submission: the merge step writes the check
+        }
         folder.finish();
         PrintStream o = System.out;
         o.printf("littoral: %s: %d passage(s) checked against %d ensemble member(s) (%s model): %d flag(s)%n", spec.date(),
@@ -94,9 +102,14 @@ public final class CheckTimingCommand implements Callable<Integer> {
      * @param model "linear", "nonlinear" or null (the day file's choice)
      * @param progressBar draw a progress bar (a terminal); otherwise a line at most every 15 s
      */
-    public record Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar, Path columns) {
+    public record Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar, Path columns,
+                          Placement placement) {
         public Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar) {
-            this(model, threads, resume, log, progressBar, null);
+            this(model, threads, resume, log, progressBar, null, Placement.ALL_HERE);
+        }
+
+        public Options(String model, int threads, boolean resume, PrintStream log, boolean progressBar, Path columns) {
+            this(model, threads, resume, log, progressBar, columns, Placement.ALL_HERE);
         }
 
         public Options {
@@ -105,6 +118,9 @@ public final class CheckTimingCommand implements Callable<Integer> {
             }
             if (model != null) {
                 JobModel.check("--model", model);
+            }
+            if (placement == null) {
+                placement = Placement.ALL_HERE;
             }
         }
 
@@ -137,12 +153,19 @@ public final class CheckTimingCommand implements Callable<Integer> {
             WorkEstimate w = WorkEstimate.of(runner.scenarioOf(m));
             largest = largest == null || w.runBytes() > largest.runBytes() ? w : largest;
         }
-        largest.check(Math.min(opt.threads(), members.size()), "day file " + spec.source());
+        Placement where = opt.placement();
+        if (where.concurrentHere(opt.threads()) > 0) {
+            largest.check(Math.min(where.concurrentHere(opt.threads()), members.size()), "day file " + spec.source());
+        }
         Files.createDirectories(dir);
         opt.log().println("check-timing: " + members.size() + " ensemble member(s), " + model + " model, " + opt.threads()
                 + " thread(s)");
         SweepExecutor.Outcome so = SweepExecutor.run(spec.ensemble(), members, dir, runner,
-                new SweepExecutor.Options(opt.threads(), opt.resume(), opt.log(), opt.progressBar(), 15_000));
+                new SweepExecutor.Options(opt.threads(), opt.resume(), opt.log(), opt.progressBar(), 15_000)
+                        .placed(where, largest));
+        if (!so.complete()) {
+            return CheckTimingResult.elsewhere(dir, so);
+        }
 
         MemberStore store = new MemberStore(dir);
         List<double[]> arrivals = new ArrayList<>();

@@ -21,4 +21,13 @@ public record CheckTimingResult(Path dir, Path flagsCsv, Path envelopeCsv, Path 
                                 Table envelopeTable, int members, int failedMembers, String model, double wallSeconds,
                                 Table flagsView, Table envelopeView, String flagsCaption, String envelopeCaption,
                                 java.util.List<String> notes) {
+
+    /**
+     * The result of a step that computed the ensemble elsewhere or only in part (a shard, a submission to a batch
+     * system): no check, no files; {@code members} and {@code failedMembers} count the ensemble and what failed now.
+     */
+    public static CheckTimingResult elsewhere(Path dir, org.littoral.scenarios.sweep.SweepExecutor.Outcome o) {
+        return new CheckTimingResult(dir, null, null, null, null, null, null, null, null, null, null, o.members(), o.failedNow(),
+                null, o.wallSeconds(), null, null, null, null, java.util.List.of());
+    }
 }
