@@ -21,11 +21,11 @@ import org.littoral.scenarios.scenario.JobModel;
 import org.littoral.scenarios.report.Figure;
 import org.littoral.scenarios.report.FigureGrid;
 import org.littoral.scenarios.report.HtmlReport;
-import org.littoral.scenarios.report.NiceTicks;
 import org.littoral.scenarios.report.PngWriter;
 import org.littoral.scenarios.report.ScatterFigure;
 import org.littoral.scenarios.report.Table;
 import org.littoral.scenarios.report.TableWriter;
+import org.littoral.scenarios.report.TimeHeightPanel;
 import org.littoral.scenarios.run.ScenarioRun;
 
 /** Writes a {@link Comparison.Result}: tables (CSV and JSON), time-height section figures (PNG) and report.html, each atomically. */
@@ -256,74 +256,27 @@ public final class CompareOutputs {
 
     private static FieldFigure panel(Section s, String title, double[][] v, String label, String unit, double[] range,
                                      boolean diverging, boolean observed, String arrivalName) {
-        FieldFigure.Builder b = FieldFigure.builder().size(620, 380).title(title)
-                .x(s.timeH(), "Local time", "h").y(s.heightM(), "Height above ground", "m").values(v)
-                .colorBar(label, unit).colorRange(range[0], range[1]);
-        if (diverging) {
-            b.diverging();
-        } else {
-            b.sequential();
-        }
-        double t0 = s.timeH()[0];
-        double t1 = s.timeH()[s.timeH().length - 1];
+        List<TimeHeightPanel.Event> events = new ArrayList<>();
         if (observed) {
             List<Double> ps = new ArrayList<>(s.observedPassagesH());
             ps.sort(Double::compare);
             if (!ps.isEmpty()) {
                 double med = ps.size() % 2 == 1 ? ps.get(ps.size() / 2) : 0.5 * (ps.get(ps.size() / 2 - 1) + ps.get(ps.size() / 2));
-                if (med >= t0 && med <= t1) {
-                    b.verticalLine(med, "passage (median of " + ps.size() + ")");
-                }
+                events.add(new TimeHeightPanel.Event(med, "passage (median of " + ps.size() + ")"));
             }
         } else {
-            if (Double.isFinite(s.modelChainH()) && s.modelChainH() >= t0 && s.modelChainH() <= t1) {
-                b.verticalLine(s.modelChainH(), "chain passage");
-            }
-            if (Double.isFinite(s.modelArrivalH()) && s.modelArrivalH() >= t0 && s.modelArrivalH() <= t1) {
-                b.verticalLine(s.modelArrivalH(), arrivalName);
-            }
+            events.add(new TimeHeightPanel.Event(s.modelChainH(), "chain passage"));
+            events.add(new TimeHeightPanel.Event(s.modelArrivalH(), arrivalName));
         }
-        return b.build();
+        return TimeHeightPanel.of(title, s.timeH(), s.heightM(), v, label, unit, range, diverging, events, 620, 380);
     }
 
     static double[] symmetric(double[][] a, double[][] b) {
-        double m = 0;
-        for (double[][] f : List.of(a, b)) {
-            for (double[] row : f) {
-                for (double x : row) {
-                    if (Double.isFinite(x)) {
-                        m = Math.max(m, Math.abs(x));
-                    }
-                }
-            }
-        }
-        if (m == 0) {
-            m = 1;
-        }
-        double top = NiceTicks.roundOut(0, m, 4)[1];
-        return new double[] {-top, top};
+        return TimeHeightPanel.symmetricRange(a, b);
     }
 
     static double[] range(double[][] a, double[][] b) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double[][] f : List.of(a, b)) {
-            for (double[] row : f) {
-                for (double x : row) {
-                    if (Double.isFinite(x)) {
-                        lo = Math.min(lo, x);
-                        hi = Math.max(hi, x);
-                    }
-                }
-            }
-        }
-        if (lo > hi) {
-            return new double[] {0, 1};
-        }
-        if (hi == lo) {
-            hi = lo + 1;
-        }
-        return NiceTicks.roundOut(lo, hi, 6);
+        return TimeHeightPanel.range(a, b);
     }
 
     static HtmlReport report(Comparison.Result r, String scenarioRef, String observedLabel, Table metrics, Table passages,

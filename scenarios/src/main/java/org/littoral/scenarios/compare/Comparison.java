@@ -496,27 +496,9 @@ public final class Comparison {
         return i;
     }
 
-    /** Cross-shore wind and theta of a profile on the height bins z (nearest bin within half a bin, else NaN). */
+    /** Cross-shore wind and theta of a profile on the height bins z (the binning shared with observe's sections). */
     private static void onBins(Profile p, double[] z, double halfBin, Coast coast, double[] u, double[] th) {
-        java.util.Arrays.fill(u, Double.NaN);
-        java.util.Arrays.fill(th, Double.NaN);
-        for (int k = 0; k < p.size(); k++) {
-            int kk = nearest(z, p.heightM()[k]);
-            if (Math.abs(z[kk] - p.heightM()[k]) <= halfBin + 1e-9) {
-                u[kk] = coast.crossShore(p.windEastMPerS()[k], p.windNorthMPerS()[k]);
-                th[kk] = p.thetaK()[k];
-            }
-        }
-    }
-
-    static int nearest(double[] a, double v) {
-        int best = 0;
-        for (int i = 1; i < a.length; i++) {
-            if (Math.abs(a[i] - v) < Math.abs(a[best] - v)) {
-                best = i;
-            }
-        }
-        return best;
+        org.littoral.scenarios.analysis.TimeHeightGrid.onBins(p, z, halfBin, coast, u, th);
     }
 
     /** Layer means of the model soundings at one site, linear in time between flights. */

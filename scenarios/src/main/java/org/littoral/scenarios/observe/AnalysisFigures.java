@@ -100,6 +100,7 @@ public final class AnalysisFigures {
         passageTimes(r).ifPresent(out::add);
         out.addAll(responseBoxes(r, s));
         out.addAll(composites(r));
+        out.addAll(FlightFigures.all(r, coast));
         return out;
     }
 

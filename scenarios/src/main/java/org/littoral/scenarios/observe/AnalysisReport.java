@@ -97,12 +97,13 @@ public final class AnalysisReport {
         rep.table((compact ? "Detected passages that turn the wind onshore, per site and day (passages.csv has every passage and "
                 + "column)." : "Detected passages per site and day (passages.csv has every column).") + " Timing uncertainty is at "
                 + "least half the local flight interval; confidence is the detectors' agreement.", t);
+        flightSections(rep, r, figs, compact);
         rep.section("Responses, distributions and composites");
         for (String sentence : AnalysisFigures.smallSampleSentences(r)) {
             rep.paragraph(sentence);
         }
         for (CaptionedFigure c : figs) {
-            if (!c.fileName().startsWith("wind-direction")) {
+            if (!c.fileName().startsWith("wind-direction") && !isFlightFigure(c)) {
                 rep.figure(c.figure(), c.caption());
             }
         }
@@ -131,6 +132,37 @@ public final class AnalysisReport {
                 + "15, smallest p first; comparisons.csv has all " + r.comparisons().size() + "). " : "")
                 + "Comparisons between groups: the test is chosen from the samples' size and normality diagnostics "
                 + "(comparisons.csv has them); p (Holm) corrects for the number of comparisons made.", c);
+    }
+
+    static boolean isFlightFigure(CaptionedFigure c) {
+        return c.fileName().startsWith(FlightFigures.PROFILES_PREFIX) || c.fileName().startsWith(FlightFigures.SECTION_PREFIX);
+    }
+
+    /**
+     * The observed flights: profile plots and time-height sections per site-day (every site-day of a short campaign,
+     * a choice for a long one, said in a sentence). A compact report shows the first site-day's figures only.
+     */
+    static void flightSections(HtmlReport rep, AnalysisResult r, List<CaptionedFigure> figs, boolean compact) {
+        List<CaptionedFigure> flights = figs.stream().filter(AnalysisReport::isFlightFigure).toList();
+        if (flights.isEmpty()) {
+            return;
+        }
+        rep.section("The observed flights");
+        FlightFigures.Choice choice = FlightFigures.choose(r);
+        if (choice.sentence() != null) {
+            rep.paragraph(choice.sentence());
+        }
+        String firstSuffix = FlightFigures.fileSuffix(choice.siteDays().get(0));
+        if (compact && choice.siteDays().size() > 1) {
+            rep.paragraph("Shown here for " + choice.siteDays().get(0).siteDay().site() + " on " + choice.siteDays().get(0).siteDay().day()
+                    + "; the observe folder holds the figures of " + choice.siteDays().size() + " site-days ("
+                    + FlightFigures.PROFILES_PREFIX + "*.png, " + FlightFigures.SECTION_PREFIX + "*.png).");
+        }
+        for (CaptionedFigure c : flights) {
+            if (!compact || c.fileName().endsWith(firstSuffix)) {
+                rep.figure(c.figure(), c.caption());
+            }
+        }
     }
 
     /** "change alongshore_wind_m_per_s 100-300m" -> "change of alongshore wind (m/s), 100-300 m". */

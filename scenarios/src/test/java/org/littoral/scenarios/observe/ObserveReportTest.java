@@ -44,6 +44,16 @@ class ObserveReportTest {
         assertEquals(pngFiles, embedded, "every PNG written is embedded in the report");
         assertTrue(html.contains("Drone operations follow local aviation rules"), "the report carries the cautions");
         assertTrue(html.contains("Detected passages per site and day"));
+        long flights;
+        long sections;
+        try (var s = Files.list(out)) {
+            var names = s.map(p -> p.getFileName().toString()).toList();
+            flights = names.stream().filter(n -> n.startsWith("flights-")).count();
+            sections = names.stream().filter(n -> n.startsWith("time-height-")).count();
+        }
+        assertEquals(4, flights, "a long campaign: profile figures of 4 chosen site-days");
+        assertEquals(4, sections, "and their time-height sections");
+        assertTrue(html.contains("the flight profiles and time-height sections below show 4 of them"), "the choice is said");
         Set<PosixFilePermission> perm = Files.getPosixFilePermissions(out.resolve("report.html"));
         assertTrue(perm.contains(PosixFilePermission.OTHERS_READ), "outputs are readable by others: " + perm);
     }

@@ -116,6 +116,27 @@ class OwnColumnsTest {
     }
 
     @Test
+    void aOneDayReportShowsEveryFlightsProfilesAndTheTimeHeightSectionsOfTheObservations() throws IOException {
+        Path out = dir.resolve("out2");
+        assertEquals(0, Main.execute("observe", campaignCsv().toString(), "--columns", write("cols.yaml", MAP).toString(),
+                "--coast", coast().toString(), "--out", out.toString()));
+        String html = Files.readString(out.resolve("report.html"));
+        for (String name : List.of("flights-2026-12-05-ridge-3km.png", "time-height-2026-12-05-ridge-3km.png")) {
+            Path png = out.resolve(name);
+            assertTrue(Files.exists(png), name);
+            String b64 = java.util.Base64.getEncoder().encodeToString(Files.readAllBytes(png));
+            assertTrue(html.contains("data:image/png;base64," + b64 + "\""), "report.html embeds " + name);
+        }
+        // captions computed from the data: 21 flights every 30 min from 07:00 to 17:00 local, ascents to 400 m
+        assertTrue(html.contains("Observed profiles at ridge-3km on 2026-12-05: all 21 flights from 07:00 to 17:00 local time, "
+                + "up to 400 m above ground"), "profile caption");
+        assertTrue(html.contains("Onshore passage: 12:15 +/- 15 min (flights at 12:00 and 12:30 on either side)"), "passage in caption");
+        assertTrue(html.contains("Time-height sections of the observations at ridge-3km on 2026-12-05: 21 flights from 07:00 to "
+                + "17:00 local time, each flight one column of 5 m bins"), "section caption");
+        assertTrue(html.contains("The observed flights"), "a section of its own");
+    }
+
+    @Test
     void mappedUnitsAreConvertedAndTheThreeSensorsAveraged() throws IOException {
         AnalysisSettings s = new AnalysisSettings();
         s.localZone = ZoneOffset.ofHours(11);
