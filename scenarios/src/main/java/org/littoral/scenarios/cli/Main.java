@@ -20,6 +20,7 @@ import picocli.CommandLine.ScopeType;
             org.littoral.scenarios.sweep.SweepCommand.class,
             org.littoral.scenarios.plan.PlanCommand.class,
             org.littoral.scenarios.timing.CheckTimingCommand.class,
+            org.littoral.scenarios.sensitivity.InfluenceCommand.class,
             org.littoral.scenarios.observe.ObserveCommand.class,
             org.littoral.scenarios.run.RunCommand.class,
             org.littoral.scenarios.run.ScenariosCommand.class,
