@@ -52,7 +52,7 @@ public final class CanonicalFlows {
                         HorizontalGrid.centred(nx, dxM), VerticalGrid.uniform(layers + 1, depthM))
                 .theta(new ThetaProfile.ConstantN(theta, 0.0)).moisture(0.0, 0.0)
                 .forcing(new Forcing.None()).switches(new NonlinearConfig.Switches(true, false, false))
-                .damping(new NonlinearConfig.Damping(0, 0, 0, 300, 0, 600))
+                .damping(NonlinearConfig.Damping.none())
                 .solarHours(0, durationS / 3600.0).outputIntervalS(durationS / 30.0)
                 // x < 0 cold; the periodic wrap makes a second lock at the domain ends, half a domain away
                 .initialThetaPerturbation((x, z) -> x < 0 && x > -half ? -deltaThetaK : 0.0).build();
@@ -110,7 +110,8 @@ public final class CanonicalFlows {
         NonlinearConfig c = NonlinearConfig.builder(new Coast(latitudeDeg, 0.0, 0.0, 270.0, 172), SurfaceMap.simpleCoast(293.15, 0.2, 1, 0.1),
                         HorizontalGrid.centred(64, 8000.0), VerticalGrid.stretched(17, 8000.0, 60.0))
                 .forcing(new Forcing.PrescribedHeating(q)).switches(new NonlinearConfig.Switches(true, false, false))
-                .damping(new NonlinearConfig.Damping(1.0 / 86400.0, 1.0 / 86400.0, 0.3, 600, 100_000, 1800))
+                .damping(NonlinearConfig.Damping.none().withFrictionPerS(1.0 / 86400.0).withCoolingPerS(1.0 / 86400.0)
+                        .withTopLayer(0.3, 600).withLateralSponges(100_000, 1800))
                 .solarHours(6, 54).outputIntervalS(900).build();
         NonlinearSolution s = NonlinearModel.run(c);
         int nx = s.xM().length;
@@ -191,7 +192,7 @@ public final class CanonicalFlows {
         NonlinearConfig c = NonlinearConfig.builder(new Coast(40.0, 0.0, 0.0, 270.0, 172), allLand(1.0, 0.1),
                         HorizontalGrid.centred(8, 2000.0), VerticalGrid.uniform(81, 4000.0))
                 .theta(new ThetaProfile.Tabulated(zt, tt)).boundaryLayer(bl)
-                .damping(new NonlinearConfig.Damping(0, 0, 0.2, 600, 0, 600))
+                .damping(NonlinearConfig.Damping.none().withTopLayer(0.2, 600))
                 .forcing(new Forcing.PrescribedSurfaceFlux(peakFluxWm2, 6.0, 18.0, 0.0))
                 .solarHours(6.0, endSolarHours).outputIntervalS(1800.0).build();
         NonlinearSolution s = NonlinearModel.run(c);
@@ -268,7 +269,7 @@ public final class CanonicalFlows {
         double hq = 500.0;
         NonlinearConfig c = NonlinearConfig.builder(coast, map, xg, zi).switches(NonlinearConfig.Switches.linearEquations())
                 .forcing(new Forcing.PrescribedHeating(classicPeriodicHeating(q0, x0, hq, 6.0, xg)))
-                .damping(new NonlinearConfig.Damping(alpha, alpha, 0.3, 600, 0, 600)).solarHours(0, 72).outputIntervalS(900).build();
+                .damping(NonlinearConfig.Damping.none().withFrictionPerS(alpha).withCoolingPerS(alpha).withTopLayer(0.3, 600)).solarHours(0, 72).outputIntervalS(900).build();
         NonlinearSolution s = NonlinearModel.run(c);
         double[] zc = s.zM();
         org.littoral.model.linear.LinearConfig lc = new org.littoral.model.linear.LinearConfig(coast, map, xg, VerticalGrid.of(zc),

@@ -157,8 +157,34 @@ public record NonlinearConfig(Coast coast, SurfaceMap surface, HorizontalGrid xG
             }
         }
 
+        /** A damping layer over the top 30 % (300 s) and 50 km lateral sponges (600 s); no friction or cooling. */
         public static Damping standard() {
             return new Damping(0.0, 0.0, 0.3, 300.0, 50_000.0, 600.0);
+        }
+
+        /** No friction, no cooling, no damping layer and no lateral sponges (timescales kept at 300 s and 600 s). */
+        public static Damping none() {
+            return new Damping(0.0, 0.0, 0.0, 300.0, 0.0, 600.0);
+        }
+
+        /** This damping with Rayleigh friction alpha on the winds, 1/s. */
+        public Damping withFrictionPerS(double alpha) {
+            return new Damping(alpha, newtonianCoolingPerS, topLayerFraction, topTimescaleS, lateralSpongeWidthM, lateralTimescaleS);
+        }
+
+        /** This damping with Newtonian cooling alpha_N on theta and r, 1/s. */
+        public Damping withCoolingPerS(double alphaN) {
+            return new Damping(rayleighFrictionPerS, alphaN, topLayerFraction, topTimescaleS, lateralSpongeWidthM, lateralTimescaleS);
+        }
+
+        /** This damping with a damping layer over the top fraction of the domain at the given timescale. */
+        public Damping withTopLayer(double fraction, double timescaleS) {
+            return new Damping(rayleighFrictionPerS, newtonianCoolingPerS, fraction, timescaleS, lateralSpongeWidthM, lateralTimescaleS);
+        }
+
+        /** This damping with lateral sponges of the given width at each end and timescale (width 0: none). */
+        public Damping withLateralSponges(double widthM, double timescaleS) {
+            return new Damping(rayleighFrictionPerS, newtonianCoolingPerS, topLayerFraction, topTimescaleS, widthM, timescaleS);
         }
     }
 

@@ -23,7 +23,7 @@ class NonlinearModelTest {
     }
 
     static NonlinearConfig.Damping noDamping() {
-        return new NonlinearConfig.Damping(0, 0, 0, 300, 0, 600);
+        return NonlinearConfig.Damping.none();
     }
 
     @Test
@@ -31,7 +31,7 @@ class NonlinearModelTest {
         NonlinearConfig c = NonlinearConfig.builder(coastAt(40), COAST, HorizontalGrid.centred(64, 2000.0),
                         VerticalGrid.stretched(25, 6000.0, 50.0))
                 .forcing(new Forcing.None()).switches(new NonlinearConfig.Switches(true, false, true))
-                .damping(new NonlinearConfig.Damping(0, 0, 0.3, 300, 20_000, 600)).solarHours(6, 12).build();
+                .damping(NonlinearConfig.Damping.none().withTopLayer(0.3, 300).withLateralSponges(20_000, 600)).solarHours(6, 12).build();
         assertStaysAtRest(NonlinearModel.run(c));
     }
 
@@ -41,7 +41,7 @@ class NonlinearModelTest {
                 Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 0.2, 1.0, 0.1, 0.3)));
         NonlinearConfig c = NonlinearConfig.builder(coastAt(40), allLand, HorizontalGrid.centred(64, 2000.0),
                         VerticalGrid.stretched(25, 6000.0, 50.0))
-                .forcing(new Forcing.None()).damping(new NonlinearConfig.Damping(0, 0, 0.3, 300, 20_000, 600))
+                .forcing(new Forcing.None()).damping(NonlinearConfig.Damping.none().withTopLayer(0.3, 300).withLateralSponges(20_000, 600))
                 .solarHours(6, 12).build();
         assertStaysAtRest(NonlinearModel.run(c));
     }
@@ -127,7 +127,7 @@ class NonlinearModelTest {
         NonlinearConfig c = NonlinearConfig.builder(coastAt(40), COAST, HorizontalGrid.centred(64, 1000.0),
                         VerticalGrid.uniform(17, 4000.0))
                 .forcing(new Forcing.PrescribedHeating((x, z, t) -> x > 0 && z < 500 ? 0.5 : 0.0))
-                .damping(new NonlinearConfig.Damping(0, 0, 0.3, 300, 10_000, 600))
+                .damping(NonlinearConfig.Damping.none().withTopLayer(0.3, 300).withLateralSponges(10_000, 600))
                 .numerics(new NonlinearConfig.Numerics(0.5, 1.0, 300, 30.0)).outputIntervalS(60).solarHours(6, 9).build();
         ModelBlowUpException e = assertThrows(ModelBlowUpException.class, () -> NonlinearModel.run(c));
         assertTrue(e.getMessage().contains("solar h") && e.getMessage().contains("x =") && e.getMessage().contains("try"),

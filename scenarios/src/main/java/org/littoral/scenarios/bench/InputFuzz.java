@@ -27,14 +27,14 @@ import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import java.util.zip.GZIPInputStream;
 import java.util.zip.GZIPOutputStream;
-import org.littoral.scenarios.cli.Main;
+import org.littoral.scenarios.input.Failures;
 
 /**
  * A seeded fuzzer for every input file littoral reads. It takes a small valid seed of each kind, applies
  * random mutations (numbers at the edges, deleted and repeated lines, bad bytes, broken gzip, extra YAML
  * documents, long values, path-like names, wrong types, ...), hands each mutant to the same reader and pre-run
  * checks a command uses, and sorts the outcome as the command line would report it (exit code and message,
- * {@link Main#exitCode(Throwable)}):
+ * {@link Failures#exitCode(Throwable)}):
  * <ul>
  * <li>{@link Category#CLEAN}: accepted;</li>
  * <li>{@link Category#CLEAR_ERROR}: exit 2 with one line that names the file, is at most {@link #MAX_MESSAGE}
@@ -230,8 +230,8 @@ public final class InputFuzz {
         if (t == null) {
             return new Outcome(k, index, seed, mutation, 0, null, Category.CLEAN, "");
         }
-        int exit = Main.exitCode(t);
-        String msg = Main.message(t);
+        int exit = Failures.exitCode(t);
+        String msg = Failures.message(t);
         String why = unclear(exit, msg, fileName, k == Kind.SETTINGS ? k : null);
         return new Outcome(k, index, seed, mutation, exit, msg, why == null ? Category.CLEAR_ERROR : Category.OTHER,
                 why == null ? "" : why);

@@ -10,7 +10,7 @@ import java.util.Map;
 import org.littoral.scenarios.analysis.AnalysisSettings;
 import org.littoral.scenarios.analysis.ingest.DayTableReader;
 import org.littoral.scenarios.observe.CoastFile;
-import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.observe.ObserveIngest;
 import org.littoral.scenarios.plan.PlanFile;
 import org.littoral.scenarios.plan.PlanMemberRunner;
 import org.littoral.scenarios.plan.PlanSpec;
@@ -74,7 +74,7 @@ public final class InputFuzzBenchmark implements Benchmark {
                 WorkEstimate.of(r.scenarioOf(mm)).check(2, f.toString());
             }
         });
-        m.put(InputFuzz.Kind.OBSERVATIONS, f -> ObserveCommand.ingest(f, new AnalysisSettings()));
+        m.put(InputFuzz.Kind.OBSERVATIONS, f -> ObserveIngest.ingest(f, new AnalysisSettings()));
         m.put(InputFuzz.Kind.DAY_TABLE, DayTableReader::read);
         m.put(InputFuzz.Kind.COLUMN_MAP, org.littoral.scenarios.analysis.ingest.ColumnMap::load);
         m.put(InputFuzz.Kind.SETTINGS, f -> org.littoral.scenarios.analysis.SettingsFile.apply(f, new AnalysisSettings()));

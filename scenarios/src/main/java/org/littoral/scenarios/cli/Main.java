@@ -1,7 +1,6 @@
 package org.littoral.scenarios.cli;
 
 import java.util.concurrent.Callable;
-import org.littoral.scenarios.bench.BenchCommand;
 import org.littoral.scenarios.input.UserInputException;
 import org.littoral.scenarios.validate.ValidateCommand;
 import picocli.CommandLine;
@@ -72,49 +71,14 @@ public final class Main implements Callable<Integer> {
         }
     }
 
-    /**
-     * The exit code for an error a command raised: 2 for bad input (including an output folder that cannot be
-     * written: no permission, a read-only or full disk), 1 for anything else.
-     */
+    /** See {@link org.littoral.scenarios.input.Failures#exitCode}. */
     public static int exitCode(Throwable ex) {
-        if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
-            return 2;
-        }
-        return writeProblem(ex) != null ? 2 : 1;
+        return org.littoral.scenarios.input.Failures.exitCode(ex);
     }
 
-    /** The text printed after "littoral: error: " (exit 2) or "littoral: failed: " (exit 1). */
+    /** See {@link org.littoral.scenarios.input.Failures#message}. */
     public static String message(Throwable ex) {
-        if (ex instanceof UserInputException || ex instanceof IllegalArgumentException) {
-            return ex.getMessage();
-        }
-        String w = writeProblem(ex);
-        if (w == null && ex instanceof org.littoral.scenarios.sweep.IncompleteRunException) {
-            return ex.getMessage();
-        }
-        return w != null ? w : String.valueOf(ex);
-    }
-
-    /** One line for a file that could not be written because of the disk or permissions, or null. */
-    static String writeProblem(Throwable ex) {
-        for (Throwable c = ex; c != null; c = c.getCause()) {
-            if (c instanceof java.nio.file.AccessDeniedException a) {
-                return "cannot write " + a.getFile() + ": permission denied; give an --out folder you can write to";
-            }
-            if (c instanceof java.io.IOException io) {
-                String m = String.valueOf(io.getMessage());
-                String file = io instanceof java.nio.file.FileSystemException fs && fs.getFile() != null ? fs.getFile() : null;
-                if (m.contains("No space left") || m.contains("Disk quota")) {
-                    return "cannot write " + (file != null ? file : "the outputs") + ": the disk is full; free some space or "
-                            + "give an --out folder on another disk";
-                }
-                if (m.contains("Read-only file system")) {
-                    return "cannot write " + (file != null ? file : "the outputs") + ": the disk is read-only; give an --out "
-                            + "folder you can write to";
-                }
-            }
-        }
-        return null;
+        return org.littoral.scenarios.input.Failures.message(ex);
     }
 
     public static void main(String[] args) {

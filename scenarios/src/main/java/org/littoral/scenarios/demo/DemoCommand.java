@@ -24,8 +24,8 @@ import org.littoral.scenarios.observe.AnalysisFigures;
 import org.littoral.scenarios.observe.AnalysisOutputs;
 import org.littoral.scenarios.observe.AnalysisReport;
 import org.littoral.scenarios.observe.CoastFile;
-import org.littoral.scenarios.observe.ObserveCommand;
-import org.littoral.scenarios.plan.PlanCommand;
+import org.littoral.scenarios.observe.ObserveIngest;
+import org.littoral.scenarios.plan.PlanRun;
 import org.littoral.scenarios.plan.PlanFile;
 import org.littoral.scenarios.plan.PlanReport;
 import org.littoral.scenarios.plan.PlanSpec;
@@ -33,11 +33,11 @@ import org.littoral.scenarios.report.HtmlReport;
 import org.littoral.scenarios.report.ClockTime;
 import org.littoral.scenarios.report.Table;
 import org.littoral.scenarios.scenario.JobModel;
-import org.littoral.scenarios.timing.CheckTimingCommand;
+import org.littoral.scenarios.timing.CheckTimingRun;
 import org.littoral.scenarios.timing.CheckTimingResult;
 import org.littoral.scenarios.timing.TimingFlag;
 import org.littoral.scenarios.sweep.ScenarioMemberRunner;
-import org.littoral.scenarios.sweep.SweepCommand;
+import org.littoral.scenarios.sweep.SweepRun;
 import org.littoral.scenarios.sweep.SweepFile;
 import org.littoral.scenarios.sweep.SweepSpec;
 import org.littoral.scenarios.input.UserInputException;
@@ -120,12 +120,12 @@ public final class DemoCommand implements Callable<Integer> {
 
         p.step("hypothesis sweep of ambient flows (" + sweepRef + ")");
         SweepSpec sweep = SweepFile.load(sweepRef, ScenarioMemberRunner.scenarioSource());
-        SweepCommand.Result sr = SweepCommand.run(sweep, out.resolve("sweep"), n, resume, false, false);
+        SweepRun.Result sr = SweepRun.run(sweep, out.resolve("sweep"), n, resume, false, false);
         sweepSection(rep, sr);
 
         p.step("analysis of the demo observations");
         AnalysisSettings settings = new AnalysisSettings();
-        ObserveCommand.Observed o = ObserveCommand.ingest(dataDir.resolve("binned").resolve("profiles-binned.csv.gz"), settings);
+        ObserveIngest.Observed o = ObserveIngest.ingest(dataDir.resolve("binned").resolve("profiles-binned.csv.gz"), settings);
         settings.dayAttributes.putAll(DayTableReader.read(dataDir.resolve("days.csv")));
         AnalysisResult ar = AnalysisChain.run(o.profiles(), coast, settings);
         Path obsDir = out.resolve("observe");
@@ -148,7 +148,7 @@ public final class DemoCommand implements Callable<Integer> {
 
         p.step("site and cadence plan for the invented coast (" + planRef + ")");
         PlanSpec plan = PlanFile.load(planRef);
-        PlanCommand.PlanOutcome po = PlanCommand.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
+        PlanRun.PlanOutcome po = PlanRun.run(plan, plan.model(), out.resolve("plan"), n, resume, System.err);
         List<CaptionedFigure> pf = PlanReport.figures(plan, po.result());
         PlanReport.addSections(rep, plan, po.result(), po.windows(), pf, true);
 
@@ -200,7 +200,7 @@ public final class DemoCommand implements Callable<Integer> {
                 "5. Planning: where should two sites go on this coast, and is a denser cadence around the front worth it?"));
     }
 
-    private static void sweepSection(HtmlReport rep, SweepCommand.Result sr) throws IOException {
+    private static void sweepSection(HtmlReport rep, SweepRun.Result sr) throws IOException {
         rep.section("Hypotheses: the ambient flow (model sweep)");
         rep.paragraph(sr.spec().description() + ". " + sr.outcome().members() + " members (" + sr.outcome().failed()
                 + " failed). Each member is one run of the model; the comparison table and the member runs are in sweep/.");
@@ -216,7 +216,7 @@ public final class DemoCommand implements Callable<Integer> {
     }
 
     private static void compareSection(HtmlReport rep, Path dataDir, Path dir, String model) throws IOException {
-        org.littoral.scenarios.compare.CompareCommand.Outcome o = org.littoral.scenarios.compare.CompareCommand.run(
+        org.littoral.scenarios.compare.CompareRun.Outcome o = org.littoral.scenarios.compare.CompareRun.run(
                 COMPARE_SCENARIO, model, dataDir.resolve("binned/profiles-binned.csv.gz"),
                 dataDir.resolve("coast.yaml").toString(), dataDir.resolve("days.csv"), "scenario", dir, null);
         org.littoral.scenarios.compare.Comparison.Result r = o.result();
@@ -268,10 +268,10 @@ public final class DemoCommand implements Callable<Integer> {
         }
         PrintStream quiet = new PrintStream(java.io.OutputStream.nullOutputStream(), false, java.nio.charset.StandardCharsets.UTF_8);
         Path truth = dataDir.resolve("truth/passages.csv");
-        CheckTimingResult c = CheckTimingCommand.run(truth, day, dir.resolve("true-passages"),
-                new CheckTimingCommand.Options(model, threads, false, quiet, false));
-        CheckTimingResult chain = CheckTimingCommand.run(chainPassages, day, reuseEnsemble(dir.resolve("true-passages"),
-                dir.resolve("chain-passages")), new CheckTimingCommand.Options(model, threads, true, quiet, false));
+        CheckTimingResult c = CheckTimingRun.run(truth, day, dir.resolve("true-passages"),
+                new CheckTimingRun.Options(model, threads, false, quiet, false));
+        CheckTimingResult chain = CheckTimingRun.run(chainPassages, day, reuseEnsemble(dir.resolve("true-passages"),
+                dir.resolve("chain-passages")), new CheckTimingRun.Options(model, threads, true, quiet, false));
         rep.paragraph("The passage times of " + CHECK_DAY + ", a consistent day of the invented campaign (weak offshore wind, a "
                 + "bay breeze and then the sea breeze), against an ensemble of " + c.members() + " plausible versions of that day ("
                 + c.model() + " model; day file " + day.getFileName() + "), and the speed implied between the sites against a "
@@ -316,7 +316,7 @@ public final class DemoCommand implements Callable<Integer> {
             Path cdir = reuseEnsemble(dir.resolve("true-passages"), dir.resolve("planted-" + pc.name()));
             Path csv = cdir.resolve("passages.csv");
             org.littoral.scenarios.output.AtomicFile.write(csv, pc.csv().getBytes(java.nio.charset.StandardCharsets.UTF_8));
-            CheckTimingResult r = CheckTimingCommand.run(csv, day, cdir, new CheckTimingCommand.Options(model, threads, true, quiet,
+            CheckTimingResult r = CheckTimingRun.run(csv, day, cdir, new CheckTimingRun.Options(model, threads, true, quiet,
                     false));
             List<String> raised = new ArrayList<>();
             boolean ok = false;

@@ -72,7 +72,7 @@ public final class PlanBenchmark implements Benchmark {
             org.littoral.scenarios.bench.HeapPeaks.reset(true);
             long cpu0 = processCpuNanos();
             long t0 = System.nanoTime();
-            PlanCommand.PlanOutcome o = PlanCommand.run(plan, model, dir, threads, false, new PrintStream(
+            PlanRun.PlanOutcome o = PlanRun.run(plan, model, dir, threads, false, new PrintStream(
                     java.io.OutputStream.nullOutputStream(), false, StandardCharsets.UTF_8));
             double wall = (System.nanoTime() - t0) / 1e9;
             double cpu = (processCpuNanos() - cpu0) / 1e9;

@@ -152,8 +152,8 @@ public record Scenario(String name, String description, Kind kind, String source
                 .solarHours(span[0], span[1])
                 .outputIntervalS(Math.min(NONLINEAR_STORE_MAX_S, output.stepMin() * 60.0))
                 .forcing(forcing)
-                .damping(new NonlinearConfig.Damping(physics.frictionPerS(), physics.coolingPerS(), std.topLayerFraction(),
-                        std.topTimescaleS(), spongeM, std.lateralTimescaleS()))
+                .damping(std.withFrictionPerS(physics.frictionPerS()).withCoolingPerS(physics.coolingPerS())
+                        .withLateralSponges(spongeM, std.lateralTimescaleS()))
                 .boundaryLayer(bl);
     }
 

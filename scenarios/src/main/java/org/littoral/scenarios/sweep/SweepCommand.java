@@ -54,43 +54,6 @@ public final class SweepCommand implements Callable<Integer> {
     @Mixin
     org.littoral.scenarios.cluster.ClusterOptions cluster;
 
-    /** What a sweep produced: the executor's outcome, the comparison table and the figure files. */
-    public record Result(SweepSpec spec, SweepExecutor.Outcome outcome, ComparisonTable table, List<Path> figures) {
-    }
-
-    /** Runs a sweep into {@code dir} (progress on a terminal), then writes the comparison table and figures. */
-    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles)
-            throws Exception {
-        return run(spec, dir, threads, resume, retryFailed, keepRunFiles, false);
-    }
-
-    /** As {@link #run(SweepSpec, Path, int, boolean, boolean, boolean)}; {@code fieldsNc} keeps each member's fields.nc. */
-    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles,
-                             boolean fieldsNc) throws Exception {
-        return run(spec, dir, threads, resume, retryFailed, keepRunFiles, fieldsNc, Placement.ALL_HERE);
-    }
-
-    /**
-     * As above, with the members placed elsewhere: one shard, the merge step, or a batch system. Only a run that ends
-     * with every member's result (here or the merge) writes the table and figures; otherwise they are null and empty.
-     */
-    public static Result run(SweepSpec spec, Path dir, int threads, boolean resume, boolean retryFailed, boolean keepRunFiles,
-                             boolean fieldsNc, Placement where) throws Exception {
-        List<Member> members = MemberExpander.expand(spec);
-        ScenarioMemberRunner runner = new ScenarioMemberRunner(spec.source(), keepRunFiles ? dir.resolve("runs") : null,
-                Solver.standard()).fieldsNetcdf(fieldsNc && keepRunFiles).scratchIn(dir.resolve(SweepExecutor.SCRATCH));
-        var largest = runner.checkAll(members, where.concurrentHere(threads));
-        SweepExecutor.Outcome o = SweepExecutor.run(spec, members, dir, runner,
-                SweepExecutor.Options.forCommandLine(threads, resume, retryFailed).placed(where, largest));
-        if (!o.complete()) {
-            return new Result(spec, o, null, List.of());
-        }
-        ComparisonTable table = ComparisonTable.build(spec, members, new MemberStore(dir));
-        table.write(dir);
-        List<Path> figures = ComparisonFigures.write(table, dir);
-        return new Result(spec, o, table, figures);
-    }
-
     @Override
     public Integer call() throws Exception {
         if (list || sweep == null) {
@@ -116,7 +79,7 @@ public final class SweepCommand implements Callable<Integer> {
         }
         Placement where = cluster.placement(dir, overwrite);
         OutputFolder folder = cluster.prepareFolder(dir, "sweep " + sweep, resume, overwrite, System.err);
-        Result r = run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc, where);
+        SweepRun.Result r = SweepRun.run(spec, dir, n, resume, retryFailed, !noRunFiles, fieldsNc, where);
         if (!r.outcome().complete()) {
             return org.littoral.scenarios.cluster.ClusterOptions.exitCode(r.outcome());
         }

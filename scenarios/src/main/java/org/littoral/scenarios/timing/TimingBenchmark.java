@@ -49,8 +49,8 @@ public final class TimingBenchmark implements Benchmark {
             out.printf(Locale.ROOT, "check-timing benchmark: %d members, %d thread(s), load average %.2f%n", members, threads,
                     ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
             long t0 = System.nanoTime();
-            CheckTimingResult r = CheckTimingCommand.run(spec, passages, tmp.resolve("out"),
-                    new CheckTimingCommand.Options(null, threads, false, new PrintStream(java.io.OutputStream.nullOutputStream()),
+            CheckTimingResult r = CheckTimingRun.run(spec, passages, tmp.resolve("out"),
+                    new CheckTimingRun.Options(null, threads, false, new PrintStream(java.io.OutputStream.nullOutputStream()),
                             false), Solver.standard());
             double wall = (System.nanoTime() - t0) / 1e9;
             out.printf(Locale.ROOT, "  wall %.1f s (%.2f s per member), %d failed; load average after %.2f%n", wall,

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.littoral.model.coast.Coast;
 import org.littoral.scenarios.observe.CoastFile;
-import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.observe.ObserveIngest;
 
 /** Convention mistakes found campaign-wide on the INVENTED demo campaign (binned file, land-to-sea bearing 135 deg). */
 class ConventionCheckTest {
@@ -21,7 +21,7 @@ class ConventionCheckTest {
     static void analyseTheDemo() throws IOException {
         coast = CoastFile.load(Path.of("..", "demo-data", "coast.yaml").toString());
         AnalysisSettings s = new AnalysisSettings();
-        result = AnalysisChain.run(ObserveCommand.ingest(Path.of("..", "demo-data", "binned"), s).profiles(), coast, s);
+        result = AnalysisChain.run(ObserveIngest.ingest(Path.of("..", "demo-data", "binned"), s).profiles(), coast, s);
     }
 
     static Coast withBearing(double deg) {

@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.littoral.model.sounding.Profile;
 import org.littoral.scenarios.analysis.AnalysisSettings;
 import org.littoral.scenarios.input.UserInputException;
-import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.observe.ObserveIngest;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.BuiltinScenarios;
@@ -79,7 +79,7 @@ class CompareSelfTest {
     @Test
     void aRoundTripThroughTheSoundingsCsvKeepsErrorsWithinItsPrintedPrecision() throws Exception {
         AnalysisSettings s = new AnalysisSettings();
-        List<Profile> back = ObserveCommand.ingest(runDir.resolve("soundings.csv"), s).profiles();
+        List<Profile> back = ObserveIngest.ingest(runDir.resolve("soundings.csv"), s).profiles();
         Comparison.Result r = compare(back, "all");
         for (Comparison.MetricRow m : r.metrics()) {
             // soundings.csv prints temperature to 0.01 C, mixing ratio to 0.001 g/kg, speed to 0.01 m/s, direction to 0.1 deg
@@ -141,7 +141,7 @@ class CompareSelfTest {
 
     @Test
     void theCommandWritesTablesSectionsAndAReportThatEmbedsThem(@TempDir Path out) throws Exception {
-        CompareCommand.Outcome o = CompareCommand.run("classic-45N", "linear", runDir.resolve("soundings.csv"), null, null, "all", out, null);
+        CompareRun.Outcome o = CompareRun.run("classic-45N", "linear", runDir.resolve("soundings.csv"), null, null, "all", out, null);
         for (String f : List.of("metrics.csv", "metrics.json", "metrics-by-day.csv", "passage-errors.csv", "passage-summary.csv",
                 "report.html", "model/summary.json")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);

@@ -64,7 +64,7 @@ class NetcdfProfilesInTest {
     @ParameterizedTest
     @ValueSource(strings = {"nc3", "nc4"})
     void oneFlightPerFileIsBinnedLikeARawFlightWithUnitsConverted(String tag) throws IOException {
-        ObserveCommand.Observed o = ObserveCommand.ingest(dir.resolve("flights-" + tag), settings(), null);
+        ObserveIngest.Observed o = ObserveIngest.ingest(dir.resolve("flights-" + tag), settings(), null);
         assertEquals(21, o.profiles().size());
         Profile p = o.profiles().get(0);
         assertEquals("ridge-3km", p.site());
@@ -84,7 +84,7 @@ class NetcdfProfilesInTest {
     @ParameterizedTest
     @ValueSource(strings = {"nc3", "nc4"})
     void aCfProfileCollectionGivesBinnedProfilesPerSiteWithFillMasked(String tag) throws IOException {
-        ObserveCommand.Observed o = ObserveCommand.ingest(dir.resolve("collection-" + tag + ".nc"), settings(), null);
+        ObserveIngest.Observed o = ObserveIngest.ingest(dir.resolve("collection-" + tag + ".nc"), settings(), null);
         List<Profile> ps = o.profiles();
         assertEquals(42, ps.size());
         assertEquals(21, ps.stream().filter(p -> p.site().equals("flats-20km")).count());

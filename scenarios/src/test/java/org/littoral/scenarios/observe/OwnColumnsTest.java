@@ -141,7 +141,7 @@ class OwnColumnsTest {
         AnalysisSettings s = new AnalysisSettings();
         s.localZone = ZoneOffset.ofHours(11);
         ColumnMap map = ColumnMap.load(write("cols.yaml", MAP));
-        List<Profile> ps = ObserveCommand.ingest(campaignCsv(), s, map).profiles();
+        List<Profile> ps = ObserveIngest.ingest(campaignCsv(), s, map).profiles();
         assertEquals(21, ps.size());
         Profile p = ps.get(0);
         assertEquals(7.0, p.timeHours(), 1.0 / 3600.0);
@@ -156,7 +156,7 @@ class OwnColumnsTest {
     void withDescentEachFlightGivesAnAscentAndADescentProfile() throws IOException {
         AnalysisSettings s = new AnalysisSettings();
         s.ingest.useDescent = true;
-        List<Profile> ps = ObserveCommand.ingest(campaignCsv(), s, ColumnMap.load(write("cols.yaml", MAP))).profiles();
+        List<Profile> ps = ObserveIngest.ingest(campaignCsv(), s, ColumnMap.load(write("cols.yaml", MAP))).profiles();
         assertEquals(42, ps.size());
         Profile up = ps.get(0);
         Profile down = ps.get(1);
@@ -180,7 +180,7 @@ class OwnColumnsTest {
         Path m = write("cols.yaml", MAP.replace("column: WD,", "column: WindDir,"));
         Path csv = campaignCsv();
         AnalysisSettings s = new AnalysisSettings();
-        String msg = assertThrows(UserInputException.class, () -> ObserveCommand.ingest(csv, s, ColumnMap.load(m))).getMessage();
+        String msg = assertThrows(UserInputException.class, () -> ObserveIngest.ingest(csv, s, ColumnMap.load(m))).getMessage();
         assertTrue(msg.startsWith("column map " + m + ": quantities.wind_direction.column: 'WindDir': no such column in team-export.csv"),
                 msg);
         assertTrue(msg.contains("Stamp, AltAGL_ft"), msg);
@@ -206,7 +206,7 @@ class OwnColumnsTest {
         Path m = write("cols.yaml", MAP.replace("unit: K}", "unit: degC}"));
         Path csv = campaignCsv();
         String msg = assertThrows(UserInputException.class,
-                () -> ObserveCommand.ingest(csv, new AnalysisSettings(), ColumnMap.load(m))).getMessage();
+                () -> ObserveIngest.ingest(csv, new AnalysisSettings(), ColumnMap.load(m))).getMessage();
         assertTrue(msg.contains("your column 'T_a' in degC") && msg.contains("look like kelvin (K)"), msg);
         assertTrue(msg.contains("correct the unit given for it in the column map"), msg);
     }
@@ -215,7 +215,7 @@ class OwnColumnsTest {
     void directionsGivenAsBlowingTowardsAreTurnedToMeteorologicalFrom() throws IOException {
         Path m = write("cols.yaml", MAP + "wind_direction_convention: towards\n");
         AnalysisSettings s = new AnalysisSettings();
-        List<Profile> ps = ObserveCommand.ingest(campaignCsv(), s, ColumnMap.load(m)).profiles();
+        List<Profile> ps = ObserveIngest.ingest(campaignCsv(), s, ColumnMap.load(m)).profiles();
         assertEquals(120.0, ps.get(0).windDirectionDeg(20), 1e-6); // towards 300 = from 120
     }
 }

@@ -26,7 +26,7 @@ class PlanCandidatesTest {
     void candidatesInTheBayBehindTheBarrierAreLeftOutWithAMessage() {
         PlanSpec p = PlanFile.load("quillmarsh-plan");
         List<String> why = new ArrayList<>();
-        PlanSpec kept = PlanCommand.usableCandidates(p, baseOf(p), why);
+        PlanSpec kept = PlanRun.usableCandidates(p, baseOf(p), why);
         // the invented coast: barrier 0-1.2 km (land), bay 1.2-3.7 km (water), mainland beyond
         assertEquals(p.candidatesKm().length - 2, kept.candidatesKm().length);
         assertEquals(1.0, kept.candidatesKm()[0], 0, "1 km is on the barrier strip: land");
@@ -42,7 +42,7 @@ class PlanCandidatesTest {
                 + "ensemble: {members: 2, seed: 1, draws: {ambient_wind.speed_m_per_s: {uniform: {from: 0, to: 5}}}}\n"
                 + "plan:\n  candidates_km: [10, 40, 150, 160]\n  sites_per_set: 2\n  model: nonlinear\n", null, "p");
         List<String> why = new ArrayList<>();
-        PlanSpec kept = PlanCommand.usableCandidates(p, baseOf(p), why);
+        PlanSpec kept = PlanRun.usableCandidates(p, baseOf(p), why);
         assertArrayEquals(new double[] {10, 40}, kept.candidatesKm(), 0);
         assertTrue(why.get(0).contains("150, 160 km") && why.get(0).contains("sponge"), why.toString());
     }
@@ -52,7 +52,7 @@ class PlanCandidatesTest {
         PlanSpec p = PlanFile.parse("p.yaml", "base: quillmarsh-reach\n"
                 + "ensemble: {members: 2, seed: 1, draws: {ambient_wind.speed_m_per_s: {uniform: {from: 0, to: 5}}}}\n"
                 + "plan:\n  candidates_km: [2, 3]\n  sites_per_set: 1\n", null, "p");
-        String m = assertThrows(UserInputException.class, () -> PlanCommand.usableCandidates(p, baseOf(p), new ArrayList<>()))
+        String m = assertThrows(UserInputException.class, () -> PlanRun.usableCandidates(p, baseOf(p), new ArrayList<>()))
                 .getMessage();
         assertTrue(m.contains("p.yaml") && m.contains("plan.candidates_km") && m.contains("bay"), m);
     }

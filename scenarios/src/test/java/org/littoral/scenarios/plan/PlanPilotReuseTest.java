@@ -33,7 +33,7 @@ class PlanPilotReuseTest {
             return Solver.standard().solve(s);
         };
         PlanSpec p = PlanFile.parse("p.yaml", PLAN, null, "p");
-        PlanCommand.PlanOutcome o = PlanCommand.run(p, p.model(), out, 2, false, new PrintStream(OutputStream.nullOutputStream()),
+        PlanRun.PlanOutcome o = PlanRun.run(p, p.model(), out, 2, false, new PrintStream(OutputStream.nullOutputStream()),
                 counting);
         assertEquals(4, solves.get(), "4 members, 2 of them pilots: 4 solves, not 6");
         assertEquals(4, o.result().members);

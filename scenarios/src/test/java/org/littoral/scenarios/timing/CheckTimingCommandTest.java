@@ -111,8 +111,8 @@ class CheckTimingCommandTest {
 
     private static CheckTimingResult run(Path dayFile, Path passagesFile, boolean resume) throws IOException {
         ByteArrayOutputStream buf = new ByteArrayOutputStream();
-        CheckTimingResult r = CheckTimingCommand.run(DayFile.read(dayFile), passagesFile, ensembleDir,
-                new CheckTimingCommand.Options(null, 2, resume, new PrintStream(buf, true, StandardCharsets.UTF_8), false),
+        CheckTimingResult r = CheckTimingRun.run(DayFile.read(dayFile), passagesFile, ensembleDir,
+                new CheckTimingRun.Options(null, 2, resume, new PrintStream(buf, true, StandardCharsets.UTF_8), false),
                 Solver.standard());
         log = buf.toString(StandardCharsets.UTF_8);
         return r;
@@ -208,9 +208,9 @@ class CheckTimingCommandTest {
             kinds.add(s.kind());
             return org.littoral.model.linear.LinearBreezeModel.solve(s.toLinearConfig());
         };
-        CheckTimingResult r = CheckTimingCommand.run(DayFile.read(day(contrastK, firstFlightH)),
+        CheckTimingResult r = CheckTimingRun.run(DayFile.read(day(contrastK, firstFlightH)),
                 passages("shore,2031-07-04,11:00\n"), tmp.resolve("nonlinear"),
-                new CheckTimingCommand.Options("nonlinear", 2, false, new PrintStream(java.io.OutputStream.nullOutputStream()), false),
+                new CheckTimingRun.Options("nonlinear", 2, false, new PrintStream(java.io.OutputStream.nullOutputStream()), false),
                 recording);
         assertEquals(java.util.Set.of(org.littoral.scenarios.scenario.Scenario.Kind.NONLINEAR), kinds);
         assertEquals(5, r.members());

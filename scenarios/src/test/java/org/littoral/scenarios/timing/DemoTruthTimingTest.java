@@ -62,8 +62,8 @@ class DemoTruthTimingTest {
                     """, day, DEMO.resolve("coast.yaml"), days.cell(r, days.column("ambient_wind_direction_deg")),
                     days.cell(r, days.column("ambient_wind_speed_m_per_s")),
                     days.cell(r, days.column("land_sea_theta_v_contrast_K")), days.cell(r, days.column("breeze_depth_m"))));
-            CheckTimingResult res = CheckTimingCommand.run(DayFile.read(dayFile), truth, tmp.resolve("out-" + day),
-                    new CheckTimingCommand.Options(null, 2, false, new PrintStream(OutputStream.nullOutputStream()), false),
+            CheckTimingResult res = CheckTimingRun.run(DayFile.read(dayFile), truth, tmp.resolve("out-" + day),
+                    new CheckTimingRun.Options(null, 2, false, new PrintStream(OutputStream.nullOutputStream()), false),
                     Solver.standard());
             assertEquals(0, res.failedMembers(), day);
             checked += (int) res.check().passages().stream().filter(p -> p.passage().label().equals("sea_breeze")).count();

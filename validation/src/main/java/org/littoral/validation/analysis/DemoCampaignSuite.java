@@ -17,7 +17,7 @@ import org.littoral.scenarios.analysis.detect.CampaignSkill;
 import org.littoral.scenarios.analysis.detect.DetectionScore;
 import org.littoral.scenarios.demo.DemoCommand;
 import org.littoral.scenarios.observe.CoastFile;
-import org.littoral.scenarios.observe.ObserveCommand;
+import org.littoral.scenarios.observe.ObserveIngest;
 import org.littoral.scenarios.validate.ValidationCase;
 import org.littoral.scenarios.validate.ValidationSuite;
 
@@ -46,7 +46,7 @@ public final class DemoCampaignSuite implements ValidationSuite {
             Path data = DemoCommand.ensureData(findDemoData(), Files.createTempDirectory("littoral-demo-data"));
             Coast coast = CoastFile.load(data.resolve("coast.yaml").toString());
             AnalysisSettings s = new AnalysisSettings();
-            ObserveCommand.Observed o = ObserveCommand.ingest(data.resolve("binned/profiles-binned.csv.gz"), s);
+            ObserveIngest.Observed o = ObserveIngest.ingest(data.resolve("binned/profiles-binned.csv.gz"), s);
             AnalysisResult r = AnalysisChain.run(o.profiles(), coast, s);
             Map<String, double[]> truth = DemoCommand.readTruth(data.resolve("truth/passages.csv"));
             List<ValidationCase> out = new ArrayList<>();

@@ -64,7 +64,7 @@ public final class NonlinearModelSuite implements ValidationSuite {
         NonlinearConfig c = NonlinearConfig.builder(coast, CanonicalFlows.allWater(293.15), HorizontalGrid.centred(8, 2000.0),
                         VerticalGrid.uniform(5, 2000.0))
                 .forcing(new Forcing.None()).switches(new NonlinearConfig.Switches(true, false, false))
-                .damping(new NonlinearConfig.Damping(0, 0, 0, 300, 0, 600)).solarHours(0, 2.3 * expectedH).outputIntervalS(300)
+                .damping(NonlinearConfig.Damping.none()).solarHours(0, 2.3 * expectedH).outputIntervalS(300)
                 .initialUPerturbation((x, z) -> 1.0).build();
         double period = InertialPeriod.measureHours(NonlinearModel.run(c), 0, 0);
         out.add(ValidationCase.relative("nonlinear.inertial-period-" + (int) lat + "deg",

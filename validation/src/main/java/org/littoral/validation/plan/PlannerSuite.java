@@ -16,7 +16,7 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.littoral.scenarios.plan.CadenceOption;
 import org.littoral.scenarios.plan.DenseWindow;
-import org.littoral.scenarios.plan.PlanCommand;
+import org.littoral.scenarios.plan.PlanRun;
 import org.littoral.scenarios.plan.PlanFile;
 import org.littoral.scenarios.plan.PlanResult;
 import org.littoral.scenarios.plan.PlanSpec;
@@ -102,7 +102,7 @@ public final class PlannerSuite implements ValidationSuite {
     private List<ValidationCase> check(Path dir) throws IOException, InterruptedException {
         PlanSpec plan = PlanFile.parse("planner check", PLAN, null, "planner-check");
         PrintStream quiet = new PrintStream(java.io.OutputStream.nullOutputStream());
-        PlanCommand.PlanOutcome o = PlanCommand.run(plan, "scenario", dir, 2, false, quiet, PRESCRIBED);
+        PlanRun.PlanOutcome o = PlanRun.run(plan, "scenario", dir, 2, false, quiet, PRESCRIBED);
         List<ValidationCase> out = new ArrayList<>();
         List<Member> members = MemberExpander.expand(plan.ensemble());
         ScenarioMemberRunner reader = new ScenarioMemberRunner("planner check", null, PRESCRIBED);

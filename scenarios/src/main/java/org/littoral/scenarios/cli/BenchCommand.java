@@ -1,4 +1,11 @@
-package org.littoral.scenarios.bench;
+package org.littoral.scenarios.cli;
+
+import org.littoral.scenarios.bench.AnalysisBenchmark;
+import org.littoral.scenarios.bench.Benchmark;
+import org.littoral.scenarios.bench.InputFuzzBenchmark;
+import org.littoral.scenarios.bench.LinearBenchmark;
+import org.littoral.scenarios.bench.MemoryEstimateBenchmark;
+import org.littoral.scenarios.bench.NonlinearBenchmark;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
