@@ -20,8 +20,9 @@ import org.littoral.scenarios.bench.Benchmark;
  * The INVENTED campaign in gradual-turn mode (every front's wind turn spread over 20-40 min, so one or two flights
  * fly mid-turn) put through the analysis chain, scored against its answer key: one-front site-days shown as two
  * onshore passages, true passages found within one flight interval, false onshore passages, and bay-then-sea
- * site-days with both passages found. {@code littoral bench gradual-turns} prints the figures with the gradual-turn
- * rule off (the chain as it was) and on.
+ * site-days with both passages found. {@code littoral bench gradual-turns} prints the figures with the rules added one
+ * by one (change points only; the gradual-turn rule; the low layer, drift test and half-way timing), and the demo
+ * campaign's sharp fronts with and without the last ones.
  */
 public final class GradualTurnSkill implements Benchmark {
     public static final double TURN_MINUTES_LO = 20.0;
@@ -95,15 +96,34 @@ public final class GradualTurnSkill implements Benchmark {
         return sum;
     }
 
-    /** The campaigns of {@code seeds} in gradual-turn mode through the chain with the given settings. */
-    public static Figures measure(long[] seeds, boolean gradualTurnRule) {
+    /** Which passage rules run (each row of the benchmark adds rules to the one before). */
+    public enum Rules {
+        /** One passage per change point of the detection layer, midpoint timing (the chain before issue 12). */
+        CHANGE_POINTS,
+        /** + the gradual-turn rule. */
+        GRADUAL_TURNS,
+        /** + the low layer for shallow breezes, the drift test and half-way timing (the defaults). */
+        SHALLOW_LAYER
+    }
+
+    /** The campaigns of {@code seeds} in gradual-turn mode through the chain with the given rules. */
+    public static Figures measure(long[] seeds, Rules rules) {
+        return measure(seeds, rules, TURN_MINUTES_LO, TURN_MINUTES_HI);
+    }
+
+    /** As {@link #measure(long[], Rules)} with other turn durations (0, 0: the demo's sharp fronts). */
+    public static Figures measure(long[] seeds, Rules rules, double turnMinutesLo, double turnMinutesHi) {
         Figures sum = new Figures(0, 0, 0, 0, 0, 0, 0, 0);
         for (long seed : seeds) {
             DemoCampaign c = DemoCampaign.generate(seed);
             AnalysisSettings s = new AnalysisSettings();
-            s.detection.mergeGradualTurns = gradualTurnRule;
+            s.detection.mergeGradualTurns = rules != Rules.CHANGE_POINTS;
+            boolean shallow = rules == Rules.SHALLOW_LAYER;
+            s.detection.useShallowLayer = shallow;
+            s.detection.driftTest = shallow;
+            s.detection.halfTurnTiming = shallow;
             Coast coast = DemoCoast.coast(DemoCampaign.SEASON_START.getDayOfYear() + 35);
-            sum = sum.plus(score(c, AnalysisChain.run(profiles(c, TURN_MINUTES_LO, TURN_MINUTES_HI), coast, s)));
+            sum = sum.plus(score(c, AnalysisChain.run(profiles(c, turnMinutesLo, turnMinutesHi), coast, s)));
         }
         return sum;
     }
@@ -118,7 +138,7 @@ public final class GradualTurnSkill implements Benchmark {
     @Override
     public String description() {
         return "Passage detection on the INVENTED campaign with 20-40 min wind turns (3 seeds): doubled passages, hits, "
-                + "false passages, bay-then-sea separation; gradual-turn rule off and on";
+                + "false passages, bay-then-sea separation; rules added one by one";
     }
 
     @Override
@@ -126,10 +146,12 @@ public final class GradualTurnSkill implements Benchmark {
         long[] seeds = quick ? new long[] {DemoCampaign.DEFAULT_SEED} : BENCH_SEEDS;
         out.println("gradual-turns: " + seeds.length + " invented campaign(s), every wind turn spread over "
                 + (int) TURN_MINUTES_LO + "-" + (int) TURN_MINUTES_HI + " min");
-        Figures off = measure(seeds, false);
-        out.println("  rule off (one passage per change point): " + off.line());
-        Figures on = measure(seeds, true);
-        out.println("  rule on  (one passage per gradual turn): " + on.line());
+        out.println("  change points only (midpoint timing):      " + measure(seeds, Rules.CHANGE_POINTS).line());
+        out.println("  + one passage per gradual turn:            " + measure(seeds, Rules.GRADUAL_TURNS).line());
+        out.println("  + low layer, drift test, half-way timing:  " + measure(seeds, Rules.SHALLOW_LAYER).line());
+        long[] demo = {DemoCampaign.DEFAULT_SEED};
+        out.println("  demo campaign (sharp fronts), gradual-turn rule alone: " + measure(demo, Rules.GRADUAL_TURNS, 0, 0).line());
+        out.println("  demo campaign (sharp fronts), all rules (defaults):    " + measure(demo, Rules.SHALLOW_LAYER, 0, 0).line());
         out.println("  targets: doubled <= 3 %, hits >= 95 %, false <= 5 %, bay-then-sea separated >= 90 %");
         return 0;
     }

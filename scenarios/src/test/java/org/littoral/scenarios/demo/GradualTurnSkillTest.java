@@ -11,8 +11,9 @@ import org.junit.jupiter.api.Test;
  */
 class GradualTurnSkillTest {
     static final long[] SEED = {DemoCampaign.DEFAULT_SEED};
-    static final GradualTurnSkill.Figures OFF = GradualTurnSkill.measure(SEED, false);
-    static final GradualTurnSkill.Figures ON = GradualTurnSkill.measure(SEED, true);
+    static final GradualTurnSkill.Figures OFF = GradualTurnSkill.measure(SEED, GradualTurnSkill.Rules.CHANGE_POINTS);
+    static final GradualTurnSkill.Figures ON = GradualTurnSkill.measure(SEED, GradualTurnSkill.Rules.GRADUAL_TURNS);
+    static final GradualTurnSkill.Figures ALL = GradualTurnSkill.measure(SEED, GradualTurnSkill.Rules.SHALLOW_LAYER);
 
     @Test
     void withoutTheRuleGradualTurnsAreOftenShownAsTwoOnshorePassages() {
@@ -34,6 +35,26 @@ class GradualTurnSkillTest {
     void theRuleCutsFalseOnshorePassagesAndKeepsBayThenSeaDaysSeparated() {
         assertTrue(ON.falseFraction() <= 0.05 && ON.falseFraction() < OFF.falseFraction(), "off: " + OFF.line() + "\non: " + ON.line());
         assertTrue(ON.separated() >= OFF.separated(), "off: " + OFF.line() + "\non: " + ON.line());
+    }
+
+    @Test
+    void withTheLowLayerTheShallowBayBreezesAreFoundAndTheTargetsOfIssue12AreMet() {
+        // targets of the issue: doubled <= 3 %, hits >= 95 %, false <= 5 %, bay-then-sea separated >= 90 %
+        assertTrue(ALL.doubledFraction() <= 0.03, ALL.line());
+        assertTrue(ALL.hitRate() >= 0.95, ALL.line());
+        assertTrue(ALL.falseFraction() <= 0.05, ALL.line());
+        assertTrue(ALL.separatedFraction() >= 0.90, ALL.line());
+        assertTrue(ALL.separated() > ON.separated(), "gradual rule alone: " + ON.line() + "\nall: " + ALL.line());
+    }
+
+    @Test
+    void theLowLayerDoesNotCostTheDemoCampaignsSharpFrontsAnything() {
+        long[] demo = {DemoCampaign.DEFAULT_SEED};
+        GradualTurnSkill.Figures before = GradualTurnSkill.measure(demo, GradualTurnSkill.Rules.GRADUAL_TURNS, 0, 0);
+        GradualTurnSkill.Figures after = GradualTurnSkill.measure(demo, GradualTurnSkill.Rules.SHALLOW_LAYER, 0, 0);
+        assertTrue(after.hits() >= before.hits() && after.falsePassages() <= before.falsePassages()
+                && after.doubled() <= before.doubled() && after.separated() >= before.separated(),
+                "before: " + before.line() + "\nafter: " + after.line());
     }
 
     @Test

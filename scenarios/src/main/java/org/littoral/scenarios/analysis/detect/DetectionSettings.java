@@ -83,6 +83,27 @@ public final class DetectionSettings {
     /** Turns smaller than this (deg) between the states do not count as turning back. Default 10. */
     public double turnBackToleranceDeg = 10.0;
 
+    /**
+     * Search the low layer too (docs/analysis.md, "Shallow breezes"): a change that turns the wind of
+     * {@link #shallowWindLayer} into the onshore sector is an onshore passage even when the deeper detection layer
+     * does not turn onshore (a shallow bay or lake breeze). Default on.
+     */
+    public boolean useShallowLayer = true;
+    /** The low layer, m above ground. Default 30-130 m: above the take-off bins, inside a 150-250 m deep bay breeze. */
+    public Layer shallowWindLayer = new Layer(30, 130);
+    /**
+     * A second onshore passage that only strengthens onshore flow must be a step, not a drift: when one straight line in
+     * time fits the layer wind of the two segments as well as the step does (Schwarz 1978 BIC), it is the breeze turning
+     * steadily (Haurwitz 1947), labelled OTHER. Default on (with {@link #mergeGradualTurns}).
+     */
+    public boolean driftTest = true;
+    /**
+     * Time an onshore passage when the layer's onshore wind component is half way from its value before the change to
+     * its value after it (linear between the two flights around the change), in the lowest layer that turns onshore.
+     * Default on; off: the midpoint between the two flights.
+     */
+    public boolean halfTurnTiming = true;
+
     public DetectionSettings validate() {
         if (minSegmentProfiles < 1) {
             throw new UserInputException("detection.minSegmentProfiles = " + minSegmentProfiles + " must be >= 1 (default 2)");

@@ -3,8 +3,9 @@ package org.littoral.scenarios.analysis.detect;
 import java.util.List;
 
 /**
- * One detected passage at a site on a day. Time convention: midpoint between the last profile
- * before and the first profile after the change (of the wind-shift detector when it found it).
+ * One detected passage at a site on a day. Time convention (docs/analysis.md): between the last profile before and
+ * the first profile after the change; an onshore passage when the onshore wind component is half way from its value
+ * before to its value after (in the low layer when that turned onshore too), other changes at the midpoint.
  *
  * @param ordinal            1, 2, ... in time order within the site-day
  * @param timeHours          local clock hours
@@ -13,7 +14,8 @@ import java.util.List;
  * @param detectors          names of the detectors that found it
  * @param lastBefore         site-day index of the last profile before
  * @param firstAfter         site-day index of the first profile after
- * @param windBefore         mean wind {east, north} (m/s) of the detection layer between the previous change and this one
+ * @param windBefore         mean wind {east, north} (m/s) of the detection layer (of the low layer for a shallow onshore
+ *                           passage) between the previous change and this one
  * @param windAfter          the same between this change and the next one
  * @param crossShoreBeforeMPerS onshore-positive component before; after likewise
  * @param kind               onshore-sector label

@@ -97,6 +97,10 @@ public final class PassageFinder {
                 kept.add(clusters.get(i));
             }
         }
+        double[][] low = s.useShallowLayer ? windSeries(sd, s.shallowWindLayer, s.minValidFraction) : null;
+        if (low != null) {
+            addShallowOnshoreTurns(sd, coast, s, low, kept, notes);
+        }
         // Groups of kept changes [first, last]: one per change, or several changes of one gradual turn.
         List<int[]> groups = new ArrayList<>();
         for (int i = 0; i < kept.size(); i++) {
@@ -131,13 +135,59 @@ public final class PassageFinder {
             boolean inB = inOnshoreSector(ba[0][0], ba[0][1], coast, s);
             boolean inA = inOnshoreSector(ba[1][0], ba[1][1], coast, s);
             PassageKind kind = kindOf(inB, inA, cb, ca);
+            ChangeCandidate lowTurn = null;
+            for (int i = groups.get(g)[0]; i <= groups.get(g)[1] && lowTurn == null; i++) {
+                lowTurn = kept.get(i).lowOnshore;
+            }
+            if (lowTurn != null && !kind.onshore()) {
+                // a shallow breeze: the low layer turns onshore, the detection layer above it does not (or not yet)
+                int from = g == 0 ? 0 : kept.get(groups.get(g - 1)[1]).anchor.firstAfter();
+                int to = g == groups.size() - 1 ? sd.size() - 1 : kept.get(groups.get(g + 1)[0]).anchor.lastBefore();
+                double[][] lba = {meanWind(low, from, lowTurn.lastBefore()), meanWind(low, lowTurn.firstAfter(), to)};
+                notes.add(String.format(java.util.Locale.ROOT, "%s: change at %.2f h turns the %s wind onshore (%.0f -> %.0f deg) "
+                        + "while the %s wind does not (%.0f -> %.0f deg): a shallow onshore passage", sd.key(), lowTurn.timeHours(),
+                        s.shallowWindLayer.label(), Coast.directionFromDeg(lba[0][0], lba[0][1]), Coast.directionFromDeg(lba[1][0], lba[1][1]),
+                        s.windLayer.label(), Coast.directionFromDeg(ba[0][0], ba[0][1]), Coast.directionFromDeg(ba[1][0], ba[1][1])));
+                ba = lba;
+                cb = coast.crossShore(ba[0][0], ba[0][1]);
+                ca = coast.crossShore(ba[1][0], ba[1][1]);
+                kind = PassageKind.INTO_ONSHORE;
+                time = s.halfTurnTiming ? halfTurnTime(sd, low, coast, lowTurn.lastBefore(), lowTurn.firstAfter(), 0.5 * (cb + ca),
+                        lowTurn.timeHours()) : lowTurn.timeHours();
+                unc = Math.max(unc, lowTurn.uncertaintyHours());
+                names.add(lowTurn.detector());
+            } else if (kind.onshore() && first == last && s.halfTurnTiming) {
+                // one change: the passage is when the onshore component is half way from its before to its after value
+                time = halfTurnTime(sd, wind, coast, first.anchor.lastBefore(), first.anchor.firstAfter(), 0.5 * (cb + ca), time);
+                if (lowTurn != null) {
+                    // the low layer turned onshore too: time the passage there, nearer the front's arrival at the ground
+                    // (the head of a density current leans back, so its upper part arrives later)
+                    int from = g == 0 ? 0 : kept.get(groups.get(g - 1)[1]).anchor.firstAfter();
+                    int to = g == groups.size() - 1 ? sd.size() - 1 : kept.get(groups.get(g + 1)[0]).anchor.lastBefore();
+                    double lcb = coast.crossShore(meanWind(low, from, lowTurn.lastBefore())[0], meanWind(low, from, lowTurn.lastBefore())[1]);
+                    double lca = coast.crossShore(meanWind(low, lowTurn.firstAfter(), to)[0], meanWind(low, lowTurn.firstAfter(), to)[1]);
+                    double lowTime = halfTurnTime(sd, low, coast, lowTurn.lastBefore(), lowTurn.firstAfter(), 0.5 * (lcb + lca),
+                            lowTurn.timeHours());
+                    unc = Math.max(unc, Math.abs(lowTime - time));
+                    time = lowTime;
+                    names.add(lowTurn.detector());
+                }
+            }
             if (s.mergeGradualTurns && kind == PassageKind.ONSHORE_STRENGTHENING && out.stream().anyMatch(Passage::turnsOnshore)) {
                 // A second onshore passage needs a shift of its own: the wind turns towards onshore by
                 // strengtheningMinTurnDeg or the onshore component rises by strengtheningMinGainMPerS; a veer or a speed
                 // change inside onshore flow that has already arrived is not a new front.
                 double offB = Math.abs(signedTurnDeg(coast.bearingLandToSeaDeg(), Coast.directionFromDeg(ba[0][0], ba[0][1])));
                 double offA = Math.abs(signedTurnDeg(coast.bearingLandToSeaDeg(), Coast.directionFromDeg(ba[1][0], ba[1][1])));
-                if (offB - offA < s.strengtheningMinTurnDeg && ca - cb < s.strengtheningMinGainMPerS) {
+                int from = g == 0 ? 0 : kept.get(groups.get(g - 1)[1]).anchor.firstAfter();
+                int to = g == groups.size() - 1 ? sd.size() - 1 : kept.get(groups.get(g + 1)[0]).anchor.lastBefore();
+                if (s.driftTest && driftFitsAsWell(sd.timeHours(), wind, from, first.anchor.lastBefore(), last.anchor.firstAfter(), to,
+                        noiseSd(wind, s.windSdFloorMPerS))) {
+                    notes.add(String.format(java.util.Locale.ROOT, "%s: change at %.2f h inside onshore flow (%.0f -> %.0f deg) is a "
+                            + "steady turn, not a step (a straight line in time fits as well): labelled OTHER", sd.key(), time,
+                            Coast.directionFromDeg(ba[0][0], ba[0][1]), Coast.directionFromDeg(ba[1][0], ba[1][1])));
+                    kind = PassageKind.OTHER;
+                } else if (offB - offA < s.strengtheningMinTurnDeg && ca - cb < s.strengtheningMinGainMPerS) {
                     notes.add(String.format(java.util.Locale.ROOT, "%s: change at %.2f h inside onshore flow (%.0f -> %.0f deg, "
                             + "onshore wind %+.1f m/s) is not a second front: labelled OTHER", sd.key(), time,
                             Coast.directionFromDeg(ba[0][0], ba[0][1]), Coast.directionFromDeg(ba[1][0], ba[1][1]), ca - cb));
@@ -145,7 +195,8 @@ public final class PassageFinder {
                 }
             }
             out.add(new Passage(sd.site(), sd.day(), g + 1, time, unc,
-                    Math.min(1.0, (double) names.size() / detectors.size()), new ArrayList<>(names), first.anchor.lastBefore(),
+                    Math.min(1.0, (double) names.stream().map(PassageFinder::family).distinct().count() / detectors.size()),
+                    new ArrayList<>(names), first.anchor.lastBefore(),
                     last.anchor.firstAfter(), ba[0], ba[1], cb, ca, Coast.directionFromDeg(ba[0][0], ba[0][1]),
                     Coast.directionFromDeg(ba[1][0], ba[1][1]), kind));
         }
@@ -208,6 +259,14 @@ public final class PassageFinder {
         }
     }
 
+    /** The wind-shift detector on the low layer is the same detector: it adds no agreement of its own to the confidence. */
+    private static String family(String detector) {
+        return detector.equals(LOW_LAYER_DETECTOR) ? "pelt-wind" : detector;
+    }
+
+    /** Name of the wind-shift detector on the low layer, as it appears in the passages' detectors column. */
+    public static final String LOW_LAYER_DETECTOR = "pelt-wind-low";
+
     /** Signed turn from direction a to b, degrees in (-180, 180] (positive clockwise, veering). */
     public static double signedTurnDeg(double a, double b) {
         double d = (b - a) % 360.0;
@@ -258,15 +317,129 @@ public final class PassageFinder {
         return Math.toDegrees(Math.atan2(Math.abs(along), cross)) <= s.onshoreHalfWidthDeg;
     }
 
+    /** The wind-shift detector's noise scale: the larger robust scale of the two components, at least the floor. */
+    private static double noiseSd(double[][] w, double floor) {
+        double sd = floor;
+        for (double[] c : w) {
+            double[] f = java.util.Arrays.stream(c).filter(Double::isFinite).toArray();
+            double r = RobustScale.noiseSdFromDifferences(f);
+            if (r > sd) {
+                sd = r;
+            }
+        }
+        return sd;
+    }
+
     private static double[][] windSeries(SiteDay sd, DetectionSettings s) {
+        return windSeries(sd, s.windLayer, s.minValidFraction);
+    }
+
+    private static double[][] windSeries(SiteDay sd, org.littoral.scenarios.analysis.Layer layer, double minValid) {
         int n = sd.size();
         double[][] w = new double[2][n];
         for (int i = 0; i < n; i++) {
             Profile p = sd.profiles().get(i);
-            w[0][i] = LayerMeans.mean(p, p.windEastMPerS(), s.windLayer, s.minValidFraction);
-            w[1][i] = LayerMeans.mean(p, p.windNorthMPerS(), s.windLayer, s.minValidFraction);
+            w[0][i] = LayerMeans.mean(p, p.windEastMPerS(), layer, minValid);
+            w[1][i] = LayerMeans.mean(p, p.windNorthMPerS(), layer, minValid);
         }
         return w;
+    }
+
+    /**
+     * The wind-shift detector on the low layer: its changes that turn the low-layer wind into the onshore sector (from
+     * outside it, by at least the minimum vector change) are attached to the detection-layer change they match, or become
+     * changes of their own; the rest of the low layer's changes are ignored (the detection layer speaks for them).
+     */
+    private static void addShallowOnshoreTurns(SiteDay sd, Coast coast, DetectionSettings s, double[][] low, List<Cluster> kept,
+                                               List<String> notes) {
+        List<ChangeCandidate> lc = new WindShiftDetector(s, s.shallowWindLayer, LOW_LAYER_DETECTOR).detect(sd, coast);
+        int n = sd.size();
+        List<Cluster> added = new ArrayList<>();
+        for (int i = 0; i < lc.size(); i++) {
+            ChangeCandidate c = lc.get(i);
+            int from = i == 0 ? 0 : lc.get(i - 1).firstAfter();
+            int to = i == lc.size() - 1 ? n - 1 : lc.get(i + 1).lastBefore();
+            double[] b = meanWind(low, from, c.lastBefore());
+            double[] a = meanWind(low, c.firstAfter(), to);
+            if (!(Math.hypot(a[0] - b[0], a[1] - b[1]) >= s.minVectorChangeMPerS)
+                    || inOnshoreSector(b[0], b[1], coast, s) || !inOnshoreSector(a[0], a[1], coast, s)) {
+                continue;
+            }
+            Cluster best = null;
+            double bestDt = Double.POSITIVE_INFINITY;
+            for (Cluster k : kept) {
+                double dt = Math.abs(k.anchor.timeHours() - c.timeHours());
+                if (dt <= Math.max(k.anchor.uncertaintyHours() + c.uncertaintyHours(), s.matchMinHours) && dt < bestDt) {
+                    best = k;
+                    bestDt = dt;
+                }
+            }
+            if (best != null) {
+                if (best.lowOnshore == null) {
+                    best.lowOnshore = c;
+                }
+            } else {
+                Cluster own = new Cluster(c);
+                own.lowOnshore = c;
+                added.add(own);
+            }
+        }
+        kept.addAll(added);
+        kept.sort(Comparator.comparingDouble(k -> k.anchor.timeHours()));
+    }
+
+    /**
+     * True when one straight line in time fits the layer wind of profiles from..to as well as the step between
+     * lastBefore and firstAfter does, by Schwarz's (1978) BIC with the noise scale sd known: the step has one more
+     * parameter (its location) per change and two means where the line has an intercept and a slope per component, so
+     * the line wins when its extra squared misfit, in units of sd^2, is at most ln n (n profiles used).
+     */
+    static boolean driftFitsAsWell(double[] t, double[][] w, int from, int lastBefore, int firstAfter, int to, double sd) {
+        double rssStep = 0;
+        double rssLine = 0;
+        int used = 0;
+        for (int c = 0; c < 2; c++) {
+            double[] mean = new double[2];
+            int[] cnt = new int[2];
+            double st = 0;
+            double sy = 0;
+            double stt = 0;
+            double sty = 0;
+            int m = 0;
+            for (int i = from; i <= to; i++) {
+                double y = w[c][i];
+                if (Double.isNaN(y) || i > lastBefore && i < firstAfter) {
+                    continue;
+                }
+                int side = i <= lastBefore ? 0 : 1;
+                mean[side] += y;
+                cnt[side]++;
+                st += t[i];
+                sy += y;
+                stt += t[i] * t[i];
+                sty += t[i] * y;
+                m++;
+            }
+            if (cnt[0] < 2 || cnt[1] < 2) {
+                return false;
+            }
+            mean[0] /= cnt[0];
+            mean[1] /= cnt[1];
+            double slope = (m * sty - st * sy) / (m * stt - st * st);
+            double icept = (sy - slope * st) / m;
+            for (int i = from; i <= to; i++) {
+                double y = w[c][i];
+                if (Double.isNaN(y) || i > lastBefore && i < firstAfter) {
+                    continue;
+                }
+                double ds = y - mean[i <= lastBefore ? 0 : 1];
+                double dl = y - (icept + slope * t[i]);
+                rssStep += ds * ds;
+                rssLine += dl * dl;
+            }
+            used = Math.max(used, m);
+        }
+        return (rssLine - rssStep) / (sd * sd) <= Math.log(used);
     }
 
     /** Mean wind {east, north} before and after cluster i, bounded by its neighbours. */
@@ -293,6 +466,8 @@ public final class PassageFinder {
 
     private static final class Cluster {
         final ChangeCandidate anchor;
+        /** A low-layer change at the same time that turns the low-layer wind onshore, or null. */
+        ChangeCandidate lowOnshore;
         final List<ChangeCandidate> members = new ArrayList<>();
 
         Cluster(ChangeCandidate anchor) {

@@ -21,14 +21,23 @@ public final class WindShiftDetector implements PassageDetector {
     public enum Representation { COMPONENTS, UNIT_VECTOR }
 
     private final DetectionSettings s;
+    private final org.littoral.scenarios.analysis.Layer layer;
+    private final String name;
 
     public WindShiftDetector(DetectionSettings settings) {
+        this(settings, settings.windLayer, "pelt-wind");
+    }
+
+    /** The same detector on another layer (the low layer of shallow breezes), under its own name. */
+    public WindShiftDetector(DetectionSettings settings, org.littoral.scenarios.analysis.Layer layer, String name) {
         this.s = settings;
+        this.layer = layer;
+        this.name = name;
     }
 
     @Override
     public String name() {
-        return "pelt-wind";
+        return name;
     }
 
     @Override
@@ -40,8 +49,8 @@ public final class WindShiftDetector implements PassageDetector {
         int m = 0;
         for (int i = 0; i < n; i++) {
             Profile p = sd.profiles().get(i);
-            double e = LayerMeans.mean(p, p.windEastMPerS(), s.windLayer, s.minValidFraction);
-            double no = LayerMeans.mean(p, p.windNorthMPerS(), s.windLayer, s.minValidFraction);
+            double e = LayerMeans.mean(p, p.windEastMPerS(), layer, s.minValidFraction);
+            double no = LayerMeans.mean(p, p.windNorthMPerS(), layer, s.minValidFraction);
             if (Double.isNaN(e) || Double.isNaN(no)) {
                 continue;
             }
