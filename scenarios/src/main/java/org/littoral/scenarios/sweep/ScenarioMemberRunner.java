@@ -128,6 +128,9 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
             dir = !scratch ? runsDir.resolve(m.id())
                     : scratchRoot != null ? scratchRoot.resolve(m.id()) : Files.createTempDirectory("littoral-member-");
             Files.createDirectories(dir);
+            if (!scratch) {
+                clearLeftoverTemps(dir);
+            }
             ScenarioRun.Outcome o = new ScenarioRun(s, solver, null).figures(false).checkMemory(false).fieldsNetcdf(fieldsNetcdf)
                     .command("sweep " + sweepSource + " member " + m.id()).run(dir);
             return new MemberResult(trim(o.summary()));
@@ -152,6 +155,19 @@ public final class ScenarioMemberRunner implements Function<Member, MemberResult
             ((ObjectNode) out.get("diagnostics")).remove("definitions");
         }
         return out;
+    }
+
+    /**
+     * Removes the temporary files a killed run of this member left in its run folder (an interrupted write of
+     * soundings.nc, say), so that the member's run files are exactly those of one complete run.
+     */
+    private static void clearLeftoverTemps(Path dir) throws IOException {
+        try (java.nio.file.DirectoryStream<Path> ds = Files.newDirectoryStream(dir,
+                ".*" + org.littoral.scenarios.output.AtomicFile.TMP_SUFFIX)) {
+            for (Path p : ds) {
+                Files.deleteIfExists(p);
+            }
+        }
     }
 
     private static void deleteTree(Path dir) {

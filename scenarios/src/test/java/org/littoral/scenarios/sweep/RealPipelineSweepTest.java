@@ -56,6 +56,20 @@ class RealPipelineSweepTest {
         assertEquals(List.of("pure", "pure", "synoptic", "synoptic"), t.texts("breeze_type"));
     }
 
+    @Test
+    void aMemberRunAgainLeavesNoTemporaryFileOfAKilledEarlierRunInItsRunFolder() throws Exception {
+        SweepSpec spec = SweepFile.parse("test", (ObjectNode) ScenarioSource.yaml().readTree(SWEEP), null,
+                ScenarioMemberRunner.scenarioSource(), "real");
+        Member m = MemberExpander.expand(spec).get(0);
+        Path runs = tmp.resolve("runs");
+        // what a task cancelled while writing soundings.nc leaves behind
+        Path leftover = Files.createDirectories(runs.resolve(m.id())).resolve(".soundings.nc.8472194596.tmp");
+        Files.writeString(leftover, "half a file");
+        new ScenarioMemberRunner(spec.source(), runs, s -> LinearBreezeModel.solve(s.toLinearConfig())).apply(m);
+        assertTrue(Files.exists(runs.resolve(m.id()).resolve("soundings.nc")));
+        assertTrue(!Files.exists(leftover), "the leftover is removed when the member runs again");
+    }
+
     private static String firstError(Path dir, List<Member> members) {
         try {
             return new MemberStore(dir).read(members.get(0).id()).path("error").asText();
