@@ -5,7 +5,7 @@ import org.littoral.model.mixedlayer.SlabMixedLayer;
 
 /**
  * Slab mixed-layer depth h(x, t) per column: zero-order-jump growth d(h^2)/dt = 2 (1 + 2A) H_kin / gamma
- * (Tennekes 1973) while the surface heats, upwind advection by the layer-mean cross-shore wind, collapse to
+ * (Tennekes 1973) while the surface heats, upwind advection by the surface-layer cross-shore wind, collapse to
  * the night depth when the heat flux turns negative; the marine layer over water keeps at least its
  * configured depth.
  */
@@ -47,14 +47,27 @@ final class MixedLayerDepth {
         return land[i] ? cfg.boundaryLayer().initialDepthM() : cfg.boundaryLayer().marineDepthM();
     }
 
-    /** One step of every column: advection dh/dt = -u_ml dh/dx (first-order upwind, monotone), then growth. */
+    /** Fraction of the depth whose mean wind carries it: the surface layer, the lowest tenth (common practice). */
+    static final double CARRIER_FRACTION = 0.1;
+
+    /**
+     * One step of every column: advection dh/dt = -u_s dh/dx (first-order upwind, monotone), then growth. The depth
+     * is carried by u_s, the mean cross-shore wind of the surface layer (the lowest tenth of h, at least the lowest
+     * model layer), not by the mean over the whole layer: where marine air runs inland under the land's convective
+     * layer behind a breeze front, the mean over 0..h mixes that onshore flow with the offshore return flow above it
+     * and is near zero, so the land's deep layer stayed in place over the marine air and mixed it through 1.5 km.
+     * Carried by the air near the ground, the depth behind the front is the thermal internal boundary layer of the
+     * marine air, growing inland from the marine-layer depth by the surface heat flux (Venkatram 1977; Garratt 1990;
+     * from memory). Over uniform ground h is uniform and the carrier does not matter.
+     */
     void step(double[] heatFluxKin, double dt) {
         double[] u = st.u;
         for (int i = 0; i < nx; i++) {
             double hu = 0;
             double wsum = 0;
-            for (int k = 0; k < nz && g.zf[k] < h[i]; k++) {
-                double dz = Math.min(g.zf[k + 1], h[i]) - g.zf[k];
+            double top = Math.max(g.zf[1], CARRIER_FRACTION * h[i]);
+            for (int k = 0; k < nz && g.zf[k] < top; k++) {
+                double dz = Math.min(g.zf[k + 1], top) - g.zf[k];
                 hu += 0.5 * (u[k * nx + i] + u[k * nx + g.ip1[i]]) * dz;
                 wsum += dz;
             }
