@@ -21,7 +21,7 @@ import org.littoral.scenarios.analysis.Variable;
 import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.analysis.stats.BreezeType;
 import org.littoral.scenarios.input.UserInputException;
-import org.littoral.scenarios.run.BreezeDiagnostics;
+import org.littoral.model.front.BreezeDiagnostics;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.scenario.Scenario;
 

@@ -7,7 +7,7 @@ import org.littoral.model.coast.SurfaceMap;
 import org.littoral.model.field.BreezeSolution;
 import org.littoral.model.field.Snapshot;
 import org.littoral.scenarios.output.AtomicFile;
-import org.littoral.scenarios.run.FarFieldSolution;
+import org.littoral.model.front.FarFieldSolution;
 import ucar.ma2.Array;
 import ucar.ma2.ArrayFloat;
 import ucar.ma2.ArrayByte;

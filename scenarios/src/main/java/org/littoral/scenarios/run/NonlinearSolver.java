@@ -1,5 +1,7 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FarFieldSolution;
+
 import java.util.Locale;
 import org.littoral.model.nonlinear.ModelBlowUpException;
 import org.littoral.model.nonlinear.NonlinearConfig;

@@ -1,5 +1,7 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FieldSections;
+
 import java.util.List;
 import java.util.Locale;
 import org.littoral.model.sounding.Profile;

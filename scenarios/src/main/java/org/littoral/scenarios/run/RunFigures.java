@@ -1,5 +1,9 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FieldSections;
+
+import org.littoral.model.front.BreezeDiagnostics;
+
 import java.awt.Color;
 import java.io.IOException;
 import java.nio.file.Path;

@@ -1,5 +1,11 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FarFieldSolution;
+
+import org.littoral.model.front.FieldSections;
+
+import org.littoral.model.front.BreezeDiagnostics;
+
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;

@@ -1,5 +1,7 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FarFieldSolution;
+
 import org.littoral.model.nonlinear.ModelBlowUpException;
 import org.littoral.scenarios.input.UserInputException;
 

@@ -1,5 +1,7 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FieldSections;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;

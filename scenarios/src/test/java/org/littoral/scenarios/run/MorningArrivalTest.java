@@ -1,5 +1,9 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FarFieldSolution;
+
+import org.littoral.model.front.BreezeDiagnostics;
+
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;

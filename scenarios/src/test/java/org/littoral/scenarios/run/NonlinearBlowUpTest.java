@@ -1,5 +1,7 @@
 package org.littoral.scenarios.run;
 
+import org.littoral.model.front.FarFieldSolution;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -15,7 +15,7 @@ import org.littoral.scenarios.analysis.SiteDayResult;
 import org.littoral.scenarios.analysis.detect.Passage;
 import org.littoral.scenarios.compare.Angles;
 import org.littoral.scenarios.compare.Comparison;
-import org.littoral.scenarios.run.BreezeDiagnostics;
+import org.littoral.model.front.BreezeDiagnostics;
 import org.littoral.scenarios.run.ScenarioRun;
 import org.littoral.scenarios.run.Solver;
 import org.littoral.scenarios.scenario.BuiltinScenarios;

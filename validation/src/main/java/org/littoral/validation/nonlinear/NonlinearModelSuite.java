@@ -12,9 +12,9 @@ import org.littoral.model.nonlinear.InertialPeriod;
 import org.littoral.model.nonlinear.NonlinearConfig;
 import org.littoral.model.nonlinear.NonlinearModel;
 import org.littoral.model.nonlinear.NonlinearSolution;
-import org.littoral.scenarios.run.BreezeDiagnostics;
-import org.littoral.scenarios.run.FarFieldSolution;
-import org.littoral.scenarios.run.FieldSections;
+import org.littoral.model.front.BreezeDiagnostics;
+import org.littoral.model.front.FarFieldSolution;
+import org.littoral.model.front.FieldSections;
 import org.littoral.scenarios.validate.ValidationCase;
 import org.littoral.scenarios.validate.ValidationSuite;
 

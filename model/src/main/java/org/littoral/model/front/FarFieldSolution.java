@@ -1,4 +1,4 @@
-package org.littoral.scenarios.run;
+package org.littoral.model.front;
 
 import java.util.Arrays;
 import org.littoral.model.field.Background;
@@ -32,7 +32,7 @@ public final class FarFieldSolution implements BreezeSolution {
      * @param spongeM width of the far-field sponge at each end of the run's domain; the interior used by
      *        the diagnostics keeps another {@link #MARGIN_M} clear of it
      */
-    FarFieldSolution(NonlinearSolution run, double spongeM) {
+    public FarFieldSolution(NonlinearSolution run, double spongeM) {
         this.run = run;
         double[] x = run.xM();
         double dx = x[1] - x[0];

@@ -1,4 +1,4 @@
-package org.littoral.scenarios.run;
+package org.littoral.model.front;
 
 import java.util.ArrayList;
 import java.util.List;
