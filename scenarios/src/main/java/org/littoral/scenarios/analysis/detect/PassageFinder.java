@@ -110,6 +110,7 @@ public final class PassageFinder {
             mergeGradualTurns(groups, kept, wind, sd, coast, s, notes);
         }
         List<Passage> out = new ArrayList<>();
+        boolean shallowOnshoreBefore = false; // an earlier passage brought onshore flow to the low layer only
         for (int g = 0; g < groups.size(); g++) {
             Cluster first = kept.get(groups.get(g)[0]);
             Cluster last = kept.get(groups.get(g)[1]);
@@ -152,6 +153,7 @@ public final class PassageFinder {
                 cb = coast.crossShore(ba[0][0], ba[0][1]);
                 ca = coast.crossShore(ba[1][0], ba[1][1]);
                 kind = PassageKind.INTO_ONSHORE;
+                shallowOnshoreBefore = true;
                 time = s.halfTurnTiming ? halfTurnTime(sd, low, coast, lowTurn.lastBefore(), lowTurn.firstAfter(), 0.5 * (cb + ca),
                         lowTurn.timeHours()) : lowTurn.timeHours();
                 unc = Math.max(unc, lowTurn.uncertaintyHours());
@@ -171,6 +173,15 @@ public final class PassageFinder {
                     unc = Math.max(unc, Math.abs(lowTime - time));
                     time = lowTime;
                     names.add(lowTurn.detector());
+                }
+            }
+            if (kind == PassageKind.INTO_ONSHORE && shallowOnshoreBefore && lowTurn == null) {
+                // the detection layer turns onshore above low-layer onshore flow that arrived earlier (a bay breeze): the
+                // sea breeze after it strengthens onshore flow, as when both layers see both breezes
+                int from = g == 0 ? 0 : kept.get(groups.get(g - 1)[1]).anchor.firstAfter();
+                double[] lowBefore = meanWind(low, from, first.anchor.lastBefore());
+                if (inOnshoreSector(lowBefore[0], lowBefore[1], coast, s)) {
+                    kind = PassageKind.ONSHORE_STRENGTHENING;
                 }
             }
             if (s.mergeGradualTurns && kind == PassageKind.ONSHORE_STRENGTHENING && out.stream().anyMatch(Passage::turnsOnshore)) {

@@ -25,6 +25,11 @@ class ShallowBreezeTest {
      * {@code shallowAt} an onshore layer (from 100 deg, 3 m/s) below {@code depthM}, with a smooth top 30 m thick.
      */
     static SiteDay shallowBreezeDay(double shallowAt, double depthM, long seed) {
+        return shallowBreezeDay(shallowAt, depthM, Double.NaN, seed);
+    }
+
+    /** As above, and from {@code deepAt} (NaN: never) onshore wind (from 90 deg, 5 m/s) through the whole column. */
+    static SiteDay shallowBreezeDay(double shallowAt, double depthM, double deepAt, long seed) {
         Random r = new Random(seed);
         List<Profile> l = new ArrayList<>();
         for (double t = 8; t <= 18 + 1e-9; t += 0.25) {
@@ -47,6 +52,11 @@ class ShallowBreezeTest {
                 double w = t > shallowAt ? 0.5 * (1 - Math.tanh((z[k] - depthM) / 30.0)) : 0.0;
                 u[k] = (1 - w) * off[0] + w * on[0] + ne;
                 v[k] = (1 - w) * off[1] + w * on[1] + nn;
+                if (t > deepAt) {
+                    double[] sea = Coast.eastNorthFromDirection(5, 90);
+                    u[k] = sea[0] + ne;
+                    v[k] = sea[1] + nn;
+                }
             }
             l.add(Profile.fromState("A", "d", t, z, p, temp, mr, u, v));
         }
@@ -67,6 +77,18 @@ class ShallowBreezeTest {
         assertTrue(p.detectors().contains(PassageFinder.LOW_LAYER_DETECTOR), p.detectors().toString());
         assertTrue(Math.abs(p.timeHours() - 10.1) <= 0.25, "within one 15-min flight interval of 10:06: " + p.timeHours());
         assertTrue(p.crossShoreAfterMPerS() > 2.0, "the low layer's winds describe it: " + p.crossShoreAfterMPerS());
+    }
+
+    @Test
+    void aDeepSeaBreezeAfterAShallowBayBreezeStrengthensOnshoreFlow() {
+        // the deep turn at 13:06 finds low-layer onshore flow already there: bay breeze, then sea breeze
+        DetectionSettings s = new DetectionSettings();
+        SiteDay sd = shallowBreezeDay(10.1, 180, 13.1, 5);
+        List<Passage> on = onshore(PassageFinder.find(sd, COAST, PassageFinder.detectors(s), s));
+        assertEquals(2, on.size(), on.toString());
+        assertEquals(PassageKind.INTO_ONSHORE, on.get(0).kind());
+        assertEquals(PassageKind.ONSHORE_STRENGTHENING, on.get(1).kind());
+        assertTrue(Math.abs(on.get(1).timeHours() - 13.1) <= 0.25, "sea breeze at " + on.get(1).timeHours());
     }
 
     @Test
