@@ -29,7 +29,8 @@ final class CheckTimingOutputs {
 
     record Inputs(DaySpec spec, Path passagesFile, PassageTable.Read observed, String model, double[] xM, List<double[]> arrivals,
                   List<Double> onsets, List<TimingInputs.ArrivalEnvelope> envelopes, TimingCheck.Result check, double[] speed,
-                  List<String> notes, SweepExecutor.Outcome outcome, double wallSeconds) {
+                  List<String> notes, SweepExecutor.Outcome outcome, double wallSeconds,
+                  org.littoral.scenarios.sensitivity.ConditionsFit.Fit explanation) {
     }
 
     static CheckTimingResult write(Path dir, Inputs in) throws IOException {
@@ -46,7 +47,13 @@ final class CheckTimingOutputs {
         Path png = dir.resolve(FIGURE);
         fig.writePng(png);
         Path summary = dir.resolve("summary.json");
-        TableWriter.writeJsonValue(summary(spec, in, flags, envelope), summary);
+        ObjectNode sj = summary(spec, in, flags, envelope);
+        if (in.explanation() != null) {
+            sj.set("conditions_fit", org.littoral.scenarios.sensitivity.TimingExplanation.json(in.explanation()));
+            TableWriter.writeCsv(org.littoral.scenarios.sensitivity.TimingExplanation.table(in.explanation()),
+                    dir.resolve("conditions-fit.csv"));
+        }
+        TableWriter.writeJsonValue(sj, summary);
         Path html = dir.resolve("report.html");
         Table flagsView = flagsView(spec, check);
         Table envelopeView = envelopeView(spec, in);
@@ -402,6 +409,9 @@ final class CheckTimingOutputs {
             h.table("Speed implied by the observed passages between neighbouring sites, with its range from the timing "
                     + "uncertainties (highest: empty when the time difference is within the uncertainties).",
                     pt.decimals("implied speed (m/s)", 2).decimals("lowest (m/s)", 2).decimals("highest (m/s)", 2));
+        }
+        if (in.explanation() != null) {
+            org.littoral.scenarios.sensitivity.TimingExplanation.addSection(h, in.explanation());
         }
         if (!in.notes().isEmpty()) {
             h.section("Notes");

@@ -179,9 +179,15 @@ public final class CheckTimingRun {
         if (so.failed() > 0) {
             notes.add(so.failed() + " ensemble member(s) failed (first: " + firstError + "); they are left out of the envelope");
         }
+        org.littoral.scenarios.sensitivity.ConditionsFit.Fit explanation;
+        try {
+            explanation = org.littoral.scenarios.sensitivity.TimingExplanation.explain(spec, members, store, obs.passages());
+        } catch (RuntimeException e) {
+            explanation = org.littoral.scenarios.sensitivity.TimingExplanation.failed("the fit failed: " + e.getMessage());
+        }
         double wall = (System.nanoTime() - t0) / 1e9;
         CheckTimingOutputs.Inputs in = new CheckTimingOutputs.Inputs(spec, passagesFile, obs, modelName, xM, arrivals, onsets,
-                envelopes, check, speed, notes, so, wall);
+                envelopes, check, speed, notes, so, wall, explanation);
         return CheckTimingOutputs.write(dir, in);
     }
 
