@@ -10,6 +10,7 @@ import org.littoral.scenarios.sweep.SweepExecutor;
 import org.littoral.scenarios.timing.DayFile;
 import org.littoral.scenarios.timing.DaySpec;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -54,6 +55,9 @@ public final class InfluenceCommand implements Callable<Integer> {
     @Option(names = "--overwrite", description = "Start again in DIR: remove the outputs of an earlier run there first.")
     boolean overwrite;
 
+    @Mixin
+    org.littoral.scenarios.cluster.ClusterOptions cluster;
+
     @Override
     public Integer call() throws Exception {
         DaySpec spec = DayFile.read(day, model);
@@ -64,10 +68,13 @@ public final class InfluenceCommand implements Callable<Integer> {
         }
         InfluenceStudy.Settings s = new InfluenceStudy.Settings(rows, points(points), seed, bootstrap, 0.95);
         int n = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-        OutputFolder folder = OutputFolder.prepare(dir, "influence " + day, resume ? OutputFolder.Mode.RESUME
-                : overwrite ? OutputFolder.Mode.OVERWRITE : OutputFolder.Mode.FRESH, true, System.err);
-        InfluenceStudy.Result r = InfluenceStudy.run(spec, s, dir, SweepExecutor.Options.forCommandLine(n, resume, false),
-                Solver.standard());
+        org.littoral.scenarios.sweep.Placement where = cluster.placement(dir, overwrite);
+        OutputFolder folder = cluster.prepareFolder(dir, "influence " + day, resume, overwrite, System.err);
+        InfluenceStudy.Result r = InfluenceStudy.run(spec, s, dir, SweepExecutor.Options.forCommandLine(n, resume, false)
+                .placed(where, null), Solver.standard());
+        if (r == null) {
+            return 0; // a shard or a submission (--on slurm): the merge step writes the indices
+        }
         InfluenceOutputs.Written w = InfluenceOutputs.write(dir, r, s);
         folder.finish();
         System.out.println("littoral: " + spec.date() + ": " + r.members().size() + " members (" + r.model() + " model): "

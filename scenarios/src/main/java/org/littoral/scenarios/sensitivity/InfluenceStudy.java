@@ -138,6 +138,10 @@ public final class InfluenceStudy {
                 e.baseLabel(), e.base(), e.fixed(), true, axes, null, e.typing());
     }
 
+    /**
+     * Runs the study's members where {@code opt.placement()} says and analyses them; null when this process did not end
+     * with every member's result (one shard of a job array, or a submission).
+     */
     public static Result run(DaySpec spec, Settings s, Path dir, SweepExecutor.Options opt, Solver solver) throws IOException {
         long t0 = System.nanoTime();
         List<Input> inputs = inputs(spec);
@@ -156,11 +160,17 @@ public final class InfluenceStudy {
             WorkEstimate w = WorkEstimate.of(runner.scenarioOf(m));
             largest = largest == null || w.runBytes() > largest.runBytes() ? w : largest;
         }
-        largest.check(Math.min(opt.threads(), members.size()), "day file " + spec.source());
+        int here = opt.placement().concurrentHere(opt.threads());
+        if (here > 0) {
+            largest.check(Math.min(here, members.size()), "day file " + spec.source());
+        }
         Files.createDirectories(dir);
         opt.log().println("influence: " + inputs.size() + " uncertain inputs, N = " + s.rows() + " rows: " + members.size()
                 + " members, " + spec.model() + " model, " + opt.threads() + " thread(s)");
-        SweepExecutor.Outcome so = SweepExecutor.run(sweep, members, dir, runner, opt);
+        SweepExecutor.Outcome so = SweepExecutor.run(sweep, members, dir, runner, opt.placed(opt.placement(), largest));
+        if (!so.complete()) {
+            return null; // one shard, or a submission to a batch system: the merge step analyses the members
+        }
         return analyse(spec, s, inputs, design, members, dir, so, (System.nanoTime() - t0) / 1e9);
     }
 
