@@ -134,15 +134,17 @@ final class CheckTimingOutputs {
             for (double v : e) {
                 arrived += Double.isNaN(v) ? 0 : 1;
             }
+            // the passage the envelope is compared with: the first at the site (TimingCheck.envelopeFor)
             TimingCheck.PassageAssessment pa = null;
             for (TimingCheck.PassageAssessment a : in.check().passages()) {
-                if (a.passage().site().equals(site.name()) && a.passage().label().equals("sea_breeze")) {
+                if (a.passage().site().equals(site.name()) && a.envelopeMembers() > 0) {
                     pa = a;
                 }
             }
+            String paLabel = pa == null ? "sea_breeze" : pa.passage().label();
             List<String> kinds = new ArrayList<>();
             for (TimingFlag f : in.check().flags()) {
-                if (f.site().equals(site.name()) && f.label().equals("sea_breeze")) {
+                if (f.site().equals(site.name()) && f.label().equals(paLabel)) {
                     kinds.add(flagName(f.kind()));
                 }
             }
@@ -185,15 +187,17 @@ final class CheckTimingOutputs {
                     earliest = Double.isNaN(earliest) ? v : Math.min(earliest, v);
                 }
             }
+            // the passage the envelope is compared with: the first at the site (TimingCheck.envelopeFor)
             TimingCheck.PassageAssessment pa = null;
             for (TimingCheck.PassageAssessment a : in.check().passages()) {
-                if (a.passage().site().equals(site.name()) && a.passage().label().equals("sea_breeze")) {
+                if (a.passage().site().equals(site.name()) && a.envelopeMembers() > 0) {
                     pa = a;
                 }
             }
+            String paLabel = pa == null ? "sea_breeze" : pa.passage().label();
             List<String> kinds = new ArrayList<>();
             for (TimingFlag f : in.check().flags()) {
-                if (f.site().equals(site.name()) && f.label().equals("sea_breeze")) {
+                if (f.site().equals(site.name()) && f.label().equals(paLabel)) {
                     kinds.add(f.kind().name());
                 }
             }

@@ -172,6 +172,14 @@ public final class CheckTimingRun {
             }
         }
         TimingCheck.Result check = new TimingCheck(settings).check(dc, obs.passages(), flights, envelopes);
+        for (TimingInputs.ObservedPassage p : obs.passages()) {
+            if (!TimingCheck.firstAtSite(p, obs.passages())) {
+                notes.add(String.format(java.util.Locale.ROOT, "%s %s at %s is a later passage at that site (after an earlier one "
+                        + "the same day): not compared with the envelope, whose times are the model's first front arrival "
+                        + "there (docs/fronts.md); the density-current and flight checks still apply", p.label().replace('_', ' '),
+                        TimingCheck.clock(p.timeHours()), p.site()));
+            }
+        }
         double[] speed = DensityCurrent.plausibleSpeedRangeMPerS(spec.conditions().thetaVContrastK(),
                 spec.conditions().contrastUncertaintyK(), spec.conditions().thetaVK(), spec.conditions().breezeDepthM(),
                 spec.conditions().depthUncertaintyM(), spec.conditions().totalDepthM(), spec.conditions().crossShoreWindMPerS(),

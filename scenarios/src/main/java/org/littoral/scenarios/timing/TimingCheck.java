@@ -57,7 +57,7 @@ public final class TimingCheck {
                 settings.retardationMin);
 
         for (ObservedPassage p : observed) {
-            double[] env = envelopeFor(envelopes, p);
+            double[] env = envelopeFor(envelopes, p, observed);
             double pct = Double.NaN;
             double never = Double.NaN;
             if (env != null) {
@@ -145,7 +145,7 @@ public final class TimingCheck {
         }
 
         for (ObservedPassage p : observed) {
-            TimingFlag f = oneCadenceOff(p, observed, flightHours.get(p.site()), envelopeFor(envelopes, p), speed);
+            TimingFlag f = oneCadenceOff(p, observed, flightHours.get(p.site()), envelopeFor(envelopes, p, observed), speed);
             if (f != null) {
                 flags.add(f);
             }
@@ -240,13 +240,33 @@ public final class TimingCheck {
         return best;
     }
 
-    private static double[] envelopeFor(List<ArrivalEnvelope> envelopes, ObservedPassage p) {
+    /**
+     * The envelope a passage is compared with. The model's arrival at a site is the first time its front gets there
+     * (docs/fronts.md), so only the first observed passage of the day at that site has a counterpart, whatever its
+     * label: at a site behind a bay the first is the bay breeze, and a sea breeze after it is a second passage the
+     * model's one leading edge does not hold. Later passages get no envelope (null); the density-current and flight
+     * checks still apply to them.
+     */
+    private static double[] envelopeFor(List<ArrivalEnvelope> envelopes, ObservedPassage p, List<ObservedPassage> observed) {
+        if (!firstAtSite(p, observed)) {
+            return null;
+        }
         for (ArrivalEnvelope e : envelopes) {
-            if (e.site().equals(p.site()) && e.label().equals(p.label()) && e.arrivalHours().length > 0) {
+            if (e.site().equals(p.site()) && e.arrivalHours().length > 0) {
                 return e.arrivalHours();
             }
         }
         return null;
+    }
+
+    /** True when no other observed passage at the same site on the same day is earlier. */
+    public static boolean firstAtSite(ObservedPassage p, List<ObservedPassage> observed) {
+        for (ObservedPassage o : observed) {
+            if (o != p && o.day().equals(p.day()) && o.site().equals(p.site()) && o.timeHours() < p.timeHours()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Mid-rank percentile of t among the members (a member that never arrives counts as later than any time). */

@@ -187,4 +187,27 @@ class TimingCheckTest {
         }
         assertTrue(pairs >= 20);
     }
+
+    @Test
+    void onlyTheFirstPassageAtASiteIsComparedWithTheFirstArrivalEnvelope() {
+        // a bay breeze at 09:30 then a sea breeze at 12:00 at the coastal site; the model's arrival (docs/fronts.md) is the
+        // first front there, centred on 09:30: the bay breeze is within it, the later sea breeze has no counterpart
+        double inland = Math.round(inlandTime(12.0) * 4) / 4.0;
+        List<ObservedPassage> obs = List.of(
+                new ObservedPassage("d1", "coast", COASTAL_M, "bay_breeze", 9.5, 0.125),
+                new ObservedPassage("d1", "coast", COASTAL_M, "sea_breeze", 12.0, 0.125),
+                new ObservedPassage("d1", "inland", INLAND_M, "sea_breeze", inland, 0.125));
+        List<ArrivalEnvelope> env = List.of(
+                new ArrivalEnvelope("coast", "sea_breeze", envelope(9.5, 0.4, 1)),
+                new ArrivalEnvelope("inland", "sea_breeze", envelope(inland, 0.4, 2)));
+        TimingCheck.Result r = new TimingCheck(new TimingInputs.Settings()).check(DAY, obs,
+                Map.of("coast", flightsEvery15Min(), "inland", flightsEvery15Min()), env);
+        assertTrue(r.flags().stream().noneMatch(f -> f.kind() == TimingFlag.Kind.OUTSIDE_ENVELOPE), r.flags().toString());
+        assertTrue(r.passages().get(0).envelopeMembers() > 0, "the bay breeze, first at the site, is compared");
+        assertEquals(0, r.passages().get(1).envelopeMembers(), "the later sea breeze is not");
+        // the same sea breeze alone at the site (no bay breeze before it) is compared, and falls outside
+        TimingCheck.Result alone = new TimingCheck(new TimingInputs.Settings()).check(DAY, obs.subList(1, 3),
+                Map.of("coast", flightsEvery15Min(), "inland", flightsEvery15Min()), env);
+        assertTrue(alone.flagged(TimingFlag.Kind.OUTSIDE_ENVELOPE, "coast"), alone.flags().toString());
+    }
 }
