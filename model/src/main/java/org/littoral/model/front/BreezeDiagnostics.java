@@ -1,5 +1,7 @@
 package org.littoral.model.front;
 
+import org.littoral.model.grid.Bracket;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.littoral.model.field.Background;
@@ -117,7 +119,7 @@ public final class BreezeDiagnostics {
         while (bn < nt - 1 && fs.clockH[bn] != peak.timeH()) {
             bn++;
         }
-        int bi = FieldSections.bracket(fs.xM, peak.xM());
+        int bi = Bracket.index(fs.xM, peak.xM());
         if (fs.xM[bi + 1] == peak.xM()) {
             bi++;
         }
@@ -152,7 +154,7 @@ public final class BreezeDiagnostics {
 
     /** A near-surface section (u' or total u, [time][x]) along the output times at position x (linear in x). */
     static double[] seriesAt(double[][] section, FieldSections fs, double x) {
-        int i = FieldSections.bracket(fs.xM, x);
+        int i = Bracket.index(fs.xM, x);
         double w = Math.max(0, Math.min(1, (x - fs.xM[i]) / (fs.xM[i + 1] - fs.xM[i])));
         double[] out = new double[fs.clockH.length];
         for (int n = 0; n < out.length; n++) {
@@ -175,7 +177,7 @@ public final class BreezeDiagnostics {
     public static Circulation circulation(Snapshot s, double[] xM, double[] zM, double[] ambientU, double clockH, double peakXM,
                                           double nearSurfaceM) {
         int nx = xM.length;
-        int i = FieldSections.bracket(xM, peakXM);
+        int i = Bracket.index(xM, peakXM);
         if (Math.abs(xM[i + 1] - peakXM) < Math.abs(xM[i] - peakXM)) {
             i++;
         }
@@ -184,7 +186,7 @@ public final class BreezeDiagnostics {
         for (int k = 0; k < nz; k++) {
             u[k] = s.uMPerS()[k * nx + i] - ambientU[k];
         }
-        int kStart = FieldSections.bracket(zM, nearSurfaceM);
+        int kStart = Bracket.index(zM, nearSurfaceM);
         double depth = Double.NaN;
         int kCross = -1;
         for (int k = kStart + 1; k < nz; k++) {

@@ -1,5 +1,7 @@
 package org.littoral.model.front;
 
+import org.littoral.model.grid.Bracket;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.littoral.model.coast.Coast;
@@ -113,13 +115,13 @@ public final class FieldSections {
         int nz = zM.length;
         FieldSections fs = new FieldSections(toArray(keepClock), toArray(keepModel), xM, zM, nearSurfaceM, siteXM.length, dropped);
         Background bg = sol.background();
-        int k0 = bracket(zM, nearSurfaceM);
+        int k0 = Bracket.index(zM, nearSurfaceM);
         double wz = Math.max(0, Math.min(1, (nearSurfaceM - zM[k0]) / (zM[k0 + 1] - zM[k0])));
         double ambientNear = Background.interpolate(bg.zM(), bg.ambientUMPerS(), nearSurfaceM);
         int[] col = new int[siteXM.length];
         double[] wx = new double[siteXM.length];
         for (int s = 0; s < siteXM.length; s++) {
-            col[s] = bracket(xM, siteXM[s]);
+            col[s] = Bracket.index(xM, siteXM[s]);
             wx[s] = Math.max(0, Math.min(1, (siteXM[s] - xM[col[s]]) / (xM[col[s] + 1] - xM[col[s]])));
         }
         double[] uBg = new double[nz];
@@ -220,26 +222,6 @@ public final class FieldSections {
             }
         }
         return fs;
-    }
-
-    static int bracket(double[] a, double v) {
-        if (v <= a[0]) {
-            return 0;
-        }
-        if (v >= a[a.length - 1]) {
-            return a.length - 2;
-        }
-        int lo = 0;
-        int hi = a.length - 1;
-        while (hi - lo > 1) {
-            int mid = (lo + hi) >>> 1;
-            if (a[mid] <= v) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
     }
 
     private static double[] toArray(List<Double> l) {

@@ -1,5 +1,7 @@
 package org.littoral.model.sounding;
 
+import org.littoral.model.grid.Bracket;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -72,9 +74,9 @@ public final class SoundingSampler {
         binBackgroundPressurePa = new double[nb];
         Background bg = solution.background();
         for (int b = 0; b < nb; b++) {
-            int k = bracket(zM, binZ[b]);
+            int k = Bracket.index(zM, binZ[b]);
             binLevel[b] = k;
-            binLevelWeight[b] = weight(zM, k, binZ[b]);
+            binLevelWeight[b] = Bracket.upperWeight(zM, k, binZ[b]);
             // hydrostatic pressure is close to exponential in z: interpolate its logarithm
             double w = binLevelWeight[b];
             binBackgroundPressurePa[b] = Math.exp((1 - w) * Math.log(bg.pressurePa()[k]) + w * Math.log(bg.pressurePa()[k + 1]));
@@ -88,36 +90,9 @@ public final class SoundingSampler {
                 throw new IllegalArgumentException("site '" + site.name() + "' at " + x / 1000.0 + " km inland is outside the model domain "
                         + xM[0] / 1000.0 + " to " + xM[nx - 1] / 1000.0 + " km; move the site or widen the domain");
             }
-            siteColumn[s] = bracket(xM, x);
-            siteColumnWeight[s] = weight(xM, siteColumn[s], x);
+            siteColumn[s] = Bracket.index(xM, x);
+            siteColumnWeight[s] = Bracket.upperWeight(xM, siteColumn[s], x);
         }
-    }
-
-    /** Index k with a[k] &lt;= v &lt;= a[k+1], clamped to [0, n-2]. */
-    private static int bracket(double[] a, double v) {
-        int lo = 0;
-        int hi = a.length - 1;
-        if (v <= a[0]) {
-            return 0;
-        }
-        if (v >= a[hi]) {
-            return hi - 1;
-        }
-        while (hi - lo > 1) {
-            int mid = (lo + hi) >>> 1;
-            if (a[mid] <= v) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
-    }
-
-    /** Linear weight of a[k+1], clamped to [0, 1] (values below the first level take the first level). */
-    private static double weight(double[] a, int k, double v) {
-        double w = (v - a[k]) / (a[k + 1] - a[k]);
-        return Math.max(0.0, Math.min(1.0, w));
     }
 
     /** Model time (s of local solar time since solar midnight of day 0) of a local clock time on the spec's day. */

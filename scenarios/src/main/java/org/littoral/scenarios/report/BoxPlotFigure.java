@@ -152,10 +152,7 @@ public final class BoxPlotFigure extends Figure {
     }
 
     /** Builder: 900 x 600 px, Tukey hinges, means shown. */
-    public static final class Builder {
-        private int width = 900;
-        private int height = 600;
-        private String title = "";
+    public static final class Builder extends FigureBuilder<Builder> {
         private final AxisSpec ys = new AxisSpec();
         private String xTitle = "";
         private final List<String> labels = new ArrayList<>();
@@ -165,17 +162,6 @@ public final class BoxPlotFigure extends Figure {
         private String note;
 
         private Builder() {
-        }
-
-        public Builder size(int widthPx, int heightPx) {
-            width = widthPx;
-            height = heightPx;
-            return this;
-        }
-
-        public Builder title(String t) {
-            title = t;
-            return this;
         }
 
         public Builder y(String label, String unit) {

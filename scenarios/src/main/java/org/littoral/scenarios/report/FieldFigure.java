@@ -548,10 +548,7 @@ public final class FieldFigure extends Figure {
     }
 
     /** Builder with sensible defaults: 900 x 600 px, sequential colours, no contours. */
-    public static final class Builder {
-        private int width = 900;
-        private int height = 600;
-        private String title = "";
+    public static final class Builder extends FigureBuilder<Builder> {
         private double[] x;
         private double[] y;
         private double[][] v;
@@ -573,17 +570,6 @@ public final class FieldFigure extends Figure {
         private String note;
 
         private Builder() {
-        }
-
-        public Builder size(int widthPx, int heightPx) {
-            width = widthPx;
-            height = heightPx;
-            return this;
-        }
-
-        public Builder title(String t) {
-            title = t;
-            return this;
         }
 
         /** Grid-point x coordinates (strictly increasing, may be uneven), axis label and unit. */

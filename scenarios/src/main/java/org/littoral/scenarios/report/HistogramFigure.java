@@ -242,10 +242,7 @@ public final class HistogramFigure extends Figure {
     }
 
     /** Builder: 900 x 600 px, counts, Freedman-Diaconis bins. */
-    public static final class Builder {
-        private int width = 900;
-        private int height = 600;
-        private String title = "";
+    public static final class Builder extends FigureBuilder<Builder> {
         private final AxisSpec xs = new AxisSpec();
         private final List<String> names = new ArrayList<>();
         private final List<double[]> data = new ArrayList<>();
@@ -255,17 +252,6 @@ public final class HistogramFigure extends Figure {
         private String note;
 
         private Builder() {
-        }
-
-        public Builder size(int widthPx, int heightPx) {
-            width = widthPx;
-            height = heightPx;
-            return this;
-        }
-
-        public Builder title(String t) {
-            title = t;
-            return this;
         }
 
         public Builder x(String label, String unit) {

@@ -405,10 +405,7 @@ public class LineFigure extends Figure {
     }
 
     /** Builder: 900 x 600 px, x range tight to the data, y range rounded out to nice ticks. */
-    public static class Builder {
-        int width = 900;
-        int height = 600;
-        String title = "";
+    public static class Builder extends FigureBuilder<Builder> {
         final AxisSpec xs = new AxisSpec();
         final AxisSpec ys = new AxisSpec();
         boolean xLoose = false;
@@ -418,17 +415,6 @@ public class LineFigure extends Figure {
         String note;
 
         Builder() {
-        }
-
-        public Builder size(int widthPx, int heightPx) {
-            width = widthPx;
-            height = heightPx;
-            return this;
-        }
-
-        public Builder title(String t) {
-            title = t;
-            return this;
         }
 
         public Builder x(String label, String unit) {
