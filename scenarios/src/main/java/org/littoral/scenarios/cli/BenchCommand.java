@@ -29,6 +29,7 @@ public final class BenchCommand implements Callable<Integer> {
         m.put("linear", new LinearBenchmark());
         m.put("plan", new org.littoral.scenarios.plan.PlanBenchmark());
         m.put("check-timing", new org.littoral.scenarios.timing.TimingBenchmark());
+        m.put("sensitivity", new org.littoral.scenarios.sensitivity.InfluenceBenchmark());
         m.put("gradual-turns", new org.littoral.scenarios.demo.GradualTurnSkill());
         m.put("input-fuzz", new InputFuzzBenchmark());
         m.put("memory-estimate", new MemoryEstimateBenchmark());
