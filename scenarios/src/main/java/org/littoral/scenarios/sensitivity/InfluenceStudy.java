@@ -260,6 +260,11 @@ public final class InfluenceStudy {
                 yab[i] = java.util.Arrays.copyOfRange(y, (2 + i) * n, (3 + i) * n);
             }
             SobolIndices.Result res = SobolIndices.estimate(ya, yb, yab, s.resamples(), s.level(), s.seed() ^ (k + 1L));
+            if (key.startsWith("theta_v_change:") && res.rowsUsed() < 8) {
+                notes.add("the post-passage change at " + site + " is left out: only " + res.rowsUsed() + " of " + n + " rows "
+                        + "have it in every block (at least 8 needed)");
+                continue;
+            }
             if (key.startsWith("arrival:")) {
                 frac = mean(v[ns + keys.indexOf(key)]);
             }

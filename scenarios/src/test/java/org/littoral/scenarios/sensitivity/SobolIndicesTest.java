@@ -64,4 +64,16 @@ class SobolIndicesTest {
         SobolIndices.Result r = SobolIndices.estimate(c, c, new double[][] {c}, 10, 0.95, 1);
         assertTrue(Double.isNaN(r.indices()[0].first()));
     }
+
+    @Test
+    void addingALargeConstantToTheOutputLeavesTheIndicesAlone() {
+        // an arrival time near 10 h that varies by minutes: the indices of f + 10 must be those of f
+        SampleDesign d = SampleDesign.of(SampleDesign.Points.SOBOL, 256, 3, 0);
+        SobolIndices.Result a = ReferenceFunctions.study(u -> 0.05 * ReferenceFunctions.ishigami(u, 7, 0.1), d, 0, 1);
+        SobolIndices.Result b = ReferenceFunctions.study(u -> 10 + 0.05 * ReferenceFunctions.ishigami(u, 7, 0.1), d, 0, 1);
+        for (int i = 0; i < 3; i++) {
+            assertEquals(a.indices()[i].first(), b.indices()[i].first(), 1e-9);
+            assertEquals(a.indices()[i].total(), b.indices()[i].total(), 1e-9);
+        }
+    }
 }
